@@ -1,0 +1,65 @@
+import { NavLink, Outlet, useNavigation } from 'react-router';
+
+const NAV = [
+  { to: '/', label: 'Home', end: true },
+  { to: '/tanks', label: 'My tanks' },
+  { to: '/desk', label: 'Mentor desk' },
+  { to: '/club', label: 'Club' },
+];
+
+function Brand() {
+  return (
+    <NavLink to="/" className="flex items-center gap-2 font-extrabold text-white">
+      <img src="/favicon.svg" alt="" className="size-8" />
+      <span className="text-lg">Shoalwise</span>
+    </NavLink>
+  );
+}
+
+export function AppShell() {
+  const navigation = useNavigation();
+  return (
+    <div className="min-h-dvh">
+      <header className="bg-tide-800">
+        <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
+          <Brand />
+          <nav aria-label="Main" className="hidden gap-1 sm:flex">
+            {NAV.map((item) => (
+              <NavLink
+                key={item.to}
+                to={item.to}
+                end={item.end}
+                className={({ isActive }) =>
+                  `rounded-full px-3 py-2 text-sm font-bold ${isActive ? 'bg-tide-600 text-white' : 'text-tide-100 hover:bg-tide-700'}`
+                }
+              >
+                {item.label}
+              </NavLink>
+            ))}
+          </nav>
+        </div>
+        {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-tide-300" aria-hidden /> : null}
+      </header>
+      <main className="mx-auto max-w-5xl px-4 pt-6 pb-24 sm:pb-10">
+        <Outlet />
+      </main>
+      <nav
+        aria-label="Main (mobile)"
+        className="fixed inset-x-0 bottom-0 grid grid-cols-4 border-t border-tide-100 bg-white sm:hidden"
+      >
+        {NAV.map((item) => (
+          <NavLink
+            key={item.to}
+            to={item.to}
+            end={item.end}
+            className={({ isActive }) =>
+              `flex min-h-14 items-center justify-center text-xs font-bold ${isActive ? 'text-tide-700' : 'text-tide-400'}`
+            }
+          >
+            {item.label}
+          </NavLink>
+        ))}
+      </nav>
+    </div>
+  );
+}

@@ -1,0 +1,50 @@
+import { createServer, type Server } from 'node:http';
+import type { AddressInfo } from 'node:net';
+import pg from 'pg';
+import type { Logger } from 'pino';
+import type { DataSource } from 'typeorm';
+import { createApp } from './app';
+import type { Config } from './config/env';
+import { openDataSource } from './db/data-source';
+import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
+import { createLogger } from './lib/logger';
+
+export interface RunningServer {
+  url: string;
+  server: Server;
+  dataSource: DataSource;
+  logger: Logger;
+  close(): Promise<void>;
+}
+
+/** Opens the database, builds the app and listens. Used by server/index.ts and by tests that need a real port. */
+export async function startServer(config: Config): Promise<RunningServer> {
+  const logger = createLogger(config);
+  const dataSource = await openDataSource(config.databaseUrl, logger);
+  const sessionPool = guardPool(
+    new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 5 }),
+    logger,
+    'sessions',
+  );
+  const { app } = createApp({ config, dataSource, sessionPool, logger });
+  const server = createServer(app);
+  await new Promise<void>((resolve, reject) => {
+    server.once('error', reject);
+    server.listen(config.port, config.host, () => resolve());
+  });
+  const { port } = server.address() as AddressInfo;
+
+  let closing: Promise<void> | undefined;
+  const close = () =>
+    (closing ??= (async () => {
+      await new Promise<void>((resolve) => {
+        server.close(() => resolve());
+        server.closeIdleConnections();
+        setTimeout(() => server.closeAllConnections(), 5_000).unref();
+      });
+      await sessionPool.end().catch(() => undefined);
+      await dataSource.destroy().catch(() => undefined);
+    })());
+
+  return { url: `http://${config.host}:${port}`, server, dataSource, logger, close };
+}

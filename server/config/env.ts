@@ -1,0 +1,61 @@
+import { z } from 'zod';
+
+const port = (fallback: number) => z.coerce.number().int().min(0).max(65535).default(fallback);
+
+const envSchema = z.object({
+  NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
+  HOST: z.string().min(1).default('127.0.0.1'),
+  PORT: port(3000),
+  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).default('postgres://shoalwise@127.0.0.1:5487/shoalwise'),
+  PUBLIC_BASE_URL: z.url().optional(),
+  SESSION_SECRET: z.string().min(32).optional(),
+  LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
+  SMTP_HOST: z.string().optional(),
+  SMTP_PORT: port(0),
+  MAIL_FROM: z.string().default('Shoalwise <no-reply@shoalwise.invalid>'),
+});
+
+export type Env = z.infer<typeof envSchema>;
+
+export interface Config {
+  env: Env['NODE_ENV'];
+  isProduction: boolean;
+  host: string;
+  port: number;
+  databaseUrl: string;
+  baseUrl: string;
+  sessionSecret: string;
+  logLevel: Env['LOG_LEVEL'];
+  smtp: { host: string | undefined; port: number };
+  mailFrom: string;
+}
+
+export class ConfigError extends Error {
+  override name = 'ConfigError';
+}
+
+/** Reads the environment once. Throws a ConfigError whose message names each bad variable on one line. */
+export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
+  const parsed = envSchema.safeParse(source);
+  if (!parsed.success) {
+    const problems = parsed.error.issues.map((i) => `${i.path.join('.')}: ${i.message}`).join('; ');
+    throw new ConfigError(`Bad configuration: ${problems}`);
+  }
+  const e = parsed.data;
+  const isProduction = e.NODE_ENV === 'production';
+  if (isProduction && !e.SESSION_SECRET) throw new ConfigError('Bad configuration: SESSION_SECRET is required in production');
+  if (isProduction && !e.PUBLIC_BASE_URL) throw new ConfigError('Bad configuration: PUBLIC_BASE_URL is required in production');
+  return {
+    env: e.NODE_ENV,
+    isProduction,
+    host: e.HOST,
+    port: e.PORT,
+    databaseUrl: e.DATABASE_URL,
+    baseUrl: (e.PUBLIC_BASE_URL ?? `http://127.0.0.1:${e.PORT}`).replace(/\/$/, ''),
+    // Development and tests get a fixed secret so sessions survive restarts; production must set one.
+    sessionSecret: e.SESSION_SECRET ?? 'development-only-secret-not-for-production-use',
+    logLevel: e.NODE_ENV === 'test' && !source.LOG_LEVEL ? 'silent' : e.LOG_LEVEL,
+    smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT },
+    mailFrom: e.MAIL_FROM,
+  };
+}

@@ -1,0 +1,2 @@
+/** Every TypeORM entity, listed explicitly. */
+export const entities: Function[] = [];

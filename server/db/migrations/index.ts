@@ -1,0 +1,4 @@
+import { CreateSessionStore1764626000000 } from './1764626000000-create-session-store';
+
+/** Every migration in the order it must run. Never edit a migration once it has landed: add a new one. */
+export const migrations = [CreateSessionStore1764626000000];

@@ -1,0 +1,38 @@
+import pg from 'pg';
+import type { Express } from 'express';
+import type { DataSource } from 'typeorm';
+import { inject } from 'vitest';
+import { createApp } from '../../server/app';
+import { loadConfig, type Config } from '../../server/config/env';
+import { openDataSource } from '../../server/db/data-source';
+import { guardPool, POOL_DEFAULTS } from '../../server/db/pool-errors';
+import { createLogger } from '../../server/lib/logger';
+
+export interface TestApp {
+  app: Express;
+  dataSource: DataSource;
+  config: Config;
+  close(): Promise<void>;
+}
+
+export function testConfig(overrides: Record<string, string> = {}): Config {
+  return loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), PORT: '0', ...overrides });
+}
+
+/** The real app on the real test database, without a port. */
+export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
+  const config = testConfig(overrides);
+  const logger = createLogger(config);
+  const dataSource = await openDataSource(config.databaseUrl, logger);
+  const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
+  const { app } = createApp({ config, dataSource, sessionPool, logger });
+  return {
+    app,
+    dataSource,
+    config,
+    async close() {
+      await sessionPool.end().catch(() => undefined);
+      if (dataSource.isInitialized) await dataSource.destroy();
+    },
+  };
+}

@@ -1,0 +1,22 @@
+import { describe, expect, it } from 'vitest';
+import { ConfigError, loadConfig } from '../../../server/config/env';
+
+describe('loadConfig', () => {
+  it('when PORT is not a number, then the message names PORT', () => {
+    expect(() => loadConfig({ PORT: 'abc' })).toThrow(ConfigError);
+    expect(() => loadConfig({ PORT: 'abc' })).toThrow(/PORT/);
+  });
+
+  it('when DATABASE_URL is not a postgres URL, then the message names DATABASE_URL', () => {
+    expect(() => loadConfig({ DATABASE_URL: 'mysql://x@y/z' })).toThrow(/DATABASE_URL/);
+  });
+
+  it('when nothing is set, then it serves 127.0.0.1:3000 with a base URL to match', () => {
+    const c = loadConfig({});
+    expect(c).toMatchObject({ host: '127.0.0.1', port: 3000, baseUrl: 'http://127.0.0.1:3000', isProduction: false });
+  });
+
+  it('when production lacks a session secret, then it refuses to start', () => {
+    expect(() => loadConfig({ NODE_ENV: 'production', PUBLIC_BASE_URL: 'https://club.example' })).toThrow(/SESSION_SECRET/);
+  });
+});
