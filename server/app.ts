@@ -7,18 +7,32 @@ import { pinoHttp } from 'pino-http';
 import type { DataSource } from 'typeorm';
 import type { Config } from './config/env';
 import { securityHeaders } from './config/security-headers';
+import { createSessionMiddleware } from './config/session';
+import type { Mailer } from './mail/mailer';
+import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/errors';
+import { attachViewer } from './middleware/viewer';
+import { authRouter } from './modules/auth/auth.router';
+import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
+import { inviteRouter } from './modules/invites/invite.router';
+import { outboxRouter } from './modules/mail/outbox.router';
+import { assignmentRouter } from './modules/mentorship/assignment.router';
 
 export interface AppDeps {
   config: Config;
   dataSource: DataSource;
   sessionPool: Pool;
   logger: Logger;
+  mailer: Mailer;
 }
 
 export interface CreatedApp {
   app: Express;
+  /** The same session middleware, for socket.io's engine. */
+  sessionMiddleware: RequestHandler;
+  /** The API router; every module router is mounted on it at '/', so route paths are whole (the route table reads them). */
+  api: express.Router;
 }
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
@@ -39,20 +53,29 @@ function serveClient(app: Express): void {
 
 /** Builds the Express app without listening, so tests can mount it directly. */
 export function createApp(deps: AppDeps): CreatedApp {
-  const { config, dataSource, logger } = deps;
+  const { config, dataSource, logger, mailer } = deps;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
   app.use(pinoHttp({ logger, autoLogging: config.env !== 'test' }));
   app.use(securityHeaders(config.isProduction));
-  app.use(express.json({ limit: '200kb' }));
 
+  const { middleware: sessionMiddleware } = createSessionMiddleware(config, deps.sessionPool);
   const api = express.Router();
+  api.use(express.json({ limit: '200kb' }));
   api.use(healthRouter(dataSource));
+  api.use(sessionMiddleware);
+  api.use(csrfProtection);
+  api.use(attachViewer(dataSource));
+  api.use(authRouter({ dataSource, mailer, config }));
+  api.use(clubRouter({ dataSource }));
+  api.use(inviteRouter({ dataSource, mailer, config }));
+  api.use(assignmentRouter({ dataSource }));
+  if (!config.isProduction) app.use(outboxRouter({ dataSource }));
   api.use(apiNotFound);
   app.use('/api', api);
 
   serveClient(app);
   app.use(errorHandler({ exposeStack: config.env === 'development' }));
-  return { app };
+  return { app, sessionMiddleware, api };
 }

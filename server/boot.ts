@@ -8,6 +8,7 @@ import type { Config } from './config/env';
 import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
+import { startMail } from './mail/start-mail';
 
 export interface RunningServer {
   url: string;
@@ -26,7 +27,8 @@ export async function startServer(config: Config): Promise<RunningServer> {
     logger,
     'sessions',
   );
-  const { app } = createApp({ config, dataSource, sessionPool, logger });
+  const mail = await startMail(config, dataSource, logger);
+  const { app } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
   const server = createServer(app);
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
@@ -42,6 +44,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         server.closeIdleConnections();
         setTimeout(() => server.closeAllConnections(), 5_000).unref();
       });
+      await mail.close().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);
       await dataSource.destroy().catch(() => undefined);
     })());

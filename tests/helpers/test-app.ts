@@ -7,11 +7,13 @@ import { loadConfig, type Config } from '../../server/config/env';
 import { openDataSource } from '../../server/db/data-source';
 import { guardPool, POOL_DEFAULTS } from '../../server/db/pool-errors';
 import { createLogger } from '../../server/lib/logger';
+import { startMail, type MailInfrastructure } from '../../server/mail/start-mail';
 
 export interface TestApp {
   app: Express;
   dataSource: DataSource;
   config: Config;
+  mail: MailInfrastructure;
   close(): Promise<void>;
 }
 
@@ -25,12 +27,15 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const logger = createLogger(config);
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
-  const { app } = createApp({ config, dataSource, sessionPool, logger });
+  const mail = await startMail(config, dataSource, logger, 0.5);
+  const { app } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
   return {
     app,
     dataSource,
     config,
+    mail,
     async close() {
+      await mail.close().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);
       if (dataSource.isInitialized) await dataSource.destroy();
     },

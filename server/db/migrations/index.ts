@@ -1,4 +1,5 @@
 import { CreateSessionStore1764626000000 } from './1764626000000-create-session-store';
+import { AccountsClubsRoles1764627000000 } from './1764627000000-accounts-clubs-roles';
 
 /** Every migration in the order it must run. Never edit a migration once it has landed: add a new one. */
-export const migrations = [CreateSessionStore1764626000000];
+export const migrations = [CreateSessionStore1764626000000, AccountsClubsRoles1764627000000];

@@ -1,6 +1,42 @@
 import type { DataSource } from 'typeorm';
+import { hashPassword } from '../../lib/passwords';
+import { Club } from '../../modules/clubs/club.entity';
+import { Membership } from '../../modules/clubs/membership.entity';
+import { MentorAssignment } from '../../modules/mentorship/mentor-assignment.entity';
+import { User } from '../../modules/users/user.entity';
+import { DEMO_CLUBS, DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people';
 
-/** Seeds the invented demo club once; running it again changes nothing. */
-export async function seedDemoClub(_dataSource: DataSource): Promise<{ created: boolean }> {
-  return { created: false };
+/** Seeds the invented demo clubs once; running it again changes nothing. */
+export async function seedDemoClub(dataSource: DataSource): Promise<{ created: boolean }> {
+  return dataSource.transaction(async (tx) => {
+    // One seeder at a time, even if two starts race.
+    await tx.query(`SELECT pg_advisory_xact_lock(hashtext('shoalwise-demo-seed'))`);
+    if (await tx.existsBy(Club, { slug: DEMO_CLUBS[0].slug })) return { created: false };
+    const passwordHash = await hashPassword(DEMO_PASSWORD);
+    const clubs = new Map<string, Club>();
+    for (const c of DEMO_CLUBS) clubs.set(c.slug, await tx.save(tx.create(Club, { ...c })));
+    const users = new Map<string, User>();
+    for (const p of DEMO_PEOPLE) {
+      const user = await tx.save(
+        tx.create(User, { email: p.email, displayName: p.displayName, experienceLevel: p.experienceLevel, passwordHash, timeZone: 'Europe/London', disabledAt: null }),
+      );
+      users.set(p.email, user);
+      for (const [slug, role] of Object.entries(p.roles)) {
+        await tx.insert(Membership, { clubId: clubs.get(slug)!.id, userId: user.id, role, status: 'active', mentorCapacity: role === 'member' ? null : 4 });
+      }
+    }
+    for (const p of DEMO_PEOPLE) {
+      for (const [slug, mentorEmail] of Object.entries(p.mentoredBy ?? {})) {
+        await tx.insert(MentorAssignment, {
+          clubId: clubs.get(slug)!.id,
+          mentorId: users.get(mentorEmail)!.id,
+          menteeId: users.get(p.email)!.id,
+          startedAt: new Date(),
+          endedAt: null,
+          createdById: users.get(DEMO_PEOPLE[0]!.email)!.id,
+        });
+      }
+    }
+    return { created: true };
+  });
 }

@@ -1,0 +1,59 @@
+import nodemailer, { type Transporter } from 'nodemailer';
+import PgBoss from 'pg-boss';
+import type { Logger } from 'pino';
+import type { RenderedMail } from './templates';
+
+export interface OutgoingMail extends RenderedMail {
+  to: string;
+}
+
+export interface Mailer {
+  /** Queues a message; it is sent in the background and retried while SMTP is down. */
+  enqueue(mail: OutgoingMail): Promise<void>;
+  stop(): Promise<void>;
+}
+
+const QUEUE = 'mail-send';
+
+export interface MailerOptions {
+  databaseUrl: string;
+  smtpHost: string;
+  smtpPort: number;
+  from: string;
+  logger: Logger;
+  pollingIntervalSeconds?: number;
+}
+
+/** Mail through a pg-boss queue on our own PostgreSQL, delivered by nodemailer. */
+export async function startMailer(options: MailerOptions): Promise<Mailer> {
+  const transport: Transporter = nodemailer.createTransport({
+    host: options.smtpHost,
+    port: options.smtpPort,
+    secure: false,
+    ignoreTLS: options.smtpHost === '127.0.0.1',
+    connectionTimeout: 5_000,
+  });
+  const boss = new PgBoss({ connectionString: options.databaseUrl, max: 3, application_name: 'shoalwise-mail' });
+  boss.on('error', (err: Error) => options.logger.warn({ err: err.message }, 'mail queue error'));
+  await boss.start();
+  await boss.createQueue(QUEUE);
+  await boss.work<OutgoingMail>(
+    QUEUE,
+    { pollingIntervalSeconds: options.pollingIntervalSeconds ?? 1, batchSize: 1 },
+    async (jobs) => {
+      for (const job of jobs) {
+        const m = job.data;
+        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html });
+      }
+    },
+  );
+  return {
+    async enqueue(mail) {
+      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: 5, retryBackoff: true });
+    },
+    async stop() {
+      await boss.stop({ graceful: true, timeout: 5_000, wait: true });
+      transport.close();
+    },
+  };
+}

@@ -1,0 +1,13 @@
+import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn } from 'typeorm';
+
+/** A message caught by the development/test SMTP server (never used in production). */
+@Entity({ name: 'captured_mail' })
+export class CapturedMail {
+  @PrimaryGeneratedColumn('uuid') id!: string;
+  @Column({ type: 'text' }) fromAddress!: string;
+  @Column({ type: 'text' }) toAddress!: string;
+  @Column({ type: 'text' }) subject!: string;
+  @Column({ type: 'text', default: '' }) text!: string;
+  @Column({ type: 'text', default: '' }) html!: string;
+  @CreateDateColumn({ type: 'timestamptz' }) receivedAt!: Date;
+}

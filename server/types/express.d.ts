@@ -1,0 +1,11 @@
+import type { AppAbility } from '../../shared/abilities';
+import type { ViewerContext } from '../middleware/viewer';
+
+declare global {
+  namespace Express {
+    interface Request {
+      viewer?: ViewerContext;
+    }
+  }
+}
+export {};

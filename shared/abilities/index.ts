@@ -1,0 +1,2 @@
+export * from './define-abilities';
+export * from './subjects';

@@ -1,0 +1,40 @@
+/** What the permission rules talk about. Field names match the entities' properties (and the SQL field map). */
+export interface ClubSubject { id: string }
+export interface MembershipSubject { id?: string; clubId: string; userId: string }
+export interface InviteSubject { id?: string; clubId: string }
+export interface MentorAssignmentSubject { id?: string; clubId: string; mentorId: string; menteeId: string }
+export interface UserSubject { id: string }
+/** Tanks and everything logged on them carry the tank's club and owner. */
+export interface OwnedInClub { clubId: string; ownerId: string }
+export interface QuestionSubject { clubId: string; askerId: string }
+export interface MeetupSubject { clubId: string }
+export interface CareProfileSubject { clubId: string | null }
+export interface AuditEventSubject { clubId: string | null }
+
+export interface SubjectMap {
+  Club: ClubSubject;
+  Membership: MembershipSubject;
+  Invite: InviteSubject;
+  MentorAssignment: MentorAssignmentSubject;
+  User: UserSubject;
+  Tank: OwnedInClub;
+  WaterTest: OwnedInClub;
+  TankEvent: OwnedInClub;
+  Photo: OwnedInClub;
+  Concern: OwnedInClub;
+  Question: QuestionSubject;
+  Meetup: MeetupSubject;
+  CareProfile: CareProfileSubject;
+  AuditEvent: AuditEventSubject;
+}
+
+export type SubjectType = keyof SubjectMap;
+export const SUBJECT_TYPES = [
+  'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
+  'Question', 'Meetup', 'CareProfile', 'AuditEvent',
+] as const satisfies readonly SubjectType[];
+
+export const ACTIONS = [
+  'manage', 'create', 'read', 'update', 'delete', 'answer', 'acknowledge', 'resolve', 'signOff', 'rsvp',
+] as const;
+export type Action = (typeof ACTIONS)[number];

@@ -1,0 +1,62 @@
+import type { Express } from 'express';
+import request from 'supertest';
+import { TEST_PASSWORD } from './factories';
+
+type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
+
+/** A browser-like client: keeps its cookie, fetches the CSRF token and sends it on unsafe requests. */
+export class Client {
+  private cookie: string[] = [];
+  private csrf: string | undefined;
+  constructor(private readonly app: Express) {}
+
+  get cookies(): string[] {
+    return this.cookie;
+  }
+  set cookies(value: string[]) {
+    this.cookie = value;
+    this.csrf = undefined;
+  }
+
+  private remember(res: request.Response) {
+    const set = res.headers['set-cookie'] as unknown as string[] | undefined;
+    if (set?.length) this.cookie = set.map((c) => c.split(';')[0]!);
+  }
+
+  async csrfToken(): Promise<string> {
+    if (!this.csrf) {
+      const res = await request(this.app).get('/api/csrf').set('Cookie', this.cookie);
+      this.remember(res);
+      this.csrf = res.body.token as string;
+    }
+    return this.csrf;
+  }
+
+  async send(method: Method, path: string, body?: unknown, opts: { csrf?: boolean } = {}): Promise<request.Response> {
+    const unsafe = method !== 'get';
+    const token = unsafe && opts.csrf !== false ? await this.csrfToken() : undefined;
+    let req = request(this.app)[method](path).set('Cookie', this.cookie);
+    if (token) req = req.set('X-CSRF-Token', token);
+    const res = body === undefined ? await req : await req.send(body as object);
+    this.remember(res);
+    if (res.body?.csrfToken) this.csrf = res.body.csrfToken as string;
+    return res;
+  }
+
+  get = (path: string) => this.send('get', path);
+  post = (path: string, body?: unknown) => this.send('post', path, body);
+  patch = (path: string, body?: unknown) => this.send('patch', path, body);
+  put = (path: string, body?: unknown) => this.send('put', path, body);
+  delete = (path: string) => this.send('delete', path);
+
+  async signIn(email: string, password = TEST_PASSWORD): Promise<request.Response> {
+    return this.post('/api/session', { email, password });
+  }
+}
+
+export async function signedIn(app: Express, email: string, password = TEST_PASSWORD): Promise<Client> {
+  const c = new Client(app);
+  const res = await c.signIn(email, password);
+  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  return c;
+}
