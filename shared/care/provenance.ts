@@ -3,7 +3,7 @@
  * not re-read in the source for this code: treat it as needing a check against the original.
  */
 export type Provenance =
-  | { kind: 'published'; citation: string; fromMemory?: boolean; note?: string }
+  | { kind: 'published'; citation: string; short?: string; fromMemory?: boolean; note?: string }
   | { kind: 'common-practice'; note?: string };
 
 export const COMMON_PRACTICE: Provenance = { kind: 'common-practice' };
@@ -26,6 +26,7 @@ export const SOURCES = {
    */
   epa1976RedBook: {
     kind: 'published',
+    short: 'US EPA 1976',
     citation:
       'US EPA (1976), Quality Criteria for Water (the "Red Book"), Washington DC: 0.02 mg/L un-ionized ammonia (NH3) for freshwater aquatic life',
     fromMemory: true,
@@ -34,6 +35,7 @@ export const SOURCES = {
   /** Title and number checked; the tentative 0.025 mg/L NH3 limit inside it is recalled. */
   eifac1970: {
     kind: 'published',
+    short: 'EIFAC 1970',
     citation:
       'EIFAC (1970), Water quality criteria for European freshwater fish: report on ammonia and inland fisheries, EIFAC Technical Paper 11, FAO Rome: about 0.025 mg/L NH3',
     fromMemory: true,
@@ -41,6 +43,7 @@ export const SOURCES = {
   /** Natural seawater near salinity 35 holds ~412 mg/kg calcium and ~1284 mg/kg magnesium (recalled). */
   millero2008: {
     kind: 'published',
+    short: 'Millero et al. 2008',
     citation:
       'Millero, Feistel, Wright & McDougall (2008), The composition of Standard Seawater and the definition of the Reference-Composition Salinity Scale, Deep-Sea Research I 55: 50–72',
     fromMemory: true,

@@ -4,7 +4,9 @@ import { toMs } from './time';
 
 /** Oldest first; ties broken by id so shuffled input always gives the same order. */
 export function sortByTakenAt(tests: readonly WaterTestInput[]): WaterTestInput[] {
-  return [...tests].sort((a, b) => toMs(a.takenAt) - toMs(b.takenAt) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0));
+  return [...tests].sort(
+    (a, b) => toMs(a.takenAt) - toMs(b.takenAt) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0),
+  );
 }
 
 export interface KnownValue {

@@ -25,6 +25,8 @@ export interface Concern {
   nextSteps: string[];
   value?: number;
   unit?: string;
+  /** The water changes behind a "change N litres" step, as planned by the chemistry engine. */
+  waterChanges?: { litres: number; fraction: number; resulting: number }[];
 }
 
 export interface TankContext {

@@ -18,7 +18,14 @@ export const AMMONIA_SALINITY_RANGE = { min: 0, max: 45 } as const;
  * pKa = 0.09018 + 2729.92 / T, T in kelvin.
  */
 export function freshwaterAmmoniumPKa(tempC: number): number {
-  const t = requireInRange('tempC', tempC, FRESHWATER_TEMP_RANGE_C.min, FRESHWATER_TEMP_RANGE_C.max, '°C', 'Emerson et al. 1975');
+  const t = requireInRange(
+    'tempC',
+    tempC,
+    FRESHWATER_TEMP_RANGE_C.min,
+    FRESHWATER_TEMP_RANGE_C.max,
+    '°C',
+    'Emerson et al. 1975',
+  );
   return 0.09018 + 2729.92 / (t + ZERO_CELSIUS_IN_KELVIN);
 }
 
@@ -27,7 +34,13 @@ export function freshwaterAmmoniumPKa(tempC: number): number {
  * I = 19.9273 S / (1000 − 1.005109 S)  (gives I = 0.701 mol/kg at S = 34).
  */
 export function ionicStrengthFromSalinity(salinity: number): number {
-  const s = requireInRange('salinity', salinity, AMMONIA_SALINITY_RANGE.min, AMMONIA_SALINITY_RANGE.max, '(practical salinity)');
+  const s = requireInRange(
+    'salinity',
+    salinity,
+    AMMONIA_SALINITY_RANGE.min,
+    AMMONIA_SALINITY_RANGE.max,
+    '(practical salinity)',
+  );
   return (19.9273 * s) / (1000 - 1.005109 * s);
 }
 
@@ -39,7 +52,14 @@ export function ionicStrengthFromSalinity(salinity: number): number {
  * with t in °C and I from ionicStrengthFromSalinity. pH is on the NBS (glass electrode) scale.
  */
 export function seawaterAmmoniumPKa(tempC: number, salinity: number): number {
-  const t = requireInRange('tempC', tempC, SEAWATER_TEMP_RANGE_C.min, SEAWATER_TEMP_RANGE_C.max, '°C', 'Khoo et al. 1977 salt correction');
+  const t = requireInRange(
+    'tempC',
+    tempC,
+    SEAWATER_TEMP_RANGE_C.min,
+    SEAWATER_TEMP_RANGE_C.max,
+    '°C',
+    'Khoo et al. 1977 salt correction',
+  );
   const ionicStrength = ionicStrengthFromSalinity(salinity);
   return freshwaterAmmoniumPKa(t) + (0.1552 - 0.0003142 * t) * ionicStrength;
 }
@@ -55,7 +75,13 @@ export interface UnionizedAmmoniaInput {
 export function unionizedAmmoniaFraction(input: UnionizedAmmoniaInput): number {
   const { tempC, pH, salinity = 0 } = requireObject('input', input) as Partial<UnionizedAmmoniaInput>;
   const ph = requireInRange('pH', pH, 0, 14);
-  const s = requireInRange('salinity', salinity, AMMONIA_SALINITY_RANGE.min, AMMONIA_SALINITY_RANGE.max, '(practical salinity)');
+  const s = requireInRange(
+    'salinity',
+    salinity,
+    AMMONIA_SALINITY_RANGE.min,
+    AMMONIA_SALINITY_RANGE.max,
+    '(practical salinity)',
+  );
   const pKa = s === 0 ? freshwaterAmmoniumPKa(tempC as number) : seawaterAmmoniumPKa(tempC as number, s);
   return 1 / (1 + 10 ** (pKa - ph));
 }
@@ -81,7 +107,13 @@ const NITROGEN_FRACTION: Record<AmmoniaBasis, number> = {
 
 /** Un-ionized (toxic) ammonia from a total-ammonia test-kit reading. */
 export function freeAmmonia(input: FreeAmmoniaInput): FreeAmmonia {
-  const { total, basis, tempC, pH, salinity = 0 } = requireObject('input', input) as Partial<FreeAmmoniaInput>;
+  const {
+    total,
+    basis,
+    tempC,
+    pH,
+    salinity = 0,
+  } = requireObject('input', input) as Partial<FreeAmmoniaInput>;
   const reading = requireNonNegative('total', total, 'mg/L');
   const kitBasis = requireOneOf('basis', basis, AMMONIA_BASES);
   const fraction = unionizedAmmoniaFraction({ tempC: tempC as number, pH: pH as number, salinity });

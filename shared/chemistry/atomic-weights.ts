@@ -1,3 +1,5 @@
+import { requireNonNegative, requireObject, requireOneOf } from './validate';
+
 // Single source of truth for atomic weights and the molar masses built from them.
 // Values: IUPAC/CIAAW abridged standard atomic weights (conventional values for elements whose
 // standard atomic weight is an interval), Prohaska et al. 2022, "Standard atomic weights of the
@@ -17,12 +19,14 @@ export const ATOMIC_WEIGHTS = {
 } as const;
 
 export type Element = keyof typeof ATOMIC_WEIGHTS;
+export const ELEMENTS = Object.keys(ATOMIC_WEIGHTS) as Element[];
 
 /** Molar mass in g/mol of a formula given as element counts, e.g. { N: 1, O: 3 } for nitrate. */
 export function molarMassOf(formula: Partial<Record<Element, number>>): number {
   let total = 0;
-  for (const [element, count] of Object.entries(formula) as [Element, number][]) {
-    total += ATOMIC_WEIGHTS[element] * count;
+  for (const [key, count] of Object.entries(requireObject('formula', formula))) {
+    const element = requireOneOf('formula element', key, ELEMENTS);
+    total += ATOMIC_WEIGHTS[element] * requireNonNegative(`formula.${element}`, count, 'atoms');
   }
   return total;
 }

@@ -16,7 +16,9 @@ function formatUnit(unit: string | undefined): string {
 
 export function requireFinite(name: string, value: unknown, unit?: string): number {
   if (typeof value !== 'number' || !Number.isFinite(value)) {
-    throw new RangeError(`${name} must be a finite number${unit ? ` in ${unit}` : ''}; got ${describe(value)}`);
+    throw new RangeError(
+      `${name} must be a finite number${unit ? ` in ${unit}` : ''}; got ${describe(value)}`,
+    );
   }
   return value;
 }
@@ -70,7 +72,9 @@ export function requireInteger(name: string, value: unknown, min: number, max: n
 
 export function requireOneOf<T extends string>(name: string, value: unknown, allowed: readonly T[]): T {
   if (typeof value !== 'string' || !(allowed as readonly string[]).includes(value)) {
-    throw new RangeError(`${name} must be one of ${allowed.map((a) => `'${a}'`).join(', ')}; got ${describe(value)}`);
+    throw new RangeError(
+      `${name} must be one of ${allowed.map((a) => `'${a}'`).join(', ')}; got ${describe(value)}`,
+    );
   }
   return value as T;
 }

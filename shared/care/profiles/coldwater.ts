@@ -18,5 +18,9 @@ export const COLDWATER_PROFILE: CareProfile = {
     alkalinity: range('alkalinity', [4, 10], [2, 14]),
     freeAmmonia: FREE_AMMONIA_RANGE,
   },
-  cadences: { cycling: CYCLING_CADENCE_FRESH, established: ESTABLISHED_CADENCE_FRESH, provenance: COMMON_PRACTICE },
+  cadences: {
+    cycling: CYCLING_CADENCE_FRESH,
+    established: ESTABLISHED_CADENCE_FRESH,
+    provenance: COMMON_PRACTICE,
+  },
 };

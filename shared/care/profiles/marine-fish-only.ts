@@ -20,5 +20,9 @@ export const MARINE_FISH_ONLY_PROFILE: CareProfile = {
     alkalinity: range('alkalinity', [7, 11], [6, 13]),
     freeAmmonia: FREE_AMMONIA_RANGE,
   },
-  cadences: { cycling: CYCLING_CADENCE_SALT, established: ESTABLISHED_CADENCE_SALT, provenance: COMMON_PRACTICE },
+  cadences: {
+    cycling: CYCLING_CADENCE_SALT,
+    established: ESTABLISHED_CADENCE_SALT,
+    provenance: COMMON_PRACTICE,
+  },
 };

@@ -18,7 +18,12 @@ export const REEF_PROFILE: CareProfile = {
     nitrite: range('nitrite', [0, 0], [0, 0.2]),
     nitrate: range('nitrate', [0, 10], [0, 25], COMMON_PRACTICE, { target: 5 }),
     alkalinity: range('alkalinity', [7, 11], [6, 12]),
-    calcium: range('calcium', [380, 450], [350, 500], commonPractice('Set around natural sea water, ~412 mg/kg.')),
+    calcium: range(
+      'calcium',
+      [380, 450],
+      [350, 500],
+      commonPractice('Set around natural sea water, ~412 mg/kg.'),
+    ),
     magnesium: range(
       'magnesium',
       [1250, 1400],

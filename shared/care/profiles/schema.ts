@@ -6,6 +6,7 @@ const provenanceSchema = z.discriminatedUnion('kind', [
   z.object({
     kind: z.literal('published'),
     citation: z.string().min(1),
+    short: z.string().optional(),
     fromMemory: z.boolean().optional(),
     note: z.string().optional(),
   }),
@@ -47,7 +48,11 @@ export const careProfileSchema = z
     ranges: z.partialRecord(anyParameterKeySchema, rangeSchema),
     cadences: z.object({ cycling: cadenceSchema, established: cadenceSchema, provenance: provenanceSchema }),
     readinessNotes: z
-      .object({ food: z.string().optional(), quarantine: z.string().optional(), equipment: z.string().optional() })
+      .object({
+        food: z.string().optional(),
+        quarantine: z.string().optional(),
+        equipment: z.string().optional(),
+      })
       .optional(),
   })
   .superRefine((profile, ctx) => {

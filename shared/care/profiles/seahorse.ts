@@ -4,14 +4,15 @@ import type { CareProfile, ParameterRange } from './types';
 
 // Every band here is common practice, no source. Seahorses are kept with far less nitrate than
 // fish-only tanks, and nothing measurable of ammonia or nitrite.
-const SHARED_SEAHORSE_RANGES: Partial<Record<'salinity' | 'pH' | 'ammonia' | 'nitrite' | 'nitrate', ParameterRange>> =
-  {
-    salinity: range('salinity', [31, 35], [29, 36]),
-    pH: range('pH', [8.0, 8.4], [7.8, 8.6]),
-    ammonia: range('ammonia', [0, 0], [0, 0.1]),
-    nitrite: range('nitrite', [0, 0], [0, 0.1]),
-    nitrate: range('nitrate', [0, 10], [0, 20], COMMON_PRACTICE, { target: 5 }),
-  };
+const SHARED_SEAHORSE_RANGES: Partial<
+  Record<'salinity' | 'pH' | 'ammonia' | 'nitrite' | 'nitrate', ParameterRange>
+> = {
+  salinity: range('salinity', [31, 35], [29, 36]),
+  pH: range('pH', [8.0, 8.4], [7.8, 8.6]),
+  ammonia: range('ammonia', [0, 0], [0, 0.1]),
+  nitrite: range('nitrite', [0, 0], [0, 0.1]),
+  nitrate: range('nitrate', [0, 10], [0, 20], COMMON_PRACTICE, { target: 5 }),
+};
 
 const SEAHORSE_READINESS = {
   food: 'Seahorses eat frozen or live foods (such as mysis or copepods), not flakes, and need feeding several times a day.',
@@ -60,7 +61,14 @@ export const SEAHORSE_DWARF_PROFILE: CareProfile = {
   },
   cadences: {
     cycling: CYCLING_CADENCE_SALT,
-    established: { ...ESTABLISHED_CADENCE_SALT, ammonia: 3, nitrite: 3, nitrate: 3, temperature: 3, salinity: 3 },
+    established: {
+      ...ESTABLISHED_CADENCE_SALT,
+      ammonia: 3,
+      nitrite: 3,
+      nitrate: 3,
+      temperature: 3,
+      salinity: 3,
+    },
     provenance: COMMON_PRACTICE,
   },
   readinessNotes: {

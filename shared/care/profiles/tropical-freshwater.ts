@@ -20,5 +20,9 @@ export const TROPICAL_FRESHWATER_PROFILE: CareProfile = {
     alkalinity: range('alkalinity', [3, 8], [2, 12]),
     freeAmmonia: FREE_AMMONIA_RANGE,
   },
-  cadences: { cycling: CYCLING_CADENCE_FRESH, established: ESTABLISHED_CADENCE_FRESH, provenance: COMMON_PRACTICE },
+  cadences: {
+    cycling: CYCLING_CADENCE_FRESH,
+    established: ESTABLISHED_CADENCE_FRESH,
+    provenance: COMMON_PRACTICE,
+  },
 };
