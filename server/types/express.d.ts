@@ -1,4 +1,3 @@
-import type { AppAbility } from '../../shared/abilities';
 import type { ViewerContext } from '../middleware/viewer';
 
 declare global {

@@ -1,5 +1,5 @@
 import pg from 'pg';
-import type { Express } from 'express';
+import type { Express, Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { inject } from 'vitest';
 import { createApp } from '../../server/app';
@@ -11,6 +11,7 @@ import { startMail, type MailInfrastructure } from '../../server/mail/start-mail
 
 export interface TestApp {
   app: Express;
+  api: Router;
   dataSource: DataSource;
   config: Config;
   mail: MailInfrastructure;
@@ -28,9 +29,10 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
   const mail = await startMail(config, dataSource, logger, 0.5);
-  const { app } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
+  const { app, api } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
   return {
     app,
+    api,
     dataSource,
     config,
     mail,

@@ -1,0 +1,88 @@
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { resetDatabase } from '../../helpers/db';
+import { Client, signedIn } from '../../helpers/http';
+import { listRoutes } from '../../helpers/route-table';
+import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { buildWorld, PERSONAS, type Persona, type World } from './world';
+
+/**
+ * The authorization matrix (ASVS 8.2.1, 8.2.2, 8.4.1): every API route × every kind of person.
+ * Each cell is the exact status expected. A route served by the app without a row here fails the first test.
+ */
+type Expect = Record<Persona, number>;
+interface Row {
+  route: string;
+  request: (w: World) => { path: string; body?: unknown };
+  expect: Expect;
+}
+
+const all = (status: number): Expect => Object.fromEntries(PERSONAS.map((p) => [p, status])) as Expect;
+const signedInOnly = (status: number): Expect => ({ ...all(status), anonymous: 401 });
+/** Any active member of the club; another club's member sees nothing (404); a suspended member is told why (403). */
+const clubMembers = (status: number): Expect => ({ anonymous: 401, outsider: 404, member: status, mentor: status, otherMentor: status, admin: status, suspended: 403 });
+const adminsOnly = (status: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: 403, otherMentor: 403, admin: status, suspended: 403 });
+
+const ROWS: Row[] = [
+  { route: 'GET /health', request: () => ({ path: '/health' }), expect: all(200) },
+  { route: 'GET /csrf', request: () => ({ path: '/csrf' }), expect: all(200) },
+  { route: 'POST /session', request: () => ({ path: '/session', body: { email: 'nobody@test.example', password: 'wrong password' } }), expect: all(401) },
+  { route: 'DELETE /session', request: () => ({ path: '/session' }), expect: all(204) },
+  { route: 'GET /me', request: () => ({ path: '/me' }), expect: signedInOnly(200) },
+  { route: 'PATCH /me', request: () => ({ path: '/me', body: { temperatureUnit: 'F' } }), expect: signedInOnly(200) },
+  { route: 'POST /password-resets', request: (w) => ({ path: '/password-resets', body: { email: `nobody-${w.club.id.slice(0, 8)}@test.example` } }), expect: all(202) },
+  { route: 'POST /password-resets/confirm', request: () => ({ path: '/password-resets/confirm', body: { token: 'x'.repeat(43), password: 'a fine new password' } }), expect: all(404) },
+  { route: 'GET /invites/:token', request: () => ({ path: `/invites/${'y'.repeat(43)}` }), expect: all(404) },
+  { route: 'POST /invites/accept', request: () => ({ path: '/invites/accept', body: { token: 'z'.repeat(43) } }), expect: all(404) },
+  { route: 'GET /clubs/:clubId', request: (w) => ({ path: `/clubs/${w.club.id}` }), expect: clubMembers(200) },
+  { route: 'GET /clubs/:clubId/members', request: (w) => ({ path: `/clubs/${w.club.id}/members` }), expect: clubMembers(200) },
+  {
+    route: 'PATCH /clubs/:clubId/members/:membershipId',
+    request: (w) => ({ path: `/clubs/${w.club.id}/members/${w.people.member.membership.id}`, body: { role: 'mentor' } }),
+    expect: adminsOnly(200),
+  },
+  { route: 'GET /clubs/:clubId/invites', request: (w) => ({ path: `/clubs/${w.club.id}/invites` }), expect: adminsOnly(200) },
+  { route: 'POST /clubs/:clubId/invites', request: (w) => ({ path: `/clubs/${w.club.id}/invites`, body: { email: 'fresh@test.example', role: 'member' } }), expect: adminsOnly(201) },
+  { route: 'POST /clubs/:clubId/invites/:inviteId/resend', request: (w) => ({ path: `/clubs/${w.club.id}/invites/${w.invite.id}/resend` }), expect: adminsOnly(200) },
+  { route: 'DELETE /clubs/:clubId/invites/:inviteId', request: (w) => ({ path: `/clubs/${w.club.id}/invites/${w.invite.id}` }), expect: adminsOnly(204) },
+  { route: 'GET /clubs/:clubId/mentor-assignments', request: (w) => ({ path: `/clubs/${w.club.id}/mentor-assignments` }), expect: clubMembers(200) },
+  {
+    route: 'POST /clubs/:clubId/mentor-assignments',
+    request: (w) => ({ path: `/clubs/${w.club.id}/mentor-assignments`, body: { mentorId: w.people.mentor.user.id, menteeId: w.spare.user.id } }),
+    expect: adminsOnly(201),
+  },
+  {
+    route: 'POST /clubs/:clubId/mentor-assignments/:assignmentId/end',
+    request: (w) => ({ path: `/clubs/${w.club.id}/mentor-assignments/${w.assignment.id}/end` }),
+    expect: adminsOnly(200),
+  },
+];
+
+describe('authorization matrix', () => {
+  let t: TestApp;
+  beforeAll(async () => {
+    t = await createTestApp();
+  });
+  afterAll(() => t.close());
+
+  it('when the app serves a route, then the matrix has a row for it (and no row names a route that does not exist)', () => {
+    expect(ROWS.map((r) => r.route).sort()).toEqual(listRoutes(t.api));
+  });
+
+  for (const row of ROWS) {
+    it(`${row.route}: ${PERSONAS.map((p) => `${p} ${row.expect[p]}`).join(', ')}`, async () => {
+      const outcome: Partial<Record<Persona, number>> = {};
+      for (const persona of PERSONAS) {
+        await resetDatabase(t.dataSource);
+        const world = await buildWorld(t.dataSource);
+        const client = persona === 'anonymous' ? new Client(t.app) : await signedIn(t.app, world.people[persona].user.email);
+        const { path, body } = row.request(world);
+        const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+        const res = await client.send(method, `/api${path}`, body);
+        outcome[persona] = res.status;
+        // Another club's request never succeeds on this club's objects.
+        if (persona === 'outsider' && path.includes(world.club.id)) expect(res.status).toBeGreaterThanOrEqual(400);
+      }
+      expect(outcome).toEqual(row.expect);
+    });
+  }
+});
