@@ -1,19 +1,49 @@
 import type { QueryClient } from '@tanstack/react-query';
-import { createBrowserRouter } from 'react-router';
-import { AppShell } from '../components/layouts/app-shell';
+import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { RouteError } from '../components/errors/route-error';
+import { PublicLayout } from '../components/layouts/public-layout';
 import { FullPageSpinner } from '../components/ui/spinner';
+import { meQuery } from '../features/auth/api/me';
+import { SignedInLayout } from './signed-in-layout';
 
-export function createRouter(_queryClient: QueryClient) {
+/** Signed-in pages: the loader makes sure /me is known and sends visitors to sign in first. */
+const requireSession = (qc: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
+  const me = await qc.fetchQuery(meQuery());
+  if (!me) {
+    const url = new URL(request.url);
+    throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
+  }
+  return null;
+};
+
+export function createRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
-      path: '/',
-      element: <AppShell />,
       errorElement: <RouteError />,
       HydrateFallback: FullPageSpinner,
       children: [
-        { index: true, lazy: () => import('./routes/home') },
-        { path: '*', lazy: () => import('./routes/not-found') },
+        {
+          element: <PublicLayout />,
+          children: [
+            { path: '/sign-in', lazy: () => import('./routes/sign-in') },
+            { path: '/forgot-password', lazy: () => import('./routes/forgot-password') },
+            { path: '/reset-password', lazy: () => import('./routes/reset-password') },
+            { path: '/invites/accept', lazy: () => import('./routes/accept-invite') },
+          ],
+        },
+        {
+          path: '/',
+          element: <SignedInLayout />,
+          loader: requireSession(queryClient),
+          children: [
+            { index: true, lazy: () => import('./routes/home') },
+            { path: 'profile', lazy: () => import('./routes/profile') },
+            { path: 'club', lazy: () => import('./routes/club') },
+            { path: 'tanks', lazy: () => import('./routes/coming-soon') },
+            { path: 'desk', lazy: () => import('./routes/coming-soon') },
+            { path: '*', lazy: () => import('./routes/not-found') },
+          ],
+        },
       ],
     },
   ]);

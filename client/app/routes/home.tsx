@@ -1,14 +1,23 @@
+import { ROLE_LABELS } from '../../../shared/constants/roles';
+import { Card, Notice } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
+import { useSession } from '../../features/auth/components/session-provider';
 
 export function Component() {
+  const { me, activeClub } = useSession();
+  const first = me.user.displayName.split(' ')[0];
   return (
     <>
-      <PageHeader title="Welcome to Shoalwise" subtitle="Your club's tanks, water tests and mentors in one place." />
-      <section className="rounded-card bg-white p-5 shadow-card">
-        <p className="text-tide-800">
-          Log your water tests, watch your tank through the nitrogen cycle, and let your mentor spot trouble early.
-        </p>
-      </section>
+      <PageHeader title={`Hello, ${first}`} subtitle={activeClub ? `${activeClub.clubName} · ${ROLE_LABELS[activeClub.role]}` : undefined} />
+      {!activeClub ? (
+        <Notice tone="warning">You are not an active member of any club right now. Ask a club admin for an invitation.</Notice>
+      ) : (
+        <Card>
+          <p className="text-tide-800">
+            Log your water tests, watch your tank through the nitrogen cycle, and let your mentor spot trouble early.
+          </p>
+        </Card>
+      )}
     </>
   );
 }

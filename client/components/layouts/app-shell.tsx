@@ -1,11 +1,11 @@
+import type { ReactNode } from 'react';
 import { NavLink, Outlet, useNavigation } from 'react-router';
 
-const NAV = [
-  { to: '/', label: 'Home', end: true },
-  { to: '/tanks', label: 'My tanks' },
-  { to: '/desk', label: 'Mentor desk' },
-  { to: '/club', label: 'Club' },
-];
+export interface NavItem {
+  to: string;
+  label: string;
+  end?: boolean;
+}
 
 function Brand() {
   return (
@@ -16,7 +16,7 @@ function Brand() {
   );
 }
 
-export function AppShell() {
+export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: ReactNode }) {
   const navigation = useNavigation();
   return (
     <div className="min-h-dvh">
@@ -24,7 +24,7 @@ export function AppShell() {
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
-            {NAV.map((item) => (
+            {nav.map((item) => (
               <NavLink
                 key={item.to}
                 to={item.to}
@@ -37,6 +37,7 @@ export function AppShell() {
               </NavLink>
             ))}
           </nav>
+          {headerEnd}
         </div>
         {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-tide-300" aria-hidden /> : null}
       </header>
@@ -45,9 +46,10 @@ export function AppShell() {
       </main>
       <nav
         aria-label="Main (mobile)"
-        className="fixed inset-x-0 bottom-0 grid grid-cols-4 border-t border-tide-100 bg-white sm:hidden"
+        style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
+        className="fixed inset-x-0 bottom-0 grid border-t border-tide-100 bg-white sm:hidden"
       >
-        {NAV.map((item) => (
+        {nav.map((item) => (
           <NavLink
             key={item.to}
             to={item.to}

@@ -1,0 +1,21 @@
+import { Notice } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { useSession } from '../../features/auth/components/session-provider';
+import { InvitePanel } from '../../features/club/components/invite-panel';
+import { MembersPanel } from '../../features/club/components/members-panel';
+import { asSubject } from '../../../shared/abilities';
+
+export function Component() {
+  const { activeClub, ability } = useSession();
+  if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
+  const isAdmin = ability.can('create', asSubject('Invite', { clubId: activeClub.clubId }));
+  return (
+    <>
+      <PageHeader title={activeClub.clubName} subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'} />
+      <div className="space-y-5">
+        {isAdmin ? <InvitePanel clubId={activeClub.clubId} /> : null}
+        <MembersPanel clubId={activeClub.clubId} isAdmin={isAdmin} />
+      </div>
+    </>
+  );
+}

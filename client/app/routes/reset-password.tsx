@@ -1,0 +1,13 @@
+import { useNavigate, useSearchParams } from 'react-router';
+import { AuthCard } from '../../components/ui/card';
+import { ResetPasswordForm } from '../../features/auth/components/password-reset-forms';
+
+export function Component() {
+  const [params] = useSearchParams();
+  const navigate = useNavigate();
+  return (
+    <AuthCard title="Choose a new password">
+      <ResetPasswordForm token={params.get('token') ?? ''} onDone={() => navigate('/', { replace: true })} />
+    </AuthCard>
+  );
+}

@@ -1,0 +1,28 @@
+import { asSubject } from '../../shared/abilities';
+import { AppShell, type NavItem } from '../components/layouts/app-shell';
+import { FullPageSpinner } from '../components/ui/spinner';
+import { useMe } from '../features/auth/api/me';
+import { SessionProvider, useSession } from '../features/auth/components/session-provider';
+import { UserMenu } from '../features/auth/components/user-menu';
+
+function ShellForSession() {
+  const { activeClub, ability } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const nav: NavItem[] = [
+    { to: '/', label: 'Home', end: true },
+    { to: '/tanks', label: 'My tanks' },
+    ...(activeClub && activeClub.role !== 'member' ? [{ to: '/desk', label: 'Mentor desk' }] : []),
+    ...(activeClub && ability.can('read', asSubject('Club', { id: clubId })) ? [{ to: '/club', label: 'Club' }] : []),
+  ];
+  return <AppShell nav={nav} headerEnd={<UserMenu />} />;
+}
+
+export function SignedInLayout() {
+  const { data: me } = useMe();
+  if (!me) return <FullPageSpinner />;
+  return (
+    <SessionProvider me={me}>
+      <ShellForSession />
+    </SessionProvider>
+  );
+}

@@ -1,0 +1,16 @@
+import { Link, Outlet } from 'react-router';
+
+export function PublicLayout() {
+  return (
+    <div className="min-h-dvh bg-gradient-to-b from-tide-800 to-tide-900 px-4 pb-12">
+      <header className="mx-auto flex max-w-md items-center gap-2 py-6">
+        <Link to="/" className="flex items-center gap-2 text-xl font-extrabold text-white">
+          <img src="/favicon.svg" alt="" className="size-9" /> Shoalwise
+        </Link>
+      </header>
+      <main>
+        <Outlet />
+      </main>
+    </div>
+  );
+}

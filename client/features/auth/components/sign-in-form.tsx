@@ -1,0 +1,41 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import { Link } from 'react-router';
+import type { z } from 'zod';
+import { signInSchema } from '../../../../shared/schemas/auth.schema';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/card';
+import { TextField } from '../../../components/ui/field';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useSignIn } from '../api/mutations';
+
+type Input = z.input<typeof signInSchema>;
+
+export function SignInForm({ onDone }: { onDone: () => void }) {
+  const signIn = useSignIn();
+  const [formError, setFormError] = useState<string>();
+  const { register, handleSubmit, setError, formState } = useForm<Input, unknown, z.output<typeof signInSchema>>({
+    resolver: zodResolver(signInSchema),
+  });
+  const submit = handleSubmit(async (values) => {
+    setFormError(undefined);
+    try {
+      await signIn.mutateAsync(values);
+      onDone();
+    } catch (e) {
+      setFormError(applyServerErrors(e, setError, ['email', 'password']));
+    }
+  });
+  return (
+    <form onSubmit={submit} noValidate className="space-y-4">
+      {formError ? <Notice tone="error">{formError}</Notice> : null}
+      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={formState.errors.email?.message} {...register('email')} />
+      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
+      <Button type="submit" busy={formState.isSubmitting} className="w-full">Sign in</Button>
+      <p className="text-center text-sm">
+        <Link to="/forgot-password" className="font-bold text-tide-700 underline">Forgot your password?</Link>
+      </p>
+    </form>
+  );
+}

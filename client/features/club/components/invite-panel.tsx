@@ -1,0 +1,72 @@
+import { zodResolver } from '@hookform/resolvers/zod';
+import { useState } from 'react';
+import { useForm } from 'react-hook-form';
+import type { z } from 'zod';
+import { ROLE_LABELS, ROLES } from '../../../../shared/constants/roles';
+import { createInviteSchema } from '../../../../shared/schemas/club.schema';
+import { Button } from '../../../components/ui/button';
+import { Card, Notice } from '../../../components/ui/card';
+import { SelectField, TextField } from '../../../components/ui/field';
+import { Spinner } from '../../../components/ui/spinner';
+import { applyServerErrors } from '../../../lib/form-errors';
+import { useInvites, useResendInvite, useRevokeInvite, useSendInvite } from '../api/club';
+
+const dateFmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
+
+export function InvitePanel({ clubId }: { clubId: string }) {
+  const invites = useInvites(clubId, true);
+  const send = useSendInvite(clubId);
+  const resend = useResendInvite(clubId);
+  const revoke = useRevokeInvite(clubId);
+  const [notice, setNotice] = useState<{ tone: 'success' | 'error'; text: string }>();
+  const { register, handleSubmit, setError, reset, formState } = useForm<z.input<typeof createInviteSchema>, unknown, z.output<typeof createInviteSchema>>({
+    resolver: zodResolver(createInviteSchema),
+    defaultValues: { role: 'member' },
+  });
+
+  return (
+    <Card>
+      <h2 className="text-lg font-extrabold text-tide-900">Invite someone</h2>
+      <form noValidate className="mt-3 grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-end" onSubmit={handleSubmit(async (v) => {
+        setNotice(undefined);
+        try {
+          await send.mutateAsync(v);
+          setNotice({ tone: 'success', text: `Invitation sent to ${v.email}.` });
+          reset({ email: '', role: v.role });
+        } catch (e) {
+          const message = applyServerErrors(e, setError, ['email', 'role']);
+          if (message) setNotice({ tone: 'error', text: message });
+        }
+      })}>
+        <TextField label="E-mail" type="email" inputMode="email" error={formState.errors.email?.message} {...register('email')} />
+        <SelectField label="As" options={ROLES.map((r) => ({ value: r, label: ROLE_LABELS[r] }))} {...register('role')} />
+        <Button type="submit" busy={formState.isSubmitting}>Send invite</Button>
+      </form>
+      {notice ? <div className="mt-3"><Notice tone={notice.tone}>{notice.text}</Notice></div> : null}
+
+      <h3 className="mt-6 text-sm font-extrabold uppercase tracking-wide text-tide-600">Waiting for an answer</h3>
+      {invites.isPending ? <Spinner /> : invites.isError ? <Notice tone="error">{invites.error.message}</Notice> : invites.data.invites.length === 0 ? (
+        <p className="mt-2 text-tide-700">No open invitations.</p>
+      ) : (
+        <ul className="mt-2 divide-y divide-tide-100">
+          {invites.data.invites.map((i) => (
+            <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
+              <div>
+                <p className="font-bold text-tide-900">{i.email}</p>
+                <p className="text-sm text-tide-600">
+                  {ROLE_LABELS[i.role]} · {i.state === 'expired' ? 'expired' : `link works until ${dateFmt.format(new Date(i.expiresAt))}`}
+                </p>
+              </div>
+              <div className="flex gap-2">
+                <Button variant="secondary" busy={resend.isPending && resend.variables === i.id} onClick={() => resend.mutate(i.id, { onSuccess: () => setNotice({ tone: 'success', text: `Sent a fresh link to ${i.email}. The old link no longer works.` }) })}>Resend</Button>
+                <Button variant="ghost" onClick={() => {
+                  if (window.confirm(`Withdraw the invitation to ${i.email}? The link in their e-mail will stop working.`)) revoke.mutate(i.id);
+                }}>Withdraw</Button>
+              </div>
+            </li>
+          ))}
+        </ul>
+      )}
+    </Card>
+  );
+}
