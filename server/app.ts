@@ -35,6 +35,8 @@ export interface CreatedApp {
   api: express.Router;
 }
 
+const redactTokens = (url: string) => url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
+
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
 function serveClient(app: Express): void {
@@ -57,7 +59,17 @@ export function createApp(deps: AppDeps): CreatedApp {
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
-  app.use(pinoHttp({ logger, autoLogging: config.env !== 'test' }));
+  app.use(
+    pinoHttp({
+      logger,
+      autoLogging: config.env !== 'test',
+      // Method, path and status only: no headers, cookies or tokens in the logs (ASVS 16.2).
+      serializers: {
+        req: (r: { method: string; url: string }) => ({ method: r.method, url: redactTokens(r.url) }),
+        res: (r: { statusCode: number }) => ({ statusCode: r.statusCode }),
+      },
+    }),
+  );
   app.use(securityHeaders(config.isProduction));
 
   const { middleware: sessionMiddleware } = createSessionMiddleware(config, deps.sessionPool);
