@@ -62,7 +62,7 @@ ensure_gsw() {
 
 # The cluster runs as the invoking user, or as 'postgres' when we are root (PostgreSQL refuses root).
 pg_user_run() {
-  if is_root; then runuser -u postgres -- "$@"; else "$@"; fi
+  if is_root; then (cd / && runuser -u postgres -- "$@"); else "$@"; fi
 }
 
 # Where the cluster's files live. Under .data/ unless the postgres OS user cannot reach it
