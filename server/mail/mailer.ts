@@ -22,6 +22,8 @@ export interface MailerOptions {
   from: string;
   logger: Logger;
   pollingIntervalSeconds?: number;
+  /** First retry delay; pg-boss backs off exponentially from it. */
+  retryDelaySeconds?: number;
 }
 
 /** Mail through a pg-boss queue on our own PostgreSQL, delivered by nodemailer. */
@@ -49,7 +51,7 @@ export async function startMailer(options: MailerOptions): Promise<Mailer> {
   );
   return {
     async enqueue(mail) {
-      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: 5, retryBackoff: true });
+      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: options.retryDelaySeconds ?? 5, retryBackoff: true });
     },
     async stop() {
       await boss.stop({ graceful: true, timeout: 5_000, wait: true });

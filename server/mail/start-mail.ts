@@ -11,7 +11,12 @@ export interface MailInfrastructure {
 }
 
 /** Production sends through SMTP_HOST; development and tests start the local fake SMTP server and use it. */
-export async function startMail(config: Config, dataSource: DataSource, logger: Logger, pollingIntervalSeconds?: number): Promise<MailInfrastructure> {
+export interface MailTiming {
+  pollingIntervalSeconds?: number;
+  retryDelaySeconds?: number;
+}
+
+export async function startMail(config: Config, dataSource: DataSource, logger: Logger, timing: MailTiming = {}): Promise<MailInfrastructure> {
   let fakeSmtp: FakeSmtp | undefined;
   let host = config.smtp.host;
   let port = config.smtp.port;
@@ -21,7 +26,7 @@ export async function startMail(config: Config, dataSource: DataSource, logger: 
     host = '127.0.0.1';
     port = fakeSmtp.port;
   }
-  const mailer = await startMailer({ databaseUrl: config.databaseUrl, smtpHost: host, smtpPort: port, from: config.mailFrom, logger, pollingIntervalSeconds });
+  const mailer = await startMailer({ databaseUrl: config.databaseUrl, smtpHost: host, smtpPort: port, from: config.mailFrom, logger, ...timing });
   return {
     mailer,
     fakeSmtp,

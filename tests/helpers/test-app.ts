@@ -28,7 +28,7 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const logger = createLogger(config);
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
-  const mail = await startMail(config, dataSource, logger, 0.5);
+  const mail = await startMail(config, dataSource, logger, { pollingIntervalSeconds: 0.5, retryDelaySeconds: 1 });
   const { app, api } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
   return {
     app,
