@@ -11,6 +11,8 @@ import { PAST_MENTEE_READ_DAYS, type MembershipStatus, type Role } from '../cons
 import type { Action, SubjectMap, SubjectType } from './subjects';
 
 export type TaggedSubjects = { [K in SubjectType]: K | (SubjectMap[K] & ForcedSubject<K>) }[SubjectType];
+/** A tagged object (not a type name): what per-object checks and `<Can this={…}>` take. */
+export type SubjectInstance = Exclude<TaggedSubjects, string>;
 export type AppAbility = MongoAbility<[Action, TaggedSubjects | 'all']>;
 export type AppRule = RawRuleOf<AppAbility>;
 
@@ -109,8 +111,8 @@ export function defineAbilityFor(viewer: Viewer): AppAbility {
 }
 
 /** Tags a plain object so CASL matches it against the rules of that subject type. */
-export function asSubject<K extends SubjectType>(type: K, object: SubjectMap[K]): TaggedSubjects {
-  return tagSubject(type, { ...object }) as unknown as TaggedSubjects;
+export function asSubject<K extends SubjectType>(type: K, object: SubjectMap[K]): SubjectInstance {
+  return tagSubject(type, { ...object }) as unknown as SubjectInstance;
 }
 
 export type PackedRules = PackRule<AppRule>[];

@@ -1,3 +1,5 @@
+import { Can } from '@casl/react';
+import type { AppAbility } from '../../../shared/abilities';
 import { Notice } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { useSession } from '../../features/auth/components/session-provider';
@@ -13,7 +15,9 @@ export function Component() {
     <>
       <PageHeader title={activeClub.clubName} subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'} />
       <div className="space-y-5">
-        {isAdmin ? <InvitePanel clubId={activeClub.clubId} /> : null}
+        <Can<AppAbility> I="create" this={asSubject('Invite', { clubId: activeClub.clubId })}>
+          <InvitePanel clubId={activeClub.clubId} />
+        </Can>
         <MembersPanel clubId={activeClub.clubId} isAdmin={isAdmin} />
       </div>
     </>
