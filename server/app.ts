@@ -9,6 +9,7 @@ import type { Config } from './config/env';
 import { securityHeaders } from './config/security-headers';
 import { createSessionMiddleware } from './config/session';
 import type { Mailer } from './mail/mailer';
+import type { RealtimeHub } from './realtime/hub';
 import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
@@ -25,6 +26,7 @@ export interface AppDeps {
   sessionPool: Pool;
   logger: Logger;
   mailer: Mailer;
+  hub: RealtimeHub;
 }
 
 export interface CreatedApp {
@@ -55,7 +57,7 @@ function serveClient(app: Express): void {
 
 /** Builds the Express app without listening, so tests can mount it directly. */
 export function createApp(deps: AppDeps): CreatedApp {
-  const { config, dataSource, logger, mailer } = deps;
+  const { config, dataSource, logger, mailer, hub } = deps;
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
@@ -79,7 +81,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(sessionMiddleware);
   api.use(csrfProtection);
   api.use(attachViewer(dataSource));
-  api.use(authRouter({ dataSource, mailer, config }));
+  api.use(authRouter({ dataSource, mailer, config, hub }));
   api.use(clubRouter({ dataSource }));
   api.use(inviteRouter({ dataSource, mailer, config }));
   api.use(assignmentRouter({ dataSource }));

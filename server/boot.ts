@@ -9,6 +9,8 @@ import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
+import { RealtimeHub } from './realtime/hub';
+import { startRealtime } from './realtime/realtime';
 
 export interface RunningServer {
   url: string;
@@ -28,8 +30,12 @@ export async function startServer(config: Config): Promise<RunningServer> {
     'sessions',
   );
   const mail = await startMail(config, dataSource, logger);
-  const { app } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
+  const hub = new RealtimeHub();
+  const { app, sessionMiddleware } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const server = createServer(app);
+  // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
+  const adapterPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }), logger, 'socket-adapter');
+  const io = startRealtime({ httpServer: server, sessionMiddleware, hub, dataSource, adapterPool, config, logger });
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
     server.listen(config.port, config.host, () => resolve());
@@ -39,12 +45,14 @@ export async function startServer(config: Config): Promise<RunningServer> {
   let closing: Promise<void> | undefined;
   const close = () =>
     (closing ??= (async () => {
+      await new Promise<void>((resolve) => io.close(() => resolve()));
       await new Promise<void>((resolve) => {
         server.close(() => resolve());
         server.closeIdleConnections();
         setTimeout(() => server.closeAllConnections(), 5_000).unref();
       });
       await mail.close().catch(() => undefined);
+      await adapterPool.end().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);
       await dataSource.destroy().catch(() => undefined);
     })());

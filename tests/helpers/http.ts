@@ -8,7 +8,7 @@ type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 export class Client {
   private cookie: string[] = [];
   private csrf: string | undefined;
-  constructor(private readonly app: Express) {}
+  constructor(private readonly app: Express | string) {}
 
   get cookies(): string[] {
     return this.cookie;
@@ -54,7 +54,7 @@ export class Client {
   }
 }
 
-export async function signedIn(app: Express, email: string, password = TEST_PASSWORD): Promise<Client> {
+export async function signedIn(app: Express | string, email: string, password = TEST_PASSWORD): Promise<Client> {
   const c = new Client(app);
   const res = await c.signIn(email, password);
   if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);

@@ -8,6 +8,7 @@ import { openDataSource } from '../../server/db/data-source';
 import { guardPool, POOL_DEFAULTS } from '../../server/db/pool-errors';
 import { createLogger } from '../../server/lib/logger';
 import { startMail, type MailInfrastructure } from '../../server/mail/start-mail';
+import { RealtimeHub } from '../../server/realtime/hub';
 
 export interface TestApp {
   app: Express;
@@ -29,7 +30,7 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
   const mail = await startMail(config, dataSource, logger, { pollingIntervalSeconds: 0.5, retryDelaySeconds: 1 });
-  const { app, api } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer });
+  const { app, api } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub: new RealtimeHub() });
   return {
     app,
     api,

@@ -8,6 +8,7 @@ import { errors } from '../../lib/app-error';
 import { hashPassword, verifyPassword } from '../../lib/passwords';
 import { hashToken, newToken } from '../../lib/tokens';
 import type { Mailer } from '../../mail/mailer';
+import type { RealtimeHub } from '../../realtime/hub';
 import { passwordResetMail } from '../../mail/templates';
 import { csrfTokenFor } from '../../middleware/csrf';
 import { resetRequestLimiters, signInLimiters, tokenLimiter } from '../../middleware/rate-limits';
@@ -21,8 +22,8 @@ import { destroySession, endSessionsOfUser, startSignedInSession } from './sessi
 
 const BAD_CREDENTIALS = 'That e-mail and password do not match an account.';
 
-export function authRouter(deps: { dataSource: DataSource; mailer: Mailer; config: Config }): Router {
-  const { dataSource, mailer, config } = deps;
+export function authRouter(deps: { dataSource: DataSource; mailer: Mailer; config: Config; hub: RealtimeHub }): Router {
+  const { dataSource, mailer, config, hub } = deps;
   const users = dataSource.getRepository(User);
   const router = Router();
 
@@ -49,7 +50,10 @@ export function authRouter(deps: { dataSource: DataSource; mailer: Mailer; confi
     const userId = req.session?.userId;
     await destroySession(req);
     res.clearCookie(config.isProduction ? '__Host-shoalwise' : 'shoalwise.sid', { path: '/' });
-    if (userId) await audit(dataSource.manager, { actorId: userId, action: 'sign-out' });
+    if (userId) {
+      hub.disconnectUser(userId);
+      await audit(dataSource.manager, { actorId: userId, action: 'sign-out' });
+    }
     res.status(204).end();
   });
 
@@ -110,6 +114,7 @@ export function authRouter(deps: { dataSource: DataSource; mailer: Mailer; confi
       await audit(tx, { actorId: reset.userId, action: 'password-reset.completed' });
       return reset.userId;
     });
+    hub.disconnectUser(userId);
     const user = await users.findOneByOrFail({ id: userId });
     const csrfToken = await startSignedInSession(req, userId);
     res.json({ user: presentUser(user), csrfToken });
