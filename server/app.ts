@@ -14,6 +14,7 @@ import { csrfProtection } from './middleware/csrf';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
 import { authRouter } from './modules/auth/auth.router';
+import { careProfileRouter } from './modules/care/care-profile.router';
 import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { inviteRouter } from './modules/invites/invite.router';
@@ -85,6 +86,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(clubRouter({ dataSource }));
   api.use(inviteRouter({ dataSource, mailer, config }));
   api.use(assignmentRouter({ dataSource }));
+  api.use(careProfileRouter({ dataSource }));
   if (!config.isProduction) app.use(outboxRouter({ dataSource }));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -1,4 +1,5 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
+import { SEAHORSE_LARGE_PROFILE } from '../../../shared/care';
 import { resetDatabase } from '../../helpers/db';
 import { Client, signedIn } from '../../helpers/http';
 import { listRoutes } from '../../helpers/route-table';
@@ -20,6 +21,8 @@ const all = (status: number): Expect => Object.fromEntries(PERSONAS.map((p) => [
 const signedInOnly = (status: number): Expect => ({ ...all(status), anonymous: 401 });
 /** Any active member of the club; another club's member sees nothing (404); a suspended member is told why (403). */
 const clubMembers = (status: number): Expect => ({ anonymous: 401, outsider: 404, member: status, mentor: status, otherMentor: status, admin: status, suspended: 403 });
+/** Mentors and admins of the club (both may copy and adjust care profiles). */
+const mentorsAndAdmins = (status: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: status, otherMentor: status, admin: status, suspended: 403 });
 const adminsOnly = (status: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: 403, otherMentor: 403, admin: status, suspended: 403 });
 
 const ROWS: Row[] = [
@@ -54,6 +57,21 @@ const ROWS: Row[] = [
     route: 'POST /clubs/:clubId/mentor-assignments/:assignmentId/end',
     request: (w) => ({ path: `/clubs/${w.club.id}/mentor-assignments/${w.assignment.id}/end` }),
     expect: adminsOnly(200),
+  },
+  { route: 'GET /clubs/:clubId/care-profiles', request: (w) => ({ path: `/clubs/${w.club.id}/care-profiles` }), expect: clubMembers(200) },
+  { route: 'GET /clubs/:clubId/care-profiles/:key', request: (w) => ({ path: `/clubs/${w.club.id}/care-profiles/${w.careProfile.key}` }), expect: clubMembers(200) },
+  {
+    route: 'POST /clubs/:clubId/care-profiles',
+    request: (w) => ({ path: `/clubs/${w.club.id}/care-profiles`, body: { basedOn: 'reef', name: 'Our reef' } }),
+    expect: mentorsAndAdmins(201),
+  },
+  {
+    route: 'PUT /clubs/:clubId/care-profiles/:profileId',
+    request: (w) => ({
+      path: `/clubs/${w.club.id}/care-profiles/${w.careProfile.id}`,
+      body: { definition: { ...SEAHORSE_LARGE_PROFILE, name: 'Matrix seahorses, warmer' }, baseVersion: 1, note: 'Our fish room runs warm.' },
+    }),
+    expect: mentorsAndAdmins(200),
   },
 ];
 

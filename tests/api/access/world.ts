@@ -1,4 +1,5 @@
 import type { DataSource } from 'typeorm';
+import { copyProfile } from '../../../server/modules/care/care-profile.service';
 import { Invite } from '../../../server/modules/invites/invite.entity';
 import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
 
@@ -25,8 +26,9 @@ export async function buildWorld(ds: DataSource) {
     clubId: club.id, email: 'pending@test.example', role: 'member', tokenHash: 'f'.repeat(64), invitedById: admin.user.id,
     expiresAt: new Date(Date.now() + 86_400_000), lastSentAt: new Date(), acceptedAt: null, revokedAt: null,
   });
+  const careProfile = await ds.transaction((tx) => copyProfile(tx, { clubId: club.id, basedOn: 'seahorse-large', name: 'Matrix seahorses', actorId: admin.user.id }));
   return {
-    club, elsewhere, invite, assignment, spareAssignment, spare,
+    club, elsewhere, invite, assignment, spareAssignment, spare, careProfile,
     people: { outsider, member, mentor, otherMentor, admin, suspended } as Record<Exclude<Persona, 'anonymous'>, { user: { email: string; id: string }; membership: { id: string } }>,
   };
 }
