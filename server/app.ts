@@ -15,11 +15,26 @@ import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
 import { authRouter } from './modules/auth/auth.router';
 import { careProfileRouter } from './modules/care/care-profile.router';
+import { concernRouter } from './modules/concerns/concern.router';
 import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { inviteRouter } from './modules/invites/invite.router';
 import { outboxRouter } from './modules/mail/outbox.router';
 import { assignmentRouter } from './modules/mentorship/assignment.router';
+import { mentorCapacityRouter } from './modules/mentorship/mentor-capacity.router';
+import { mentorRequestRouter } from './modules/mentorship/mentor-request.router';
+import { attachNotificationDelivery } from './modules/notifications/delivery';
+import { notificationRouter } from './modules/notifications/notification.router';
+import { unsubscribeRouter } from './modules/notifications/unsubscribe.router';
+import { csvExportRouter } from './modules/csv/csv-export.router';
+import { csvImportRouter, IMPORT_ROUTES_PREFIX } from './modules/csv/csv-import.router';
+import { photoRouter } from './modules/photos/photo.router';
+import { livestockRouter } from './modules/tanks/livestock.router';
+import { tankEventRouter } from './modules/tanks/tank-event.router';
+import { tankRouter } from './modules/tanks/tank.router';
+import { timelineRouter } from './modules/tanks/timeline.router';
+import { waterTestRouter } from './modules/tanks/water-test.router';
+import { CSV_MAX_BYTES } from '../shared/schemas/csv-import.schema';
 
 export interface AppDeps {
   config: Config;
@@ -59,6 +74,7 @@ function serveClient(app: Express): void {
 /** Builds the Express app without listening, so tests can mount it directly. */
 export function createApp(deps: AppDeps): CreatedApp {
   const { config, dataSource, logger, mailer, hub } = deps;
+  attachNotificationDelivery(dataSource, { hub, mailer, config });
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
@@ -77,8 +93,12 @@ export function createApp(deps: AppDeps): CreatedApp {
 
   const { middleware: sessionMiddleware } = createSessionMiddleware(config, deps.sessionPool);
   const api = express.Router();
+  // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
+  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }));
   api.use(express.json({ limit: '200kb' }));
   api.use(healthRouter(dataSource));
+  // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
+  api.use(unsubscribeRouter({ dataSource, config }));
   api.use(sessionMiddleware);
   api.use(csrfProtection);
   api.use(attachViewer(dataSource));
@@ -86,7 +106,19 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(clubRouter({ dataSource }));
   api.use(inviteRouter({ dataSource, mailer, config }));
   api.use(assignmentRouter({ dataSource }));
+  api.use(mentorRequestRouter({ dataSource }));
+  api.use(mentorCapacityRouter({ dataSource }));
+  api.use(notificationRouter({ dataSource }));
   api.use(careProfileRouter({ dataSource }));
+  api.use(concernRouter({ dataSource }));
+  api.use(tankRouter({ dataSource }));
+  api.use(livestockRouter({ dataSource, uploadsDir: config.uploadsDir }));
+  api.use(waterTestRouter({ dataSource, uploadsDir: config.uploadsDir }));
+  api.use(tankEventRouter({ dataSource, uploadsDir: config.uploadsDir }));
+  api.use(timelineRouter({ dataSource }));
+  api.use(photoRouter({ dataSource, uploadsDir: config.uploadsDir }));
+  api.use(csvImportRouter({ dataSource }));
+  api.use(csvExportRouter({ dataSource }));
   if (!config.isProduction) app.use(outboxRouter({ dataSource }));
   api.use(apiNotFound);
   app.use('/api', api);

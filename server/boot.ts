@@ -9,6 +9,7 @@ import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
+import { startDigestScheduler } from './modules/notifications/digest-scheduler';
 import { RealtimeHub } from './realtime/hub';
 import { startRealtime } from './realtime/realtime';
 
@@ -30,6 +31,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
     'sessions',
   );
   const mail = await startMail(config, dataSource, logger);
+  const digest = await startDigestScheduler({ config, dataSource, mailer: mail.mailer, logger });
   const hub = new RealtimeHub();
   const { app, sessionMiddleware } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const server = createServer(app);
@@ -51,6 +53,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         server.closeIdleConnections();
         setTimeout(() => server.closeAllConnections(), 5_000).unref();
       });
+      await digest.stop().catch(() => undefined);
       await mail.close().catch(() => undefined);
       await adapterPool.end().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);

@@ -4,9 +4,12 @@ import { FullPageSpinner } from '../components/ui/spinner';
 import { useMe } from '../features/auth/api/me';
 import { SessionProvider, useSession } from '../features/auth/components/session-provider';
 import { UserMenu } from '../features/auth/components/user-menu';
+import { NotificationBell } from '../features/notifications/components/notification-bell';
+import { useLiveSocket } from '../lib/socket';
 
 function ShellForSession() {
-  const { activeClub, ability } = useSession();
+  const { me, activeClub, ability } = useSession();
+  useLiveSocket(me.user.id);
   const clubId = activeClub?.clubId ?? '';
   const nav: NavItem[] = [
     { to: '/', label: 'Home', end: true },
@@ -14,7 +17,7 @@ function ShellForSession() {
     ...(activeClub && activeClub.role !== 'member' ? [{ to: '/desk', label: 'Mentor desk' }] : []),
     ...(activeClub && ability.can('read', asSubject('Club', { id: clubId })) ? [{ to: '/club', label: 'Club' }] : []),
   ];
-  return <AppShell nav={nav} headerEnd={<UserMenu />} />;
+  return <AppShell nav={nav} headerEnd={<div className="flex items-center gap-1"><NotificationBell /><UserMenu /></div>} />;
 }
 
 export function SignedInLayout() {

@@ -1,3 +1,4 @@
+import { resolve, sep } from 'node:path';
 import { z } from 'zod';
 
 const port = (fallback: number) => z.coerce.number().int().min(0).max(65535).default(fallback);
@@ -13,6 +14,8 @@ const envSchema = z.object({
   SMTP_HOST: z.string().optional(),
   SMTP_PORT: port(0),
   MAIL_FROM: z.string().default('Shoalwise <no-reply@shoalwise.invalid>'),
+  /** Where uploaded photos are kept: outside the web root, never served statically. */
+  UPLOADS_DIR: z.string().min(1).default('.data/uploads'),
 });
 
 export type Env = z.infer<typeof envSchema>;
@@ -28,6 +31,8 @@ export interface Config {
   logLevel: Env['LOG_LEVEL'];
   smtp: { host: string | undefined; port: number };
   mailFrom: string;
+  /** Absolute path of the photo folder. */
+  uploadsDir: string;
 }
 
 export class ConfigError extends Error {
@@ -45,6 +50,13 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
   const isProduction = e.NODE_ENV === 'production';
   if (isProduction && !e.SESSION_SECRET) throw new ConfigError('Bad configuration: SESSION_SECRET is required in production');
   if (isProduction && !e.PUBLIC_BASE_URL) throw new ConfigError('Bad configuration: PUBLIC_BASE_URL is required in production');
+  const uploadsDir = resolve(e.UPLOADS_DIR);
+  // The built client is served statically: uploads there would bypass the permission checks (ASVS 5.3.1).
+  for (const servedFolder of [resolve('dist'), resolve('public')]) {
+    if (uploadsDir === servedFolder || uploadsDir.startsWith(`${servedFolder}${sep}`)) {
+      throw new ConfigError(`Bad configuration: UPLOADS_DIR must be outside ${servedFolder}`);
+    }
+  }
   return {
     env: e.NODE_ENV,
     isProduction,
@@ -57,5 +69,6 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     logLevel: e.NODE_ENV === 'test' && !source.LOG_LEVEL ? 'silent' : e.LOG_LEVEL,
     smtp: { host: e.SMTP_HOST, port: e.SMTP_PORT },
     mailFrom: e.MAIL_FROM,
+    uploadsDir,
   };
 }

@@ -31,6 +31,7 @@ export async function startFakeSmtp(dataSource: DataSource, logger: Logger, port
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : '',
+            headers: Object.fromEntries(mail.headerLines.map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).replace(/\r?\n/g, '').trim()])),
           }),
         )
         .then(() => callback())

@@ -1,15 +1,23 @@
 import nodemailer, { type Transporter } from 'nodemailer';
 import PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
+import type { EntityManager } from 'typeorm';
 import type { RenderedMail } from './templates';
 
 export interface OutgoingMail extends RenderedMail {
   to: string;
+  /** Extra headers, e.g. List-Unsubscribe. */
+  headers?: Record<string, string>;
+}
+
+export interface EnqueueOptions {
+  /** Queue inside this transaction: the message exists only if the transaction commits. */
+  db?: EntityManager;
 }
 
 export interface Mailer {
   /** Queues a message; it is sent in the background and retried while SMTP is down. */
-  enqueue(mail: OutgoingMail): Promise<void>;
+  enqueue(mail: OutgoingMail, options?: EnqueueOptions): Promise<void>;
   stop(): Promise<void>;
 }
 
@@ -45,13 +53,15 @@ export async function startMailer(options: MailerOptions): Promise<Mailer> {
     async (jobs) => {
       for (const job of jobs) {
         const m = job.data;
-        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html });
+        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html, headers: m.headers });
       }
     },
   );
   return {
-    async enqueue(mail) {
-      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: options.retryDelaySeconds ?? 5, retryBackoff: true });
+    async enqueue(mail, enqueueOptions = {}) {
+      const tx = enqueueOptions.db;
+      const db = tx ? { executeSql: async (text: string, values: unknown[]) => ({ rows: (await tx.query(text, values)) as unknown[] }) } : undefined;
+      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: options.retryDelaySeconds ?? 5, retryBackoff: true, db });
     },
     async stop() {
       await boss.stop({ graceful: true, timeout: 5_000, wait: true });

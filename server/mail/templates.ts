@@ -7,7 +7,7 @@ export interface RenderedMail {
   html: string;
 }
 
-const escapeHtml = (s: string) =>
+export const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
 
 function layout(clubName: string, paragraphs: string[], link: { href: string; label: string }): string {

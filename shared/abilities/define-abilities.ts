@@ -47,7 +47,11 @@ function memberRules({ can }: Builder, clubId: string, userId: string): void {
   can('read', 'Membership', { clubId });
   can('read', 'MentorAssignment', { clubId, mentorId: userId });
   can('read', 'MentorAssignment', { clubId, menteeId: userId });
-  for (const s of LOGGED_ON_TANK) can('manage', s, { clubId, ownerId: userId });
+  can(['create', 'read'], 'MentorRequest', { clubId, requesterId: userId });
+  // Spelled out rather than 'manage': a keeper must never sign off their own tank or acknowledge on a mentor's behalf.
+  for (const s of ['Tank', 'WaterTest', 'TankEvent', 'Photo'] as const) can(['create', 'read', 'update', 'delete'], s, { clubId, ownerId: userId });
+  can(['read', 'resolve'], 'Concern', { clubId, ownerId: userId });
+  can('watch', 'Tank', { clubId, ownerId: userId });
   can(['create', 'read', 'update'], 'Question', { clubId, askerId: userId });
   can(['read', 'rsvp'], 'Meetup', { clubId });
   can('read', 'CareProfile', { clubId: null });
@@ -64,15 +68,16 @@ function mentorRules({ can }: Builder, clubId: string, currentMentees: string[],
     const ownerId = { $in: currentMentees };
     can('answer', 'Question', { clubId, askerId: ownerId });
     can(['acknowledge', 'resolve'], 'Concern', { clubId, ownerId });
-    can('signOff', 'Tank', { clubId, ownerId });
+    can(['signOff', 'watch'], 'Tank', { clubId, ownerId });
   }
   can(['create', 'update'], 'CareProfile', { clubId });
 }
 
 function adminRules({ can }: Builder, clubId: string): void {
   can('manage', 'Club', { id: clubId });
-  for (const s of ['Invite', 'Membership', 'MentorAssignment', 'Meetup', 'CareProfile'] as const) can('manage', s, { clubId });
+  for (const s of ['Invite', 'Membership', 'MentorAssignment', 'MentorRequest', 'MentorSettings', 'Meetup', 'CareProfile'] as const) can('manage', s, { clubId });
   for (const s of LOGGED_ON_TANK) can('read', s, { clubId });
+  can('watch', 'Tank', { clubId });
   can(['read', 'answer'], 'Question', { clubId });
   can('read', 'AuditEvent', { clubId });
 }
@@ -96,6 +101,7 @@ export function defineRulesFor(viewer: Viewer): AppRule[] {
         .map((a) => a.menteeId)
         .filter((id) => !current.includes(id));
       mentorRules(builder, m.clubId, [...new Set(current)], [...new Set(past)]);
+      builder.can('update', 'MentorSettings', { clubId: m.clubId, mentorId: viewer.userId });
     }
     if (m.role === 'admin') adminRules(builder, m.clubId);
   }

@@ -10,6 +10,9 @@ export interface QuestionSubject { clubId: string; askerId: string }
 export interface MeetupSubject { clubId: string }
 export interface CareProfileSubject { clubId: string | null }
 export interface AuditEventSubject { clubId: string | null }
+export interface MentorRequestSubject { id?: string; clubId: string; requesterId: string }
+/** A mentor's own settings in one club (e.g. how many mentees they take on). */
+export interface MentorSettingsSubject { clubId: string; mentorId: string }
 
 export interface SubjectMap {
   Club: ClubSubject;
@@ -26,15 +29,19 @@ export interface SubjectMap {
   Meetup: MeetupSubject;
   CareProfile: CareProfileSubject;
   AuditEvent: AuditEventSubject;
+  MentorRequest: MentorRequestSubject;
+  MentorSettings: MentorSettingsSubject;
 }
 
 export type SubjectType = keyof SubjectMap;
 export const SUBJECT_TYPES = [
   'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
-  'Question', 'Meetup', 'CareProfile', 'AuditEvent',
+  'Question', 'Meetup', 'CareProfile', 'AuditEvent', 'MentorRequest', 'MentorSettings',
 ] as const satisfies readonly SubjectType[];
 
 export const ACTIONS = [
   'manage', 'create', 'read', 'update', 'delete', 'answer', 'acknowledge', 'resolve', 'signOff', 'rsvp',
+  /** Be told live when a tank changes: its keeper, their current mentor and the club's admins (not past mentors). */
+  'watch',
 ] as const;
 export type Action = (typeof ACTIONS)[number];

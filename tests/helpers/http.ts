@@ -4,6 +4,13 @@ import { TEST_PASSWORD } from './factories';
 
 type Method = 'get' | 'post' | 'put' | 'patch' | 'delete';
 
+export interface UploadFile {
+  data: Buffer;
+  name: string;
+  type?: string;
+  field?: string;
+}
+
 /** A browser-like client: keeps its cookie, fetches the CSRF token and sends it on unsafe requests. */
 export class Client {
   private cookie: string[] = [];
@@ -48,6 +55,17 @@ export class Client {
   patch = (path: string, body?: unknown) => this.send('patch', path, body);
   put = (path: string, body?: unknown) => this.send('put', path, body);
   delete = (path: string) => this.send('delete', path);
+
+  /** A multipart POST, as a browser form sends files (with the CSRF header, like every unsafe request). */
+  async upload(path: string, files: UploadFile[], fields: Record<string, string> = {}): Promise<request.Response> {
+    const token = await this.csrfToken(); // first: fetching it may set the session cookie
+    let req = request(this.app).post(path).set('Cookie', this.cookie).set('X-CSRF-Token', token);
+    for (const [name, value] of Object.entries(fields)) req = req.field(name, value);
+    for (const f of files) req = req.attach(f.field ?? 'photos', f.data, { filename: f.name, contentType: f.type ?? 'application/octet-stream' });
+    const res = await req;
+    this.remember(res);
+    return res;
+  }
 
   async signIn(email: string, password = TEST_PASSWORD): Promise<request.Response> {
     return this.post('/api/session', { email, password });

@@ -1,3 +1,6 @@
+import { mkdtempSync, rmSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import pg from 'pg';
 import type { Express, Router } from 'express';
 import type { DataSource } from 'typeorm';
@@ -23,9 +26,10 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
   return loadConfig({ NODE_ENV: 'test', DATABASE_URL: inject('databaseUrl'), PORT: '0', ...overrides });
 }
 
-/** The real app on the real test database, without a port. */
+/** The real app on the real test database, without a port; photos go to a temporary folder removed on close. */
 export async function createTestApp(overrides: Record<string, string> = {}): Promise<TestApp> {
-  const config = testConfig(overrides);
+  const uploadsDir = mkdtempSync(join(tmpdir(), 'shoalwise-uploads-'));
+  const config = testConfig({ UPLOADS_DIR: uploadsDir, ...overrides });
   const logger = createLogger(config);
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
@@ -41,6 +45,7 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
       await mail.close().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);
       if (dataSource.isInitialized) await dataSource.destroy();
+      rmSync(uploadsDir, { recursive: true, force: true });
     },
   };
 }

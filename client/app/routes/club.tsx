@@ -5,10 +5,12 @@ import { PageHeader } from '../../components/ui/page-header';
 import { useSession } from '../../features/auth/components/session-provider';
 import { InvitePanel } from '../../features/club/components/invite-panel';
 import { MembersPanel } from '../../features/club/components/members-panel';
+import { MentorCapacityCard } from '../../features/club/components/mentor-capacity-card';
+import { MentorRequestsPanel } from '../../features/club/components/mentor-requests-panel';
 import { asSubject } from '../../../shared/abilities';
 
 export function Component() {
-  const { activeClub, ability } = useSession();
+  const { activeClub, ability, me } = useSession();
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   const isAdmin = ability.can('create', asSubject('Invite', { clubId: activeClub.clubId }));
   return (
@@ -18,6 +20,10 @@ export function Component() {
         <Can<AppAbility> I="create" this={asSubject('Invite', { clubId: activeClub.clubId })}>
           <InvitePanel clubId={activeClub.clubId} />
         </Can>
+        <Can<AppAbility> I="update" this={asSubject('MentorRequest', { clubId: activeClub.clubId, requesterId: '' })}>
+          <MentorRequestsPanel clubId={activeClub.clubId} />
+        </Can>
+        {activeClub.role !== 'member' ? <MentorCapacityCard clubId={activeClub.clubId} userId={me.user.id} /> : null}
         <MembersPanel clubId={activeClub.clubId} isAdmin={isAdmin} />
       </div>
     </>

@@ -2,6 +2,7 @@ import { ROLE_LABELS } from '../../../shared/constants/roles';
 import { Card, Notice } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { useSession } from '../../features/auth/components/session-provider';
+import { AskForMentorCard } from '../../features/club/components/ask-for-mentor-card';
 
 export function Component() {
   const { me, activeClub } = useSession();
@@ -12,11 +13,14 @@ export function Component() {
       {!activeClub ? (
         <Notice tone="warning">You are not an active member of any club right now. Ask a club admin for an invitation.</Notice>
       ) : (
-        <Card>
-          <p className="text-tide-800">
-            Log your water tests, watch your tank through the nitrogen cycle, and let your mentor spot trouble early.
-          </p>
-        </Card>
+        <div className="space-y-5">
+          <Card>
+            <p className="text-tide-800">
+              Log your water tests, watch your tank through the nitrogen cycle, and let your mentor spot trouble early.
+            </p>
+          </Card>
+          <AskForMentorCard key={activeClub.clubId} clubId={activeClub.clubId} userId={me.user.id} />
+        </div>
       )}
     </>
   );

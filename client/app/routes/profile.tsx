@@ -2,6 +2,7 @@ import { Card } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { ProfileForm } from '../../features/auth/components/profile-form';
 import { useSession } from '../../features/auth/components/session-provider';
+import { NotificationPreferences } from '../../features/notifications/components/notification-preferences';
 
 export function Component() {
   const { me } = useSession();
@@ -10,6 +11,9 @@ export function Component() {
       <PageHeader title="Profile and units" subtitle={me.user.email} />
       <Card>
         <ProfileForm user={me.user} />
+      </Card>
+      <Card className="mt-5">
+        <NotificationPreferences />
       </Card>
     </>
   );

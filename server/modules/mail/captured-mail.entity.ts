@@ -9,5 +9,7 @@ export class CapturedMail {
   @Column({ type: 'text' }) subject!: string;
   @Column({ type: 'text', default: '' }) text!: string;
   @Column({ type: 'text', default: '' }) html!: string;
+  /** Raw header values by lower-case name (e.g. list-unsubscribe). */
+  @Column({ type: 'jsonb', default: {} }) headers!: Record<string, string>;
   @CreateDateColumn({ type: 'timestamptz' }) receivedAt!: Date;
 }

@@ -1,9 +1,12 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { SEAHORSE_LARGE_PROFILE } from '../../../shared/care';
 import { resetDatabase } from '../../helpers/db';
-import { Client, signedIn } from '../../helpers/http';
+import { Client, signedIn, type UploadFile } from '../../helpers/http';
 import { listRoutes } from '../../helpers/route-table';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { CARE_ROWS } from './matrix-care-rows';
+import { TANK_ROWS } from './matrix-tank-rows';
+import { MENTORSHIP_ROWS } from './matrix-mentorship-rows';
 import { buildWorld, PERSONAS, type Persona, type World } from './world';
 
 /**
@@ -13,7 +16,8 @@ import { buildWorld, PERSONAS, type Persona, type World } from './world';
 type Expect = Record<Persona, number>;
 interface Row {
   route: string;
-  request: (w: World) => { path: string; body?: unknown };
+  /** `files` makes it a multipart upload. */
+  request: (w: World) => { path: string; body?: unknown; files?: UploadFile[] };
   expect: Expect;
 }
 
@@ -73,6 +77,9 @@ const ROWS: Row[] = [
     }),
     expect: mentorsAndAdmins(200),
   },
+  ...TANK_ROWS,
+  ...CARE_ROWS,
+  ...MENTORSHIP_ROWS,
 ];
 
 describe('authorization matrix', () => {
@@ -91,11 +98,11 @@ describe('authorization matrix', () => {
       const outcome: Partial<Record<Persona, number>> = {};
       for (const persona of PERSONAS) {
         await resetDatabase(t.dataSource);
-        const world = await buildWorld(t.dataSource);
+        const world = await buildWorld(t.dataSource, t.config.uploadsDir);
         const client = persona === 'anonymous' ? new Client(t.app) : await signedIn(t.app, world.people[persona].user.email);
-        const { path, body } = row.request(world);
+        const { path, body, files } = row.request(world);
         const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
-        const res = await client.send(method, `/api${path}`, body);
+        const res = files ? await client.upload(`/api${path}`, files) : await client.send(method, `/api${path}`, body);
         outcome[persona] = res.status;
         // Another club's request never succeeds on this club's objects.
         if (persona === 'outsider' && path.includes(world.club.id)) expect(res.status).toBeGreaterThanOrEqual(400);

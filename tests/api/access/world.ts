@@ -2,15 +2,18 @@ import type { DataSource } from 'typeorm';
 import { copyProfile } from '../../../server/modules/care/care-profile.service';
 import { Invite } from '../../../server/modules/invites/invite.entity';
 import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
+import { tankWithHistory } from './world-tanks';
+import { mentorshipWorld } from './world-mentorship';
 
 export const PERSONAS = ['anonymous', 'outsider', 'member', 'mentor', 'otherMentor', 'admin', 'suspended'] as const;
 export type Persona = (typeof PERSONAS)[number];
 
 /**
  * One club with every kind of person, and a second club with an outsider:
- * member = a mentee, mentor = that mentee's mentor, otherMentor = a mentor of the same club without that mentee.
+ * member = a mentee, mentor = that mentee's mentor, otherMentor = a mentor of the same club without that mentee
+ * (they mentor `spare`). `tank` is the member's, `spareTank` spare's, each with a test, an animal, an event and a photo.
  */
-export async function buildWorld(ds: DataSource) {
+export async function buildWorld(ds: DataSource, uploadsDir: string) {
   const club = await makeClub(ds, 'Matrix Club');
   const elsewhere = await makeClub(ds, 'Other Club');
   const member = await makeMember(ds, club, 'Mina Member');
@@ -27,8 +30,15 @@ export async function buildWorld(ds: DataSource) {
     expiresAt: new Date(Date.now() + 86_400_000), lastSentAt: new Date(), acceptedAt: null, revokedAt: null,
   });
   const careProfile = await ds.transaction((tx) => copyProfile(tx, { clubId: club.id, basedOn: 'seahorse-large', name: 'Matrix seahorses', actorId: admin.user.id }));
+  // The mentee's tank (read by their mentor and admins) and spare's (read by otherMentor, spare's mentor).
+  const tank = await tankWithHistory(ds, club.id, member.user.id, 'Mina reef', uploadsDir);
+  const spareTank = await tankWithHistory(ds, club.id, spare.user.id, 'Spare reef', uploadsDir);
+  const mentorship = await mentorshipWorld(ds, club, { member: member.user, mentor: mentor.user });
+  // Animals went in without a sign-off, so the member's tank has at least that concern open.
+  const concerns: { id: string }[] = await ds.query(`SELECT id FROM concern WHERE tank_id = $1 AND status <> 'resolved' ORDER BY raised_at LIMIT 1`, [tank.tank.id]);
+  const concernId = concerns[0]!.id;
   return {
-    club, elsewhere, invite, assignment, spareAssignment, spare, careProfile,
+    club, elsewhere, invite, assignment, spareAssignment, spare, tank, spareTank, careProfile, mentorship, concernId,
     people: { outsider, member, mentor, otherMentor, admin, suspended } as Record<Exclude<Persona, 'anonymous'>, { user: { email: string; id: string }; membership: { id: string } }>,
   };
 }

@@ -18,6 +18,10 @@ describe('defineAbilityFor', () => {
     expect(ability.can('read', tank(B, 'me'))).toBe(false);
     expect(ability.can('rsvp', asSubject('Meetup', { clubId: A }))).toBe(true);
     expect(ability.can('create', asSubject('Invite', { clubId: A }))).toBe(false);
+    // Readiness is a mentor's call: a keeper never signs off their own tank.
+    expect(ability.can('signOff', tank(A, 'me'))).toBe(false);
+    expect(ability.can('resolve', asSubject('Concern', { clubId: A, ownerId: 'me' }))).toBe(true);
+    expect(ability.can('acknowledge', asSubject('Concern', { clubId: A, ownerId: 'me' }))).toBe(false);
   });
 
   it('when a mentor, then they read current mentees’ tanks, answer, and sign off — but do not edit them', () => {

@@ -1,3 +1,4 @@
+import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
 import { ConfigError, loadConfig } from '../../../server/config/env';
 
@@ -14,6 +15,13 @@ describe('loadConfig', () => {
   it('when nothing is set, then it serves 127.0.0.1:3000 with a base URL to match', () => {
     const c = loadConfig({});
     expect(c).toMatchObject({ host: '127.0.0.1', port: 3000, baseUrl: 'http://127.0.0.1:3000', isProduction: false });
+  });
+
+  it('when UPLOADS_DIR is not set, then photos go to .data/uploads as an absolute path; inside the served client it refuses to start', () => {
+    expect(loadConfig({}).uploadsDir).toBe(resolve('.data/uploads'));
+    expect(() => loadConfig({ UPLOADS_DIR: 'dist/client/uploads' })).toThrow(/UPLOADS_DIR must be outside/);
+    expect(() => loadConfig({ UPLOADS_DIR: 'public' })).toThrow(/UPLOADS_DIR/);
+    expect(loadConfig({ UPLOADS_DIR: '/var/lib/shoalwise/photos' }).uploadsDir).toBe('/var/lib/shoalwise/photos');
   });
 
   it('when production lacks a session secret, then it refuses to start', () => {

@@ -1,0 +1,26 @@
+import type { ReactNode } from 'react';
+
+/** The trade's usual cautions, worded once, shown beside the actions they belong to. */
+export const CAUTIONS = {
+  fishlessCycling:
+    'Cycling with bottled ammonia? Use plain ammonia with no soap, scent or colour. It burns eyes and lungs: wear gloves and eye protection, keep air moving, store it away from children and never mix it with bleach.',
+  dosing:
+    'Dosing chemicals: follow the label, dissolve away from the animals and never raise a value faster than its daily limit. Keep products labelled and out of reach.',
+  electricity:
+    'Electricity and water: every tank circuit on an RCD/GFCI, a drip loop on every cable, and unplug heaters and pumps before your hands go in. Wiring work is for a licensed electrician under your local code.',
+  medication: 'Medicate fish only on the advice of a veterinarian who knows aquatic animals.',
+  buyingAnimals:
+    'Buy animals only from legal, documented sources. Seahorses are protected by international trade rules (CITES) and national laws in many places: prefer captive-bred animals and keep the paperwork.',
+} as const;
+
+export function Caution({ children, title = 'Take care' }: { children: ReactNode; title?: string }) {
+  return (
+    <aside className="flex gap-3 rounded-xl bg-amber-100 px-4 py-3 text-sm text-amber-700 ring-1 ring-amber-500/30">
+      <span aria-hidden className="mt-0.5 text-base font-extrabold">!</span>
+      <p>
+        <strong className="font-extrabold">{title}: </strong>
+        {children}
+      </p>
+    </aside>
+  );
+}

@@ -1,0 +1,57 @@
+import type { CareSummary } from '../api/care';
+
+const STEPS = [
+  { stage: 'not-started', label: 'Not started', hint: 'No ammonia seen yet: add an ammonia source to start the cycle.' },
+  { stage: 'ammonia-rising', label: 'Ammonia', hint: 'Bacteria are starting; ammonia is up.' },
+  { stage: 'nitrite-rising', label: 'Nitrite up', hint: 'Ammonia is being turned into nitrite.' },
+  { stage: 'nitrite-falling', label: 'Nitrite down', hint: 'Nitrite is being turned into nitrate.' },
+  { stage: 'cycled', label: 'Cycled', hint: 'Ammonia and nitrite read zero with nitrate present.' },
+] as const;
+
+const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
+
+/** Where the tank is in the nitrogen cycle, today's position, and when it is likely done. */
+export function CycleTimeline({ cycle, typical }: { cycle: CareSummary['cycle']; typical: CareSummary['cycleTypical'] }) {
+  const setback = cycle.stage === 'setback';
+  const index = setback ? -1 : STEPS.findIndex((s) => s.stage === cycle.stage);
+  const current = STEPS[index];
+  return (
+    <section aria-labelledby="cycle-heading">
+      <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Nitrogen cycle</h3>
+      {setback ? (
+        <p className="mt-2 rounded-xl bg-ember-100 px-3 py-2 font-bold text-ember-700">
+          ▲ Setback: ammonia or nitrite is back on a tank that had cycled. Stop adding animals, feed lightly and test daily.
+        </p>
+      ) : (
+        <ol className="mt-3 grid grid-cols-5 gap-1" aria-label="Cycle stages">
+          {STEPS.map((s, i) => (
+            <li key={s.stage} aria-current={i === index ? 'step' : undefined} className="text-center">
+              <div className={`h-2 rounded-full ${i < index ? 'bg-kelp-500' : i === index ? 'bg-tide-500' : 'bg-tide-100'}`} />
+              <p className={`mt-1 text-[11px] leading-tight sm:text-xs ${i === index ? 'font-extrabold text-tide-900' : 'text-tide-600'}`}>
+                {i === index ? '▼ ' : ''}
+                {s.label}
+              </p>
+            </li>
+          ))}
+        </ol>
+      )}
+      {current ? <p className="mt-2 text-sm text-tide-800">{current.hint}</p> : null}
+      {cycle.projectedDoneAt ? (
+        <p className="mt-1 text-sm text-tide-700">
+          Likely done around <strong>{fmt.format(new Date(cycle.projectedDoneAt.likely))}</strong> (between {fmt.format(new Date(cycle.projectedDoneAt.earliest))} and{' '}
+          {fmt.format(new Date(cycle.projectedDoneAt.latest))}). A cycle usually takes {typical.typicalMin}–{typical.typicalMax} weeks, sometimes {typical.rangeMin}–{typical.rangeMax} ({typical.provenance}).
+        </p>
+      ) : null}
+      {cycle.evidence.length ? (
+        <details className="mt-1 text-sm text-tide-700">
+          <summary className="cursor-pointer font-bold">Why we think so</summary>
+          <ul className="mt-1 list-disc pl-5">
+            {cycle.evidence.map((e) => (
+              <li key={e}>{e}</li>
+            ))}
+          </ul>
+        </details>
+      ) : null}
+    </section>
+  );
+}

@@ -1,0 +1,85 @@
+import { Can } from '@casl/react';
+import { useState } from 'react';
+import { asSubject, type AppAbility } from '../../../../shared/abilities';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/card';
+import { ApiError } from '../../../lib/api-client';
+import { useSaveChecklist, useSignOff, useWithdrawSignOff, type CareSummary } from '../api/care';
+import { CAUTIONS, Caution } from './cautions';
+
+const CHECKS = [
+  { key: 'equipmentRunning', label: 'Heater, pump and lights have run for a while without trouble' },
+  { key: 'quarantinePlan', label: 'I have a quarantine plan for the new animals' },
+  { key: 'foodReady', label: 'Their food is ready (seahorses need frozen or live food several times a day)' },
+] as const;
+
+/** The checklist before animals go in, and the mentor's sign-off. */
+export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readiness: CareSummary['readiness']; clubId: string; tankId: string; ownerId: string }) {
+  const save = useSaveChecklist(clubId, tankId);
+  const signOff = useSignOff(clubId, tankId);
+  const withdraw = useWithdrawSignOff(clubId, tankId);
+  const [error, setError] = useState<string>();
+  const tank = asSubject('Tank', { clubId, ownerId });
+  const toggle = async (key: (typeof CHECKS)[number]['key'], value: boolean) => {
+    setError(undefined);
+    try {
+      await save.mutateAsync({ ...readiness.checklist, notes: readiness.notes, [key]: value });
+    } catch (e) {
+      setError(e instanceof ApiError ? e.message : 'Could not save.');
+    }
+  };
+  return (
+    <section aria-labelledby="ready-heading" className="space-y-3">
+      <h3 id="ready-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Ready for animals?</h3>
+      <p className={`rounded-xl px-3 py-2 font-bold ${readiness.ready ? 'bg-kelp-100 text-kelp-700' : 'bg-tide-50 text-tide-800'}`}>
+        {readiness.ready ? '✔ Ready: your mentor has signed this tank off.' : 'Not ready yet. Every line below needs a tick first.'}
+      </p>
+      <ul className="space-y-2">
+        {readiness.items.map((item) => (
+          <li key={item.key} className="flex gap-2 text-sm">
+            <span aria-hidden className={`font-extrabold ${item.met ? 'text-kelp-700' : 'text-tide-400'}`}>{item.met ? '✔' : '○'}</span>
+            <span>
+              <strong className="text-tide-900">{item.label}</strong>
+              <span className="sr-only">{item.met ? ' (done)' : ' (not yet)'}</span>
+              <span className="block text-tide-700">{item.detail}</span>
+            </span>
+          </li>
+        ))}
+      </ul>
+      <Can<AppAbility> I="update" this={tank}>
+        <fieldset className="space-y-2 rounded-xl bg-sand-50 p-3">
+          <legend className="text-sm font-bold text-tide-800">Your checklist</legend>
+          {CHECKS.map((c) => (
+            <label key={c.key} className="flex min-h-touch items-center gap-3 text-sm text-tide-900">
+              <input type="checkbox" className="size-5 accent-tide-700" checked={readiness.checklist[c.key]} disabled={save.isPending} onChange={(e) => void toggle(c.key, e.target.checked)} />
+              {c.label}
+            </label>
+          ))}
+        </fieldset>
+      </Can>
+      <Can<AppAbility> I="signOff" this={tank}>
+        {readiness.signOff ? (
+          <Button variant="ghost" busy={withdraw.isPending} onClick={() => window.confirm('Withdraw your sign-off? The member will see the tank as not ready.') && withdraw.mutate()}>
+            Withdraw my sign-off
+          </Button>
+        ) : (
+          <Button
+            busy={signOff.isPending}
+            onClick={async () => {
+              setError(undefined);
+              try {
+                await signOff.mutateAsync({ note: '' });
+              } catch (e) {
+                setError(e instanceof ApiError ? e.message : 'Could not sign off.');
+              }
+            }}
+          >
+            Sign off as ready for animals
+          </Button>
+        )}
+      </Can>
+      {error ? <Notice tone="error">{error}</Notice> : null}
+      <Caution title="Before you buy">{CAUTIONS.buyingAnimals}</Caution>
+    </section>
+  );
+}

@@ -1,0 +1,29 @@
+import { Card, Notice } from '../../../components/ui/card';
+import { Spinner } from '../../../components/ui/spinner';
+import { useCareSummary } from '../api/care';
+import { CAUTIONS, Caution } from './cautions';
+import { ConcernList } from './concern-list';
+import { CycleTimeline } from './cycle-timeline';
+import { DueTests } from './due-tests';
+import { ReadinessPanel } from './readiness-panel';
+
+/** The tank page's judgement: what needs attention, the cycle, the tests due and readiness for animals. */
+export function TankCarePanel({ clubId, tankId, ownerId, phase }: { clubId: string; tankId: string; ownerId: string; phase: 'cycling' | 'established' }) {
+  const care = useCareSummary(clubId, tankId);
+  if (care.isPending) return <Card><Spinner label="Working out how the tank is doing…" /></Card>;
+  if (care.isError) return <Notice tone="error">{care.error.message}</Notice>;
+  const s = care.data;
+  return (
+    <Card className="space-y-6">
+      <p className="text-sm text-tide-700">
+        Judged against the <strong>{s.profile.name}</strong> profile (version {s.profile.version}).
+      </p>
+      <ConcernList concerns={s.concerns} clubId={clubId} tankId={tankId} ownerId={ownerId} />
+      <DueTests due={s.due} />
+      <CycleTimeline cycle={s.cycle} typical={s.cycleTypical} />
+      {phase === 'cycling' ? <Caution title="Fishless cycling">{CAUTIONS.fishlessCycling}</Caution> : null}
+      <ReadinessPanel readiness={s.readiness} clubId={clubId} tankId={tankId} ownerId={ownerId} />
+      <Caution title="Medication">{CAUTIONS.medication}</Caution>
+    </Card>
+  );
+}

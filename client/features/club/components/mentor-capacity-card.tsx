@@ -1,0 +1,54 @@
+import { useId, useState } from 'react';
+import { MAX_MENTOR_CAPACITY } from '../../../../shared/constants/mentorship';
+import { Button } from '../../../components/ui/button';
+import { Card, Notice } from '../../../components/ui/card';
+import { ApiError } from '../../../lib/api-client';
+import { useMembers } from '../api/club';
+import { useSetCapacity } from '../api/mentor-requests';
+
+/** A mentor's own setting: how many mentees they take on in this club. */
+export function MentorCapacityCard({ clubId, userId }: { clubId: string; userId: string }) {
+  const members = useMembers(clubId);
+  const me = members.data?.members.find((m) => m.userId === userId);
+  if (!me || me.mentorCapacity === undefined) return null;
+  return <CapacityForm clubId={clubId} userId={userId} capacity={me.mentorCapacity} load={me.menteeCount ?? 0} />;
+}
+
+function CapacityForm(p: { clubId: string; userId: string; capacity: number; load: number }) {
+  const save = useSetCapacity(p.clubId);
+  const [value, setValue] = useState(String(p.capacity));
+  const id = useId();
+  const error = save.error instanceof ApiError ? save.error.fieldMessage('capacity') ?? save.error.message : save.error ? 'Could not save.' : undefined;
+  return (
+    <Card>
+      <form
+        className="flex flex-wrap items-end gap-3"
+        onSubmit={(e) => {
+          e.preventDefault();
+          save.mutate({ userId: p.userId, capacity: Number(value) });
+        }}
+      >
+        <div>
+          <label htmlFor={id} className="block text-sm font-bold text-tide-800">Mentees I can take on</label>
+          <input
+            id={id}
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={MAX_MENTOR_CAPACITY}
+            step={1}
+            value={value}
+            onChange={(e) => setValue(e.target.value)}
+            aria-describedby={`${id}-hint`}
+            className="mt-1 block min-h-touch w-28 rounded-xl border border-tide-200 bg-white px-3 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:ring-2 focus:ring-tide-200 focus:outline-none"
+          />
+        </div>
+        <Button type="submit" variant="secondary" busy={save.isPending}>Save</Button>
+        <p id={`${id}-hint`} className="w-full text-sm text-tide-600">
+          You mentor {p.load} now. Lowering the number keeps your current mentees; it only stops new ones. 0 to {MAX_MENTOR_CAPACITY}.
+        </p>
+      </form>
+      {error ? <div className="mt-2"><Notice tone="error">{error}</Notice></div> : save.isSuccess ? <div className="mt-2"><Notice tone="success">Saved.</Notice></div> : null}
+    </Card>
+  );
+}

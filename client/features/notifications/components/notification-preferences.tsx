@@ -1,0 +1,43 @@
+import { EMAIL_MODE_LABELS, EMAIL_MODES, NOTIFICATION_KIND_LABELS, NOTIFICATION_KINDS, type EmailMode, type NotificationKind } from '../../../../shared/constants/notifications';
+import { Notice } from '../../../components/ui/card';
+import { SelectField } from '../../../components/ui/field';
+import { Spinner } from '../../../components/ui/spinner';
+import { usePreferences, useUpdatePreferences } from '../api/notifications';
+
+const OPTIONS = EMAIL_MODES.map((m) => ({ value: m, label: EMAIL_MODE_LABELS[m] }));
+
+/** Which e-mails the person wants, per kind; each change saves at once. In-app notifications always show. */
+export function NotificationPreferences() {
+  const prefs = usePreferences();
+  const update = useUpdatePreferences();
+  const save = (kind: NotificationKind, mode: EmailMode) => update.mutate({ [kind]: mode });
+  return (
+    <section aria-labelledby="email-prefs-heading">
+      <h2 id="email-prefs-heading" className="text-lg font-extrabold text-tide-900">E-mails</h2>
+      <p className="mt-1 text-sm text-tide-700">Everything always shows under the bell. Choose what also reaches your inbox; the digest comes once a day, around 7 in the morning your time.</p>
+      <div className="mt-3 space-y-3" aria-live="polite">
+        {update.isError ? <Notice tone="error">Could not save: {update.error.message}</Notice> : null}
+        {update.isSuccess ? <Notice tone="success">Saved.</Notice> : null}
+      </div>
+      {prefs.isPending ? (
+        <div className="mt-4"><Spinner /></div>
+      ) : prefs.isError ? (
+        <div className="mt-4"><Notice tone="error">{prefs.error.message}</Notice></div>
+      ) : (
+        <div className="mt-4 grid gap-4 sm:grid-cols-2">
+          {NOTIFICATION_KINDS.map((kind) => (
+            <SelectField
+              key={kind}
+              label={NOTIFICATION_KIND_LABELS[kind].label}
+              hint={NOTIFICATION_KIND_LABELS[kind].hint}
+              options={OPTIONS}
+              value={prefs.data.preferences[kind]}
+              disabled={update.isPending}
+              onChange={(e) => save(kind, e.target.value as EmailMode)}
+            />
+          ))}
+        </div>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,40 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { tankParams } from '../../../shared/schemas/tank.schema';
+import { inputOf, validate } from '../../middleware/validate';
+import { authorize, requireClubMember, requireSignIn } from '../../middleware/viewer';
+import { loadTank, ownedBy } from '../tanks/tank-access';
+import { TankEvent } from '../tanks/tank-event.entity';
+import { WaterTest } from '../tanks/water-test.entity';
+import { exportCsv } from './csv-export';
+
+const fileSlug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'tank';
+
+export function csvExportRouter(deps: { dataSource: DataSource }): Router {
+  const { dataSource } = deps;
+  const router = Router();
+  const route = { params: tankParams };
+
+  router.get('/clubs/:clubId/tanks/:tankId/export.csv', requireSignIn, validate(route), requireClubMember, async (req, res) => {
+    const { params } = inputOf(res, route);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'read', 'WaterTest', ownedBy(tank));
+    authorize(req, 'read', 'TankEvent', ownedBy(tank));
+    const [tests, events] = await Promise.all([
+      dataSource.manager.find(WaterTest, { where: { tankId: tank.id }, order: { takenAt: 'ASC', id: 'ASC' } }),
+      dataSource.manager.find(TankEvent, { where: { tankId: tank.id }, order: { occurredAt: 'ASC', id: 'ASC' } }),
+    ]);
+    const filename = `${fileSlug(tank.name)}-${new Date().toISOString().slice(0, 10)}.csv`;
+    res
+      .status(200)
+      .set({
+        'Content-Type': 'text/csv; charset=utf-8',
+        'Content-Disposition': `attachment; filename="${filename}"`,
+        'Cache-Control': 'private, no-store',
+        'X-Content-Type-Options': 'nosniff',
+      })
+      .send(exportCsv(tests, events));
+  });
+
+  return router;
+}

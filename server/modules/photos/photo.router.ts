@@ -1,0 +1,100 @@
+import { readFile } from 'node:fs/promises';
+import { Router, type RequestHandler } from 'express';
+import type { DataSource } from 'typeorm';
+import { photoParams, photoUploadFieldsSchema, tankParams, tankPhotoListQuery } from '../../../shared/schemas/photo.schema';
+import { errors } from '../../lib/app-error';
+import { inputOf, parseInput, validate } from '../../middleware/validate';
+import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
+import { loadTank, ownedBy, requireActive } from '../tanks/tank-access';
+import type { Tank } from '../tanks/tank.entity';
+import { Photo } from './photo.entity';
+import { presentPhoto } from './photo.presenter';
+import { processPhoto } from './photo-processing';
+import { ensureUploadsDir, photoPath, removePhotoFiles, type PhotoSize } from './photo-storage';
+import { receivePhotos } from './photo-upload';
+import { storePhotos } from './photo.service';
+
+/** Photos of a tank, a water test or an event, served only to people who may read the tank. */
+export function photoRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
+  const { dataSource, uploadsDir } = deps;
+  ensureUploadsDir(uploadsDir);
+  const router = Router();
+  const tankPhotos = '/clubs/:clubId/tanks/:tankId/photos';
+
+  const list = { params: tankParams, query: tankPhotoListQuery };
+  router.get(tankPhotos, requireSignIn, validate(list), requireClubMember, async (req, res) => {
+    const { params, query } = inputOf(res, list);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'read', 'Photo', ownedBy(tank));
+    const rows = await dataSource.manager.find(Photo, {
+      where: { tankId: tank.id, ...(query.waterTestId ? { waterTestId: query.waterTestId } : {}), ...(query.eventId ? { eventId: query.eventId } : {}) },
+      order: { createdAt: 'DESC', id: 'DESC' },
+    });
+    res.json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
+  });
+
+  // The tank is loaded and the upload authorized before a single byte of the files is read.
+  const one = { params: tankParams };
+  const mayUpload: RequestHandler = async (req, res, next) => {
+    const { params } = inputOf(res, one);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'create', 'Photo', ownedBy(tank));
+    requireActive(tank);
+    res.locals.tank = tank;
+    next();
+  };
+  router.post(tankPhotos, requireSignIn, validate(one), requireClubMember, mayUpload, receivePhotos, async (req, res) => {
+    const tank = res.locals.tank as Tank;
+    const fields = parseInput(photoUploadFieldsSchema, { ...req.body }, 'body');
+    const files = (req.files ?? []) as Express.Multer.File[];
+    if (files.length === 0) throw errors.badRequest('Attach at least one photo.', [{ path: 'photos', message: 'Choose a JPEG, PNG or WebP picture.' }]);
+    const processed = [];
+    for (const [i, file] of files.entries()) processed.push(await processPhoto(file, i));
+    const rows = await storePhotos(dataSource, uploadsDir, tank, fields, processed, viewerOf(req).user.id);
+    res.status(201).json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
+  });
+
+  const photo = { params: photoParams };
+  const loadPhoto = async (clubId: string, photoId: string) => {
+    const row = await dataSource.manager
+      .createQueryBuilder(Photo, 'p')
+      .innerJoinAndSelect('p.tank', 't')
+      .where('p.id = :photoId AND t.club_id = :clubId', { photoId, clubId })
+      .getOne();
+    if (!row?.tank) throw errors.notFound('That photo');
+    return { photo: row, tank: row.tank };
+  };
+
+  const serve = (size: PhotoSize): RequestHandler => async (req, res) => {
+    const { params } = inputOf(res, photo);
+    const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
+    authorize(req, 'read', 'Photo', ownedBy(tank));
+    const data = await readFile(photoPath(uploadsDir, row.storageKey, size)).catch((error: NodeJS.ErrnoException) => {
+      if (error.code === 'ENOENT') throw errors.notFound('That photo file');
+      throw error;
+    });
+    res
+      .status(200)
+      .set({
+        'Content-Type': 'image/webp',
+        'X-Content-Type-Options': 'nosniff',
+        'Content-Disposition': 'inline; filename="photo.webp"',
+        'Cache-Control': 'private, max-age=3600',
+      })
+      .send(data);
+  };
+  router.get('/clubs/:clubId/photos/:photoId', requireSignIn, validate(photo), requireClubMember, serve('full'));
+  router.get('/clubs/:clubId/photos/:photoId/thumb', requireSignIn, validate(photo), requireClubMember, serve('thumb'));
+
+  router.delete('/clubs/:clubId/photos/:photoId', requireSignIn, validate(photo), requireClubMember, async (req, res) => {
+    const { params } = inputOf(res, photo);
+    const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
+    authorize(req, 'delete', 'Photo', ownedBy(tank));
+    requireActive(tank);
+    await dataSource.manager.delete(Photo, { id: row.id });
+    await removePhotoFiles(uploadsDir, [row.storageKey]);
+    res.status(204).end();
+  });
+
+  return router;
+}

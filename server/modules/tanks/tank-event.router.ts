@@ -1,0 +1,86 @@
+import { Router } from 'express';
+import type { DataSource, EntityManager } from 'typeorm';
+import { createTankEventSchema, tankEventListQuery, tankEventParams, updateTankEventSchema } from '../../../shared/schemas/tank-event.schema';
+import { tankParams } from '../../../shared/schemas/tank.schema';
+import { errors } from '../../lib/app-error';
+import { inputOf, validate } from '../../middleware/validate';
+import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
+import { audit } from '../audit/audit';
+import { removePhotoFiles } from '../photos/photo-storage';
+import { photosOf } from '../photos/photo.queries';
+import { decodeCursor, pageOf } from './cursor';
+import { loadTank, ownedBy, requireActive } from './tank-access';
+import { TankEvent } from './tank-event.entity';
+import { presentTankEvent } from './tank-event.presenter';
+import { createTankEvent, deleteTankEvent, updateTankEvent } from './tank-event.service';
+
+/** Timeline entries other than water tests: water changes, doses, feeding, equipment, animals, observations. */
+export function tankEventRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
+  const { dataSource, uploadsDir } = deps;
+  const router = Router();
+  const base = '/clubs/:clubId/tanks/:tankId/events';
+
+  const loadEvent = async (manager: EntityManager, tankId: string, eventId: string) => {
+    const event = await manager.findOneBy(TankEvent, { id: eventId, tankId });
+    if (!event) throw errors.notFound('That entry');
+    return event;
+  };
+
+  const list = { params: tankParams, query: tankEventListQuery };
+  router.get(base, requireSignIn, validate(list), requireClubMember, async (req, res) => {
+    const { params, query } = inputOf(res, list);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'read', 'TankEvent', ownedBy(tank));
+    const qb = dataSource.getRepository(TankEvent).createQueryBuilder('e').where('e.tank_id = :tankId', { tankId: tank.id });
+    if (query.kind) qb.andWhere('e.kind = :kind', { kind: query.kind });
+    const before = decodeCursor(query.before);
+    if (before) qb.andWhere('(e.occurred_at, e.id) < (:at, :id)', { at: before.at, id: before.id });
+    const rows = await qb.orderBy('e.occurred_at', 'DESC').addOrderBy('e.id', 'DESC').limit(query.limit + 1).getMany();
+    const page = pageOf(rows, query.limit, (e) => ({ at: e.occurredAt, id: e.id }));
+    const photos = await photosOf(dataSource.manager, tank.clubId, { eventIds: page.items.map((e) => e.id) });
+    res.json({ items: page.items.map((e) => presentTankEvent(e, photos)), nextCursor: page.nextCursor });
+  });
+
+  const create = { params: tankParams, body: createTankEventSchema };
+  router.post(base, requireSignIn, validate(create), requireClubMember, async (req, res) => {
+    const { params, body } = inputOf(res, create);
+    const event = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'create', 'TankEvent', ownedBy(tank));
+      requireActive(tank);
+      return createTankEvent(tx, tank, body, viewerOf(req).user.id);
+    });
+    res.status(201).json({ event: presentTankEvent(event, () => []) });
+  });
+
+  const one = { params: tankEventParams };
+  const update = { params: tankEventParams, body: updateTankEventSchema };
+  router.patch(`${base}/:eventId`, requireSignIn, validate(update), requireClubMember, async (req, res) => {
+    const { params, body } = inputOf(res, update);
+    const event = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'update', 'TankEvent', ownedBy(tank));
+      requireActive(tank);
+      return updateTankEvent(tx, tank, await loadEvent(tx, tank.id, params.eventId), body);
+    });
+    const photos = await photosOf(dataSource.manager, params.clubId, { eventIds: [event.id] });
+    res.json({ event: presentTankEvent(event, photos) });
+  });
+
+  router.delete(`${base}/:eventId`, requireSignIn, validate(one), requireClubMember, async (req, res) => {
+    const { params } = inputOf(res, one);
+    const photoKeys = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'delete', 'TankEvent', ownedBy(tank));
+      requireActive(tank);
+      const event = await loadEvent(tx, tank.id, params.eventId);
+      const keys = await deleteTankEvent(tx, event);
+      await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'tank-event.deleted', targetType: 'TankEvent', targetId: event.id, details: { tankId: tank.id, kind: event.kind } });
+      return keys;
+    });
+    await removePhotoFiles(uploadsDir, photoKeys);
+    res.status(204).end();
+  });
+
+  return router;
+}

@@ -1,0 +1,41 @@
+import type { EntityManager } from 'typeorm';
+import { FREE_AMMONIA_INPUTS, type LastKnown, type TankChemistryContext } from '../../../shared/readings/free-ammonia';
+import { resolveProfile } from '../care/care-profile.service';
+import type { Position } from './cursor';
+import type { Tank } from './tank.entity';
+import { VALUE_COLUMNS } from './water-test.entity';
+
+/**
+ * The tank's latest temperature, pH and salinity before a position in (taken_at, id) order — or the latest of all.
+ * Each may come from a different test.
+ */
+export async function lastKnownBefore(manager: EntityManager, tankId: string, before?: Position | { at: Date }): Promise<LastKnown> {
+  const known: LastKnown = {};
+  for (const parameter of FREE_AMMONIA_INPUTS) {
+    const column = VALUE_COLUMNS[parameter].column;
+    const params: unknown[] = [tankId];
+    let bound = '';
+    if (before) {
+      params.push(before.at);
+      if ('id' in before) {
+        params.push(before.id);
+        bound = 'AND (taken_at, id) < ($2, $3)';
+      } else bound = 'AND taken_at < $2';
+    }
+    const rows: { id: string; takenAt: Date; value: number }[] = await manager.query(
+      `SELECT id, taken_at AS "takenAt", ${column} AS value FROM water_test
+        WHERE tank_id = $1 AND ${column} IS NOT NULL ${bound}
+        ORDER BY taken_at DESC, id DESC LIMIT 1`,
+      params,
+    );
+    const row = rows[0];
+    if (row) known[parameter] = { value: row.value, takenAt: new Date(row.takenAt).toISOString(), testId: row.id };
+  }
+  return known;
+}
+
+/** What free ammonia depends on besides the readings: the kind of tank and its care profile (a club's copy included). */
+export async function chemistryOf(manager: EntityManager, tank: Tank): Promise<TankChemistryContext> {
+  const profile = await resolveProfile(manager, tank.clubId, tank.careProfileKey);
+  return { systemType: tank.systemType, careProfileKey: tank.careProfileKey, ...(profile ? { profile } : {}) };
+}

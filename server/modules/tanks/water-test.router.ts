@@ -1,0 +1,99 @@
+import { Router } from 'express';
+import type { DataSource } from 'typeorm';
+import { tankParams } from '../../../shared/schemas/tank.schema';
+import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, waterTestParams } from '../../../shared/schemas/water-test.schema';
+import { errors } from '../../lib/app-error';
+import { inputOf, validate } from '../../middleware/validate';
+import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
+import { audit } from '../audit/audit';
+import { removePhotoFiles } from '../photos/photo-storage';
+import { photosOf } from '../photos/photo.queries';
+import { decodeCursor, pageOf } from './cursor';
+import { loadTank, ownedBy, requireActive } from './tank-access';
+import { WaterTest } from './water-test.entity';
+import { presentWaterTest } from './water-test.presenter';
+import { createWaterTest, deleteWaterTest, updateWaterTest } from './water-test.service';
+
+/**
+ * Water tests of one tank. Deleting is for good (a mistyped test should vanish from charts and evaluation) and only
+ * for the tank's owner; archiving the tank is how history is kept.
+ */
+export function waterTestRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
+  const { dataSource, uploadsDir } = deps;
+  const router = Router();
+  const base = '/clubs/:clubId/tanks/:tankId/water-tests';
+
+  const loadTest = async (manager: DataSource['manager'], tankId: string, testId: string) => {
+    const test = await manager.findOneBy(WaterTest, { id: testId, tankId });
+    if (!test) throw errors.notFound('That water test');
+    return test;
+  };
+
+  const list = { params: tankParams, query: waterTestListQuery };
+  router.get(base, requireSignIn, validate(list), requireClubMember, async (req, res) => {
+    const { params, query } = inputOf(res, list);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'read', 'WaterTest', ownedBy(tank));
+    const qb = dataSource.getRepository(WaterTest).createQueryBuilder('w').where('w.tank_id = :tankId', { tankId: tank.id });
+    const before = decodeCursor(query.before);
+    if (before) qb.andWhere('(w.taken_at, w.id) < (:at, :id)', { at: before.at, id: before.id });
+    if (query.from) qb.andWhere('w.taken_at >= :from', { from: new Date(query.from) });
+    if (query.to) qb.andWhere('w.taken_at <= :to', { to: new Date(query.to) });
+    const rows = await qb.orderBy('w.taken_at', 'DESC').addOrderBy('w.id', 'DESC').limit(query.limit + 1).getMany();
+    const page = pageOf(rows, query.limit, (t) => ({ at: t.takenAt, id: t.id }));
+    const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: page.items.map((t) => t.id) });
+    res.json({ items: page.items.map((t) => presentWaterTest(t, photos)), nextCursor: page.nextCursor });
+  });
+
+  const create = { params: tankParams, body: createWaterTestSchema };
+  router.post(base, requireSignIn, validate(create), requireClubMember, async (req, res) => {
+    const { params, body } = inputOf(res, create);
+    const saved = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'create', 'WaterTest', ownedBy(tank));
+      requireActive(tank);
+      return createWaterTest(tx, tank, body, viewerOf(req).user.id);
+    });
+    res.status(201).json({ waterTest: presentWaterTest(saved.test, () => []), warnings: saved.warnings });
+  });
+
+  const one = { params: waterTestParams };
+  router.get(`${base}/:testId`, requireSignIn, validate(one), requireClubMember, async (req, res) => {
+    const { params } = inputOf(res, one);
+    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+    authorize(req, 'read', 'WaterTest', ownedBy(tank));
+    const test = await loadTest(dataSource.manager, tank.id, params.testId);
+    const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: [test.id] });
+    res.json({ waterTest: presentWaterTest(test, photos) });
+  });
+
+  const update = { params: waterTestParams, body: updateWaterTestSchema };
+  router.patch(`${base}/:testId`, requireSignIn, validate(update), requireClubMember, async (req, res) => {
+    const { params, body } = inputOf(res, update);
+    const saved = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'update', 'WaterTest', ownedBy(tank));
+      requireActive(tank);
+      return updateWaterTest(tx, tank, await loadTest(tx, tank.id, params.testId), body);
+    });
+    const photos = await photosOf(dataSource.manager, params.clubId, { waterTestIds: [saved.test.id] });
+    res.json({ waterTest: presentWaterTest(saved.test, photos), warnings: saved.warnings });
+  });
+
+  router.delete(`${base}/:testId`, requireSignIn, validate(one), requireClubMember, async (req, res) => {
+    const { params } = inputOf(res, one);
+    const photoKeys = await dataSource.transaction(async (tx) => {
+      const tank = await loadTank(tx, params.clubId, params.tankId);
+      authorize(req, 'delete', 'WaterTest', ownedBy(tank));
+      requireActive(tank);
+      const test = await loadTest(tx, tank.id, params.testId);
+      const keys = await deleteWaterTest(tx, tank, test);
+      await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'water-test.deleted', targetType: 'WaterTest', targetId: test.id, details: { tankId: tank.id, takenAt: test.takenAt.toISOString() } });
+      return keys;
+    });
+    await removePhotoFiles(uploadsDir, photoKeys);
+    res.status(204).end();
+  });
+
+  return router;
+}

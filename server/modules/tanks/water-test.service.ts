@@ -1,0 +1,90 @@
+import { randomUUID } from 'node:crypto';
+import type { EntityManager } from 'typeorm';
+import type { z } from 'zod';
+import { PARAMETER_KEYS } from '../../../shared/care/parameters';
+import type { ReadingIssue } from '../../../shared/readings/issues';
+import { normalizeWaterTest, type NormalizedWaterTest } from '../../../shared/readings/normalize-water-test';
+import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '../../../shared/schemas/water-test.schema';
+import { errors } from '../../lib/app-error';
+import { storageKeysOf } from '../photos/photo.queries';
+import { recomputeDerivedFrom } from './derived-refresh';
+import type { Tank } from './tank.entity';
+import { chemistryOf, lastKnownBefore } from './water-test.context';
+import { VALUE_COLUMNS, WaterTest } from './water-test.entity';
+import { tankChanged } from '../concerns/tank-changed';
+import { onWaterTestSaved } from './water-test.events';
+
+export interface SavedWaterTest {
+  test: WaterTest;
+  warnings: ReadingIssue[];
+}
+
+/** Every stored column of a normalized test; parameters it lacks become NULL (an edit can remove one). */
+export function columnsOf(n: NormalizedWaterTest): Partial<WaterTest> {
+  const columns: Partial<WaterTest> = { takenAt: new Date(n.takenAt), entries: n.entries, derived: n.derived, freeAmmoniaMgL: n.freeAmmonia };
+  for (const key of PARAMETER_KEYS) columns[VALUE_COLUMNS[key].property] = n.values[key] ?? null;
+  return columns;
+}
+
+function refuseErrors(n: NormalizedWaterTest): void {
+  if (n.errors.length) throw errors.badRequest('Some readings need attention.', n.errors);
+}
+
+async function normalizeFor(tx: EntityManager, tank: Tank, id: string, takenAt: string, entries: WaterTestEntries, now: Date): Promise<NormalizedWaterTest> {
+  const lastKnown = await lastKnownBefore(tx, tank.id, { at: new Date(takenAt), id });
+  const normalized = normalizeWaterTest({ takenAt, entries }, { ...(await chemistryOf(tx, tank)), now: now.toISOString(), testId: id, lastKnown });
+  refuseErrors(normalized);
+  return normalized;
+}
+
+export async function createWaterTest(
+  tx: EntityManager,
+  tank: Tank,
+  input: z.output<typeof createWaterTestSchema>,
+  actorId: string,
+  now = new Date(),
+): Promise<SavedWaterTest> {
+  const id = randomUUID();
+  const normalized = await normalizeFor(tx, tank, id, input.takenAt, input.entries, now);
+  await tx.insert(WaterTest, { id, tankId: tank.id, ...columnsOf(normalized), note: input.note, origin: 'form', createdById: actorId });
+  // Later tests may lean on this one's temperature, pH or salinity.
+  await recomputeDerivedFrom(tx, tank, new Date(input.takenAt));
+  const test = await tx.findOneByOrFail(WaterTest, { id });
+  await onWaterTestSaved(tx, test);
+  return { test, warnings: normalized.warnings };
+}
+
+/** Merges the edit into the stored entries, then normalizes the whole test again (derived values included). */
+export async function updateWaterTest(
+  tx: EntityManager,
+  tank: Tank,
+  test: WaterTest,
+  patch: z.output<typeof updateWaterTestSchema>,
+  now = new Date(),
+): Promise<SavedWaterTest> {
+  const entries: Record<string, unknown> = { ...test.entries };
+  for (const [key, entry] of Object.entries(patch.entries ?? {})) {
+    if (entry === null) delete entries[key];
+    else if (entry !== undefined) entries[key] = entry;
+  }
+  if (Object.keys(entries).length === 0) {
+    throw errors.badRequest('A water test needs at least one reading.', [{ path: 'entries', message: 'Keep at least one reading, or delete the test.' }]);
+  }
+  const takenAt = patch.takenAt ?? test.takenAt.toISOString();
+  const normalized = await normalizeFor(tx, tank, test.id, takenAt, entries as WaterTestEntries, now);
+  await tx.update(WaterTest, { id: test.id }, { ...columnsOf(normalized), note: patch.note ?? test.note });
+  const earliest = Math.min(test.takenAt.getTime(), Date.parse(takenAt));
+  await recomputeDerivedFrom(tx, tank, new Date(earliest));
+  const saved = await tx.findOneByOrFail(WaterTest, { id: test.id });
+  await onWaterTestSaved(tx, saved);
+  return { test: saved, warnings: normalized.warnings };
+}
+
+/** Deletes for good (photos included); returns the photo files to remove once committed. */
+export async function deleteWaterTest(tx: EntityManager, tank: Tank, test: WaterTest): Promise<string[]> {
+  const keys = await storageKeysOf(tx, { waterTestIds: [test.id] });
+  await tx.delete(WaterTest, { id: test.id });
+  await recomputeDerivedFrom(tx, tank, test.takenAt);
+  await tankChanged(tx, tank.id);
+  return keys;
+}

@@ -1,0 +1,124 @@
+import type { SystemType } from '../care/system-types';
+import type { TankPhase } from '../care/types';
+import type { TankShape } from '../chemistry/tank-volume';
+import type { TestMethod } from '../readings/entry-units';
+import type { DOSE_UNITS, EQUIPMENT_CHANGES, OBSERVATION_CHECKS, OBSERVATION_SCALES, SOURCE_WATER_TYPES, TankEventKind } from '../schemas/tank-event.schema';
+
+/** Words shown for the tank lists in shared/: one table each, keyed by the lists so none can be missed. */
+export const SYSTEM_TYPE_LABELS: Record<SystemType, string> = {
+  'marine-fish-only': 'Marine, fish only',
+  reef: 'Reef (corals and fish)',
+  seahorse: 'Seahorse tank',
+  brackish: 'Brackish',
+  'tropical-freshwater': 'Tropical freshwater',
+  coldwater: 'Coldwater',
+};
+
+export const TANK_PHASE_LABELS: Record<TankPhase, { label: string; hint: string }> = {
+  cycling: { label: 'Still cycling', hint: 'The filter bacteria are still growing: ammonia or nitrite still show up.' },
+  established: { label: 'Established', hint: 'Ammonia and nitrite stay at zero and the tank is ready for (or has) animals.' },
+};
+
+export const TANK_SHAPE_LABELS: Record<TankShape, string> = {
+  rectangle: 'Rectangular',
+  cylinder: 'Round (cylinder)',
+  bowfront: 'Bow-front',
+};
+
+export const TEST_METHOD_LABELS: Record<TestMethod, string> = {
+  'liquid-kit': 'Liquid test kit',
+  strip: 'Test strip',
+  'digital-meter': 'Digital meter',
+  refractometer: 'Refractometer',
+  hydrometer: 'Hydrometer',
+  lab: 'Lab test',
+};
+
+export const TANK_EVENT_KIND_LABELS: Record<TankEventKind, string> = {
+  'water-change': 'Water change',
+  'supplement-dose': 'Dose',
+  'feeding-note': 'Feeding note',
+  'equipment-change': 'Equipment',
+  'livestock-added': 'Animals added',
+  'livestock-removed': 'Animals left',
+  observation: 'How the animals look',
+};
+
+export const SOURCE_WATER_LABELS: Record<(typeof SOURCE_WATER_TYPES)[number], string> = {
+  'natural-sea-water': 'Natural sea water',
+  'mixed-salt': 'Salt water I mixed',
+  'ro-di-fresh': 'RO/DI fresh water',
+  'tap-conditioned': 'Tap water with conditioner',
+};
+
+export const DOSE_UNIT_LABELS: Record<(typeof DOSE_UNITS)[number], string> = {
+  mL: 'mL',
+  L: 'L',
+  g: 'g',
+  mg: 'mg',
+  drops: 'drops',
+  capsules: 'capsules',
+  scoops: 'scoops',
+  tsp: 'teaspoons',
+};
+
+export const EQUIPMENT_CHANGE_LABELS: Record<(typeof EQUIPMENT_CHANGES)[number], string> = {
+  added: 'Added',
+  removed: 'Taken out',
+  replaced: 'Replaced',
+  adjusted: 'Adjusted',
+  cleaned: 'Cleaned',
+  failed: 'Stopped working',
+};
+
+type ObservationScale = keyof typeof OBSERVATION_SCALES;
+type ObservationValue = (typeof OBSERVATION_SCALES)[ObservationScale][number];
+
+export const OBSERVATION_SCALE_LABELS: Record<ObservationScale, string> = {
+  feedingResponse: 'Feeding',
+  breathing: 'Breathing (gills)',
+  colour: 'Colour',
+  buoyancy: 'Swimming level',
+  spots: 'Spots or film on the body',
+  fins: 'Fins',
+  hiding: 'Hiding',
+};
+
+export const OBSERVATION_VALUE_LABELS: Record<ObservationValue, string> = {
+  eager: 'Eager',
+  normal: 'As usual',
+  slow: 'Slow to eat',
+  'spat-out': 'Spat food out',
+  'ignored-food': 'Ignored food',
+  fast: 'Fast',
+  laboured: 'Laboured',
+  'at-surface': 'Gasping at the surface',
+  faded: 'Faded',
+  darker: 'Darker',
+  patchy: 'Patchy',
+  floating: 'Floating up',
+  sinking: 'Sinking',
+  tilted: 'Tilted',
+  none: 'None',
+  'fine-white-grains': 'Fine white grains, like salt',
+  'dusty-film': 'Dusty gold or grey film',
+  'larger-white': 'Larger white spots',
+  dark: 'Dark spots',
+  red: 'Red patches',
+  clamped: 'Held close to the body',
+  frayed: 'Frayed or torn',
+  reddened: 'Red at the base',
+  'more-than-usual': 'More than usual',
+  always: 'All the time',
+};
+
+export const OBSERVATION_CHECK_LABELS: Record<(typeof OBSERVATION_CHECKS)[number], string> = {
+  scratching: 'Rubbing or scratching on rock or sand',
+  lethargic: 'Listless, not moving much',
+  restingOnBottom: 'Resting on the bottom',
+  swollenBelly: 'Swollen belly',
+  cloudyEyes: 'Cloudy eyes',
+  wounds: 'Wounds or sores',
+  stringyWaste: 'Stringy white waste',
+  polypsRetracted: 'Coral polyps pulled in',
+};
