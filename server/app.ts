@@ -16,6 +16,7 @@ import { attachViewer } from './middleware/viewer';
 import { authRouter } from './modules/auth/auth.router';
 import { careProfileRouter } from './modules/care/care-profile.router';
 import { concernRouter } from './modules/concerns/concern.router';
+import { deskRouter } from './modules/desk/desk.router';
 import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { inviteRouter } from './modules/invites/invite.router';
@@ -111,6 +112,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(notificationRouter({ dataSource }));
   api.use(careProfileRouter({ dataSource }));
   api.use(concernRouter({ dataSource }));
+  api.use(deskRouter({ dataSource }));
   api.use(tankRouter({ dataSource }));
   api.use(livestockRouter({ dataSource, uploadsDir: config.uploadsDir }));
   api.use(waterTestRouter({ dataSource, uploadsDir: config.uploadsDir }));

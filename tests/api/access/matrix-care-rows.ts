@@ -17,7 +17,11 @@ const mentorOnly = (s: number): Expect => ({ anonymous: 401, outsider: 404, memb
 
 const tankPath = (w: World) => `/clubs/${w.club.id}/tanks/${w.tank.tank.id}`;
 
+/** The desk: mentors and admins (each sees only the tanks they watch); members have their own tank list. */
+const watchers = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: s, otherMentor: s, admin: s, suspended: 403 });
+
 export const CARE_ROWS: CareMatrixRow[] = [
+  { route: 'GET /clubs/:clubId/desk', request: (w) => ({ path: `/clubs/${w.club.id}/desk` }), expect: watchers(200) },
   { route: 'GET /clubs/:clubId/tanks/:tankId/concerns', request: (w) => ({ path: `${tankPath(w)}/concerns?status=all` }), expect: readers(200) },
   { route: 'GET /clubs/:clubId/tanks/:tankId/care', request: (w) => ({ path: `${tankPath(w)}/care` }), expect: readers(200) },
   { route: 'POST /clubs/:clubId/concerns/:concernId/acknowledge', request: (w) => ({ path: `/clubs/${w.club.id}/concerns/${w.concernId}/acknowledge`, body: { note: 'seen' } }), expect: mentorOnly(200) },

@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/card';
 import { ApiError } from '../../../lib/api-client';
 import { useConcernAction, useConcernHistory, type ConcernView } from '../api/care';
-import { SeverityBadge } from './severity-badge';
+import { SeverityBadge } from '../../../components/ui/severity-badge';
 
 const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 

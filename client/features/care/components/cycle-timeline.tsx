@@ -11,8 +11,16 @@ const STEPS = [
 const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
 
 /** Where the tank is in the nitrogen cycle, today's position, and when it is likely done. */
-export function CycleTimeline({ cycle, typical }: { cycle: CareSummary['cycle']; typical: CareSummary['cycleTypical'] }) {
+export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['cycle']; typical: CareSummary['cycleTypical']; phase: 'cycling' | 'established' }) {
   const setback = cycle.stage === 'setback';
+  if (phase === 'established' && !setback) {
+    return (
+      <section aria-labelledby="cycle-heading">
+        <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Nitrogen cycle</h3>
+        <p className="mt-2 text-sm text-tide-800">Established: the cycle is behind this tank. If ammonia or nitrite come back, it shows here as a setback.</p>
+      </section>
+    );
+  }
   const index = setback ? -1 : STEPS.findIndex((s) => s.stage === cycle.stage);
   const current = STEPS[index];
   return (

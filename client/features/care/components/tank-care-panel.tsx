@@ -20,7 +20,7 @@ export function TankCarePanel({ clubId, tankId, ownerId, phase }: { clubId: stri
       </p>
       <ConcernList concerns={s.concerns} clubId={clubId} tankId={tankId} ownerId={ownerId} />
       <DueTests due={s.due} />
-      <CycleTimeline cycle={s.cycle} typical={s.cycleTypical} />
+      <CycleTimeline cycle={s.cycle} typical={s.cycleTypical} phase={phase} />
       {phase === 'cycling' ? <Caution title="Fishless cycling">{CAUTIONS.fishlessCycling}</Caution> : null}
       <ReadinessPanel readiness={s.readiness} clubId={clubId} tankId={tankId} ownerId={ownerId} />
       <Caution title="Medication">{CAUTIONS.medication}</Caution>
