@@ -5,6 +5,7 @@ import { clubIdParams } from '../../../shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
+import { tankChanged } from '../concerns/tank-changed';
 import { ClubCareProfile } from './care-profile.entity';
 import { copyProfile, listProfiles, loadClubProfile, resolveProfile, updateProfile } from './care-profile.service';
 
@@ -47,9 +48,13 @@ export function careProfileRouter(deps: { dataSource: DataSource }): Router {
   router.put('/clubs/:clubId/care-profiles/:profileId', requireSignIn, validate(update), requireClubMember, async (req, res) => {
     const { params, body } = inputOf(res, update);
     authorize(req, 'update', 'CareProfile', { clubId: params.clubId });
-    const result = await dataSource.transaction((tx) =>
-      updateProfile(tx, { clubId: params.clubId, profileId: params.profileId, definition: body.definition, note: body.note, actorId: viewerOf(req).user.id, expectedVersion: body.baseVersion }),
-    );
+    const result = await dataSource.transaction(async (tx) => {
+      const updated = await updateProfile(tx, { clubId: params.clubId, profileId: params.profileId, definition: body.definition, note: body.note, actorId: viewerOf(req).user.id, expectedVersion: body.baseVersion });
+      // Every tank that follows the profile is judged again by the new version, in the same transaction.
+      const tanks: { id: string }[] = await tx.query(`SELECT id FROM tank WHERE club_id = $1 AND care_profile_key = $2 AND archived_at IS NULL`, [params.clubId, updated.profile.key]);
+      for (const tank of tanks) await tankChanged(tx, tank.id);
+      return updated;
+    });
     res.json({ profile: result.definition, changes: result.changes });
   });
 

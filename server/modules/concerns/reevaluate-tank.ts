@@ -115,11 +115,3 @@ export async function reevaluateTank(tx: EntityManager, tankId: string, now = ne
   }
   return result;
 }
-
-/** After a profile edit: every live tank of the club that follows it. */
-export async function reevaluateTanksUsingProfile(tx: EntityManager, clubId: string, profileKey: string, now = new Date()): Promise<Reevaluation[]> {
-  const tanks: { id: string }[] = await tx.query(`SELECT id FROM tank WHERE club_id = $1 AND care_profile_key = $2 AND archived_at IS NULL`, [clubId, profileKey]);
-  const out: Reevaluation[] = [];
-  for (const t of tanks) out.push(await reevaluateTank(tx, t.id, now));
-  return out;
-}
