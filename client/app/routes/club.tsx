@@ -1,3 +1,4 @@
+import { Link } from 'react-router';
 import { Can } from '@casl/react';
 import type { AppAbility } from '../../../shared/abilities';
 import { Notice } from '../../components/ui/card';
@@ -15,7 +16,11 @@ export function Component() {
   const isAdmin = ability.can('create', asSubject('Invite', { clubId: activeClub.clubId }));
   return (
     <>
-      <PageHeader title={activeClub.clubName} subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'} />
+      <PageHeader
+        title={activeClub.clubName}
+        subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'}
+        actions={<Link to="/club/profiles" className="inline-flex min-h-touch items-center rounded-full bg-white px-4 font-bold text-tide-800 ring-1 ring-tide-200">Care profiles</Link>}
+      />
       <div className="space-y-5">
         <Can<AppAbility> I="create" this={asSubject('Invite', { clubId: activeClub.clubId })}>
           <InvitePanel clubId={activeClub.clubId} />

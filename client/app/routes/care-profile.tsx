@@ -1,0 +1,50 @@
+import { useParams } from 'react-router';
+import { asSubject } from '../../../shared/abilities';
+import { Card, Notice } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { Spinner } from '../../components/ui/spinner';
+import { useSession } from '../../features/auth/components/session-provider';
+import { useProfile } from '../../features/care/api/profiles';
+import { ProfileRangesEditor } from '../../features/care/components/profile-ranges-editor';
+
+const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
+
+export function Component() {
+  const { key = '' } = useParams();
+  const { activeClub, ability } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const detail = useProfile(clubId, key);
+  if (detail.isPending) return <Spinner />;
+  if (detail.isError) return <Notice tone="error">{detail.error.message}</Notice>;
+  const d = detail.data;
+  const editable = d.source === 'club' && ability.can('update', asSubject('CareProfile', { clubId }));
+  return (
+    <>
+      <PageHeader title={d.profile.name} subtitle={d.source === 'club' ? `Club copy, version ${d.profile.version}, based on ${d.basedOnKey}` : 'Shipped with Shoalwise (make a club copy to adjust it)'} />
+      <div className="space-y-4">
+        <Card>
+          {/* A fresh editor per version, so a save shows the new numbers as the starting point. */}
+          <ProfileRangesEditor key={d.profile.version} clubId={clubId} profile={d.profile} id={d.id} editable={editable} />
+        </Card>
+        {d.history.length ? (
+          <Card>
+            <h2 className="text-lg font-extrabold text-tide-900">History</h2>
+            <ol className="mt-2 space-y-3">
+              {d.history.map((h) => (
+                <li key={h.version}>
+                  <p className="font-bold text-tide-900">Version {h.version} · {when.format(new Date(h.changedAt))}</p>
+                  <p className="text-sm text-tide-800">{h.note}</p>
+                  {h.changes.length ? (
+                    <ul className="list-disc pl-5 text-sm text-tide-700">
+                      {h.changes.map((c) => <li key={c}>{c}</li>)}
+                    </ul>
+                  ) : null}
+                </li>
+              ))}
+            </ol>
+          </Card>
+        ) : null}
+      </div>
+    </>
+  );
+}

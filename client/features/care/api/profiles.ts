@@ -1,0 +1,52 @@
+import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import type { CareProfile } from '../../../../shared/care';
+import type { CopyCareProfileInput } from '../../../../shared/schemas/care-profile.schema';
+import { api } from '../../../lib/api-client';
+
+export interface ProfileSummary {
+  key: string;
+  name: string;
+  version: number;
+  systemTypes: string[];
+  animals: string;
+  source: 'built-in' | 'club';
+  id?: string;
+  basedOnKey?: string;
+}
+export interface ProfileDetail {
+  profile: CareProfile;
+  source: 'built-in' | 'club';
+  id?: string;
+  basedOnKey?: string;
+  history: { version: number; note: string; changes: string[]; changedById: string | null; changedAt: string }[];
+}
+
+export const profileKeys = {
+  all: (clubId: string) => ['care-profiles', clubId] as const,
+  detail: (clubId: string, key: string) => [...profileKeys.all(clubId), key] as const,
+};
+
+export const profilesQuery = (clubId: string) =>
+  queryOptions({ queryKey: profileKeys.all(clubId), queryFn: ({ signal }) => api.get<{ profiles: ProfileSummary[] }>(`/clubs/${clubId}/care-profiles`, signal), staleTime: 60_000 });
+export const profileQuery = (clubId: string, key: string) =>
+  queryOptions({ queryKey: profileKeys.detail(clubId, key), queryFn: ({ signal }) => api.get<ProfileDetail>(`/clubs/${clubId}/care-profiles/${encodeURIComponent(key)}`, signal), staleTime: 60_000 });
+
+export const useProfiles = (clubId: string) => useQuery(profilesQuery(clubId));
+export const useProfile = (clubId: string, key: string) => useQuery(profileQuery(clubId, key));
+
+export function useCopyProfile(clubId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (i: CopyCareProfileInput) => api.post<{ id: string; key: string; version: number }>(`/clubs/${clubId}/care-profiles`, i),
+    onSuccess: () => qc.invalidateQueries({ queryKey: profileKeys.all(clubId) }),
+  });
+}
+
+export function useSaveProfile(clubId: string) {
+  const qc = useQueryClient();
+  return useMutation({
+    mutationFn: (i: { id: string; definition: CareProfile; baseVersion: number; note: string }) =>
+      api.put<{ profile: CareProfile; changes: string[] }>(`/clubs/${clubId}/care-profiles/${i.id}`, { definition: i.definition, baseVersion: i.baseVersion, note: i.note }),
+    onSuccess: () => qc.invalidateQueries({ queryKey: profileKeys.all(clubId) }),
+  });
+}
