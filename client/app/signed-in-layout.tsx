@@ -14,6 +14,7 @@ function ShellForSession() {
   const nav: NavItem[] = [
     { to: '/', label: 'Home', end: true },
     { to: '/tanks', label: 'My tanks' },
+    ...(activeClub ? [{ to: '/questions', label: 'Questions' }] : []),
     ...(activeClub && activeClub.role !== 'member' ? [{ to: '/desk', label: 'Mentor desk' }] : []),
     ...(activeClub && ability.can('read', asSubject('Club', { id: clubId })) ? [{ to: '/club', label: 'Club' }] : []),
   ];

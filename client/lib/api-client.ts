@@ -50,20 +50,30 @@ export function resetCsrfToken(): void {
   csrfToken = undefined;
 }
 
-async function toApiError(res: Response): Promise<ApiError> {
+/** The CSRF token for a request sent outside `request`, e.g. an XHR that reports upload progress. */
+export function csrfTokenForRequest(): Promise<string> {
+  return (csrfToken ??= fetchCsrfToken());
+}
+
+/** An error answer (status, body text, Retry-After header) as the ApiError the UI shows. */
+export function apiErrorFrom(status: number, bodyText: string, retryAfterHeader: string | null): ApiError {
   let code = 'http_error';
-  let message = res.status >= 500 ? 'The server had a problem. Please try again.' : `Request failed (${res.status}).`;
+  let message = status >= 500 ? 'The server had a problem. Please try again.' : `Request failed (${status}).`;
   let issues: FieldIssue[] = [];
   try {
-    const body = (await res.json()) as { error?: { code?: string; message?: string }; issues?: FieldIssue[] };
+    const body = JSON.parse(bodyText) as { error?: { code?: string; message?: string }; issues?: FieldIssue[] };
     code = body.error?.code ?? code;
     message = body.error?.message ?? message;
     issues = body.issues ?? [];
   } catch {
     // not JSON: keep the generic message
   }
-  const retryAfter = Number(res.headers.get('Retry-After')) || undefined;
-  return new ApiError(res.status, code, message, issues, retryAfter);
+  return new ApiError(status, code, message, issues, Number(retryAfterHeader) || undefined);
+}
+
+async function toApiError(res: Response): Promise<ApiError> {
+  const text = await res.text().catch(() => '');
+  return apiErrorFrom(res.status, text, res.headers.get('Retry-After'));
 }
 
 export interface RequestOptions {
@@ -83,7 +93,7 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
     body = JSON.stringify(options.body);
   }
   const send = async () => {
-    if (UNSAFE.has(method)) headers['X-CSRF-Token'] = await (csrfToken ??= fetchCsrfToken());
+    if (UNSAFE.has(method)) headers['X-CSRF-Token'] = await csrfTokenForRequest();
     return fetch(`/api${path}`, { method, headers, body, credentials: 'same-origin', signal: options.signal });
   };
   let res = await send();

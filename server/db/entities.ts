@@ -12,6 +12,7 @@ import { Notification } from '../modules/notifications/notification.entity';
 import { NotificationDigest } from '../modules/notifications/notification-digest.entity';
 import { NotificationPreference } from '../modules/notifications/notification-preference.entity';
 import { Photo } from '../modules/photos/photo.entity';
+import { Question, QuestionReply } from '../modules/questions/question.entity';
 import { Livestock } from '../modules/tanks/livestock.entity';
 import { TankEvent } from '../modules/tanks/tank-event.entity';
 import { Tank } from '../modules/tanks/tank.entity';
@@ -19,4 +20,4 @@ import { WaterTest } from '../modules/tanks/water-test.entity';
 import { User } from '../modules/users/user.entity';
 
 /** Every TypeORM entity, listed explicitly. */
-export const entities: Function[] = [User, Club, Membership, Invite, PasswordReset, MentorAssignment, AuditEvent, CapturedMail, ClubCareProfile, ClubCareProfileVersion, Tank, Livestock, WaterTest, TankEvent, Photo, MentorRequest, Notification, NotificationPreference, NotificationDigest, ConcernRow, TankReadiness];
+export const entities: Function[] = [User, Club, Membership, Invite, PasswordReset, MentorAssignment, AuditEvent, CapturedMail, ClubCareProfile, ClubCareProfileVersion, Tank, Livestock, WaterTest, TankEvent, Photo, MentorRequest, Notification, NotificationPreference, NotificationDigest, ConcernRow, TankReadiness, Question, QuestionReply];

@@ -9,7 +9,7 @@ type AnyEntryUnit = (typeof ENTRY_UNITS)[ParameterKey][number];
 export const ENTRY_UNIT_LABELS: Record<AnyEntryUnit, string> = {
   '°C': '°C',
   '°F': '°F',
-  SG: 'SG (specific gravity)',
+  SG: 'SG',
   ppt: 'ppt',
   PSU: 'PSU',
   'mS/cm': 'Conductivity mS/cm',

@@ -7,6 +7,7 @@ import { createTestApp, type TestApp } from '../../helpers/test-app';
 import { CARE_ROWS } from './matrix-care-rows';
 import { TANK_ROWS } from './matrix-tank-rows';
 import { MENTORSHIP_ROWS } from './matrix-mentorship-rows';
+import { QUESTION_ROWS } from './matrix-question-rows';
 import { buildWorld, PERSONAS, type Persona, type World } from './world';
 
 /**
@@ -80,6 +81,7 @@ const ROWS: Row[] = [
   ...TANK_ROWS,
   ...CARE_ROWS,
   ...MENTORSHIP_ROWS,
+  ...QUESTION_ROWS,
 ];
 
 describe('authorization matrix', () => {

@@ -64,6 +64,15 @@ describe('the mentor desk', () => {
     expect(cycling.rows.map((r) => r.name)).toEqual(['Cycling']);
   });
 
+  it('when a mentee asks about a test, then their row counts it as unanswered and the filter finds it', async () => {
+    const [test] = await t.dataSource.query(`SELECT id FROM water_test WHERE tank_id = $1 ORDER BY taken_at DESC LIMIT 1`, [tanks.calm]);
+    const ben = await signedIn(t.app, (await t.dataSource.query(`SELECT u.email FROM app_user u JOIN tank t ON t.owner_id = u.id WHERE t.id = $1`, [tanks.calm]))[0].email);
+    const asked = await ben.post(`/api/clubs/${clubId}/tanks/${tanks.calm}/questions`, { title: 'Is nitrate 2 fine?', body: 'For my seahorses?', waterTestId: test.id });
+    expect(asked.status).toBe(201);
+    const desk = (await (await signedIn(t.app, emails.mentor)).get(`/api/clubs/${clubId}/desk?unanswered=1`)).body as DeskView;
+    expect(desk.rows.map((r) => [r.name, r.unansweredQuestions])).toEqual([['Calm', 1]]);
+  });
+
   it('when an admin opens the desk, then every tank of the club is there; a member gets 403', async () => {
     const desk = (await (await signedIn(t.app, emails.admin)).get(`/api/clubs/${clubId}/desk`)).body as DeskView;
     expect(desk.rows.map((r) => r.name).sort()).toEqual(['Calm', 'Cycling', 'Not mine', 'Troubled']);

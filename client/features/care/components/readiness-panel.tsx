@@ -5,7 +5,7 @@ import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/card';
 import { ApiError } from '../../../lib/api-client';
 import { useSaveChecklist, useSignOff, useWithdrawSignOff, type CareSummary } from '../api/care';
-import { CAUTIONS, Caution } from './cautions';
+import { CAUTIONS, Caution } from '../../../components/ui/cautions';
 
 const CHECKS = [
   { key: 'equipmentRunning', label: 'Heater, pump and lights have run for a while without trouble' },

@@ -1,7 +1,7 @@
 import { Card, Notice } from '../../../components/ui/card';
 import { Spinner } from '../../../components/ui/spinner';
 import { useCareSummary } from '../api/care';
-import { CAUTIONS, Caution } from './cautions';
+import { CAUTIONS, Caution } from '../../../components/ui/cautions';
 import { ConcernList } from './concern-list';
 import { CycleTimeline } from './cycle-timeline';
 import { DueTests } from './due-tests';

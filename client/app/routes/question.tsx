@@ -1,0 +1,92 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { lazy, Suspense } from 'react';
+import { Link, useParams } from 'react-router';
+import { asSubject } from '../../../shared/abilities';
+import { Button } from '../../components/ui/button';
+import { Card, Notice } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { Spinner } from '../../components/ui/spinner';
+import { useSession } from '../../features/auth/components/session-provider';
+import { questionKeys, useMarkAnswered, useQuestion } from '../../features/questions/api/questions';
+import { QuestionRouteError } from '../../features/questions/components/question-route-error';
+import { ReplyBox } from '../../features/questions/components/reply-box';
+import { SnapshotPanel } from '../../features/questions/components/snapshot-panel';
+import { Thread } from '../../features/questions/components/thread';
+import { useSocketEvent, useSocketReconnect } from '../../lib/socket';
+
+// The chart library is the heaviest part of the page: the thread and figures show first.
+const ReadingsChart = lazy(() => import('../../features/questions/components/readings-chart').then((m) => ({ default: m.ReadingsChart })));
+
+export function Component() {
+  const { questionId = '' } = useParams();
+  const { me, activeClub, ability } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const detail = useQuestion(clubId, questionId);
+  const mark = useMarkAnswered(clubId, questionId);
+  const qc = useQueryClient();
+  const refresh = () => void qc.invalidateQueries({ queryKey: questionKeys.detail(clubId, questionId) });
+  // A reply by someone else touches the tank's watchers (and notifies the asker): either way, fetch the thread again.
+  useSocketEvent('tankChanged', (p) => {
+    if (p.tankId === detail.data?.question.tankId) refresh();
+  });
+  useSocketEvent('notification', ({ notification }) => {
+    if (notification.subject?.id === questionId) refresh();
+  });
+  useSocketReconnect(refresh);
+
+  if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
+  if (detail.isError) throw detail.error;
+  if (detail.isPending) return <Spinner label="Loading the question…" />;
+  const d = detail.data;
+  const q = d.question;
+  const subject = asSubject('Question', { clubId: q.clubId, askerId: q.asker.userId });
+  const isAsker = ability.can('update', subject);
+  const canReply = isAsker || ability.can('answer', subject);
+
+  return (
+    <>
+      <PageHeader
+        title={q.title}
+        subtitle={`${q.asker.userId === me.user.id ? 'You' : q.asker.displayName} asked about ${q.tankName}`}
+        actions={
+          <Link to={`/tanks/${q.tankId}`} className="inline-flex min-h-touch items-center rounded-full bg-white px-4 font-bold text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50">
+            Open the tank
+          </Link>
+        }
+      />
+      <div className="mb-4 flex flex-wrap items-center gap-3">
+        {q.status === 'answered' ? (
+          <span className="rounded-full bg-kelp-100 px-3 py-1 text-sm font-extrabold text-kelp-700">✓ Answered</span>
+        ) : q.awaitingAnswer ? (
+          <span className="rounded-full bg-amber-100 px-3 py-1 text-sm font-extrabold text-amber-700">● Waiting for an answer</span>
+        ) : (
+          <span className="rounded-full bg-tide-50 px-3 py-1 text-sm font-extrabold text-tide-700">↩ Replied: over to {isAsker ? 'you' : q.asker.displayName}</span>
+        )}
+        {isAsker ? (
+          <Button variant={q.status === 'answered' ? 'secondary' : 'primary'} busy={mark.isPending} onClick={() => mark.mutate(q.status !== 'answered')}>
+            {q.status === 'answered' ? 'Reopen the question' : 'Mark answered'}
+          </Button>
+        ) : null}
+      </div>
+      {mark.isError ? <div className="mb-4"><Notice tone="error">{mark.error.message}</Notice></div> : null}
+      <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
+        <div className="space-y-4 lg:order-2">
+          <SnapshotPanel snapshot={d.snapshot} prefs={me.user} />
+          <Suspense fallback={<Card><Spinner label="Drawing the chart…" /></Card>}>
+            <ReadingsChart readings={d.readings} snapshot={d.snapshot} prefs={me.user} />
+          </Suspense>
+        </div>
+        <section aria-label="Conversation" className="space-y-4 lg:order-1">
+          <Thread detail={d} />
+          {canReply ? (
+            <Card><ReplyBox key={questionId} clubId={clubId} questionId={questionId} mentionable={d.mentionable} /></Card>
+          ) : (
+            <Notice tone="info">You can read this question but no longer reply: the mentoring has ended.</Notice>
+          )}
+        </section>
+      </div>
+    </>
+  );
+}
+
+export const ErrorBoundary = QuestionRouteError;

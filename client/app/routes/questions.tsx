@@ -1,0 +1,50 @@
+import { useQueryClient } from '@tanstack/react-query';
+import { useState } from 'react';
+import { Notice } from '../../components/ui/card';
+import { PageHeader } from '../../components/ui/page-header';
+import { useSession } from '../../features/auth/components/session-provider';
+import { questionKeys, type ListStatus } from '../../features/questions/api/questions';
+import { QuestionList } from '../../features/questions/components/question-list';
+import { QuestionRouteError } from '../../features/questions/components/question-route-error';
+import { useSocketEvent } from '../../lib/socket';
+
+const TABS: { status: ListStatus; label: string }[] = [
+  { status: 'open', label: 'Open' },
+  { status: 'all', label: 'All' },
+];
+
+export function Component() {
+  const { activeClub } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const answers = activeClub?.role === 'mentor' || activeClub?.role === 'admin';
+  const [status, setStatus] = useState<ListStatus>(answers ? 'open' : 'all');
+  const qc = useQueryClient();
+  useSocketEvent('tankChanged', (p) => {
+    if (p.clubId === clubId) void qc.invalidateQueries({ queryKey: questionKeys.lists(clubId) });
+  });
+  if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
+
+  return (
+    <>
+      <PageHeader
+        title={answers ? 'Questions' : 'My questions'}
+        subtitle={answers ? 'What your mentees and the club’s keepers asked about their readings.' : 'Ask from any water test or observation on your tank’s page.'}
+      />
+      <div role="group" aria-label="Which questions" className="mb-4 inline-flex gap-1 rounded-full bg-white p-1 shadow-card">
+        {TABS.map((t) => (
+          <button key={t.status} type="button" aria-pressed={status === t.status} onClick={() => setStatus(t.status)} className={`min-h-touch rounded-full px-4 text-sm font-bold ${status === t.status ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50'}`}>
+            {t.label}
+          </button>
+        ))}
+      </div>
+      <QuestionList
+        clubId={clubId}
+        status={status}
+        showAsker={answers}
+        empty={status === 'open' ? 'No open questions. When someone asks about a reading, it shows here.' : answers ? 'No questions yet.' : 'You have not asked anything yet. Open a tank and press “Ask about this” beside a test.'}
+      />
+    </>
+  );
+}
+
+export const ErrorBoundary = QuestionRouteError;

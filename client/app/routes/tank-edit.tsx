@@ -1,0 +1,100 @@
+import { useMemo, useState } from 'react';
+import { useNavigate, useParams } from 'react-router';
+import { asSubject } from '../../../shared/abilities';
+import { Button } from '../../components/ui/button';
+import { Card, Notice } from '../../components/ui/card';
+import { ConfirmDialog } from '../../components/ui/confirm-dialog';
+import { PageHeader } from '../../components/ui/page-header';
+import { Spinner } from '../../components/ui/spinner';
+import { useSession } from '../../features/auth/components/session-provider';
+import { useUploadPhotos } from '../../features/tanks/api/photos';
+import { useSetArchived, useTank, useUpdateTank } from '../../features/tanks/api/tanks';
+import { TankForm } from '../../features/tanks/components/tank-form/tank-form';
+import { TankRouteError } from '../../features/tanks/components/tank-route-error';
+import { PhotoUploadError } from '../../features/tanks/lib/photo-upload-error';
+import { draftFromTank } from '../../features/tanks/lib/tank-draft';
+
+export function Component() {
+  const { tankId = '' } = useParams();
+  const { me, activeClub, ability } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const tank = useTank(clubId, tankId);
+  const update = useUpdateTank(clubId, tankId);
+  const archive = useSetArchived(clubId, tankId);
+  const upload = useUploadPhotos(clubId);
+  const navigate = useNavigate();
+  const [confirming, setConfirming] = useState(false);
+  const [saved, setSaved] = useState(false);
+  // The form reads its defaults once, on mount: a refetch after saving does not reset what is on screen.
+  const initial = useMemo(() => (tank.data ? draftFromTank(tank.data, me.user) : undefined), [tank.data, me.user]);
+
+  if (tank.isError) throw tank.error;
+  if (tank.isPending || !initial) return <Spinner label="Loading the tank…" />;
+  const t = tank.data;
+  const allowed = ability.can('update', asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id }));
+  const open = (message: string) => navigate(`/tanks/${tankId}`, { state: { saved: { message, warnings: [] } } });
+
+  if (!allowed) return <Notice tone="warning">Only the keeper of this tank can change it.</Notice>;
+  if (t.archivedAt) {
+    return (
+      <>
+        <PageHeader title={t.name} subtitle="Archived" />
+        <Notice tone="info">This tank is archived. Restore it to change its details or log new tests.</Notice>
+        <Button className="mt-4" busy={archive.isPending} onClick={() => archive.mutate(false, { onSuccess: () => open('The tank is back in your list.') })}>Restore the tank</Button>
+      </>
+    );
+  }
+  return (
+    <>
+      <PageHeader title={`Edit ${t.name}`} />
+      <div className="space-y-6">
+        <Card>
+          <TankForm
+            clubId={clubId}
+            prefs={me.user}
+            initial={initial}
+            submitLabel="Save changes"
+            onSkipPhotos={() => open('Changes saved.')}
+            onSave={async (input, photos) => {
+              if (!saved) {
+                await update.mutateAsync(input);
+                setSaved(true);
+              }
+              if (photos.length) {
+                try {
+                  await upload.mutateAsync({ tankId, files: photos });
+                } catch (error) {
+                  throw new PhotoUploadError(error);
+                }
+              }
+              open('Changes saved.');
+            }}
+          />
+        </Card>
+        <Card>
+          <h2 className="text-lg font-extrabold text-tide-900">Archive this tank</h2>
+          <p className="mt-1 text-tide-700">Taken the tank down? Archiving hides it from your list but keeps its whole history. You can restore it at any time.</p>
+          <Button variant="secondary" className="mt-3" onClick={() => setConfirming(true)}>Archive…</Button>
+        </Card>
+      </div>
+      <ConfirmDialog
+        open={confirming}
+        title={`Archive ${t.name}?`}
+        confirmLabel="Archive it"
+        busy={archive.isPending}
+        onCancel={() => setConfirming(false)}
+        onConfirm={() =>
+          archive.mutate(true, {
+            onSuccess: () => navigate('/tanks', { replace: true }),
+            onSettled: () => setConfirming(false),
+          })
+        }
+      >
+        <p>Its tests, entries and photos stay, readable by you and your mentor. No new tests can be logged until you restore it.</p>
+        {archive.isError ? <Notice tone="error">{archive.error.message}</Notice> : null}
+      </ConfirmDialog>
+    </>
+  );
+}
+
+export const ErrorBoundary = TankRouteError;

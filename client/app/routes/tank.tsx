@@ -1,0 +1,85 @@
+import type { ReactNode } from 'react';
+import { useLocation, useParams } from 'react-router';
+import { asSubject } from '../../../shared/abilities';
+import { Button } from '../../components/ui/button';
+import { Card, Notice } from '../../components/ui/card';
+import { Spinner } from '../../components/ui/spinner';
+import { useSession } from '../../features/auth/components/session-provider';
+import { TankCarePanel } from '../../features/care/components/tank-care-panel';
+import { useCareProfile } from '../../features/tanks/api/care-profiles';
+import { useTankPhotos } from '../../features/tanks/api/photos';
+import { useSetArchived, useTank } from '../../features/tanks/api/tanks';
+import { TankHistory } from '../../features/tanks/components/history/tank-history';
+import { Timeline } from '../../features/tanks/components/history/timeline';
+import { LivestockPanel } from '../../features/tanks/components/livestock/livestock-panel';
+import { TankHeader } from '../../features/tanks/components/tank-header';
+import { TankRecords } from '../../features/tanks/components/tank-records';
+import { TankRouteError } from '../../features/tanks/components/tank-route-error';
+import { AskAboutRecent } from '../../features/questions/components/ask-about-recent';
+import type { SavedNotice } from '../../features/tanks/lib/saved-notice';
+
+function Section({ title, children }: { title: string; children: ReactNode }) {
+  return (
+    <section aria-label={title}>
+      <h2 className="mb-3 text-xl font-extrabold text-tide-900">{title}</h2>
+      {children}
+    </section>
+  );
+}
+
+export function Component() {
+  const { tankId = '' } = useParams();
+  const { me, activeClub, ability } = useSession();
+  const clubId = activeClub?.clubId ?? '';
+  const tank = useTank(clubId, tankId);
+  const profile = useCareProfile(clubId, tank.data?.careProfileKey);
+  const photos = useTankPhotos(clubId, tankId);
+  const restore = useSetArchived(clubId, tankId);
+  const saved = (useLocation().state as { saved?: SavedNotice } | null)?.saved;
+
+  if (tank.isError) throw tank.error;
+  if (tank.isPending) return <Spinner label="Loading the tank…" />;
+  const t = tank.data;
+  const subject = asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id });
+  const active = !t.archivedAt;
+  const canEdit = active && ability.can('update', subject);
+  const canLog = active && ability.can('create', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
+  const tankPhoto = photos.data?.find((p) => !p.waterTestId && !p.eventId);
+
+  return (
+    <>
+      <TankHeader tank={t} prefs={me.user} profileName={profile.data?.name} photo={tankPhoto} isOwn={t.owner.id === me.user.id} canLog={canLog} canEdit={canEdit} />
+      <div className="space-y-8">
+        {saved ? (
+          <Notice tone={saved.warnings.length ? 'warning' : 'success'}>
+            {saved.message}
+            {saved.toCharts ? <> <a href="#readings-heading" className="font-bold underline">Go to the charts</a></> : null}
+            {saved.warnings.length ? <ul className="mt-1 list-disc pl-5">{saved.warnings.map((w) => <li key={w}>{w}</li>)}</ul> : null}
+          </Notice>
+        ) : null}
+        {!active ? (
+          <Notice tone="info">
+            This tank is archived: its history stays, but nothing new can be logged.{' '}
+            {ability.can('update', subject) ? <Button variant="secondary" className="ml-2" busy={restore.isPending} onClick={() => restore.mutate(false)}>Restore it</Button> : null}
+          </Notice>
+        ) : null}
+        <TankCarePanel clubId={clubId} tankId={t.id} ownerId={t.owner.id} phase={t.phase} />
+        <TankHistory clubId={clubId} tankId={t.id} profile={profile.data} prefs={me.user} cycling={t.phase === 'cycling'} editable={canLog} />
+        <Section title={t.owner.id === me.user.id ? 'Ask your mentor' : 'Questions'}>
+          <Card><AskAboutRecent clubId={clubId} tankId={t.id} ownerId={t.owner.id} prefs={me.user} canAsk={active && ability.can('create', asSubject('Question', { clubId: t.clubId, askerId: t.owner.id }))} /></Card>
+        </Section>
+        <Section title="Timeline">
+          <Card><Timeline clubId={clubId} tankId={t.id} profile={profile.data} prefs={me.user} editable={canLog} /></Card>
+        </Section>
+        <Section title="Animals">
+          <Card><LivestockPanel clubId={clubId} tankId={t.id} livestock={t.livestock} editable={canEdit} /></Card>
+        </Section>
+        <Section title="Records">
+          <Card><TankRecords clubId={clubId} tankId={t.id} canImport={canLog} /></Card>
+        </Section>
+      </div>
+    </>
+  );
+}
+
+export const ErrorBoundary = TankRouteError;

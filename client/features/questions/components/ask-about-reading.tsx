@@ -1,0 +1,85 @@
+import { useAbility } from '@casl/react';
+import { useId, useState } from 'react';
+import { useNavigate } from 'react-router';
+import { asSubject, type AppAbility } from '../../../../shared/abilities';
+import { QUESTION_BODY_MAX, QUESTION_TITLE_MAX } from '../../../../shared/schemas/question.schema';
+import { Button } from '../../../components/ui/button';
+import { Notice } from '../../../components/ui/card';
+import { ApiError } from '../../../lib/api-client';
+import { useAskQuestion } from '../api/questions';
+import { useDraft } from '../lib/use-draft';
+
+const fieldClass = 'mt-1 block w-full rounded-xl border border-tide-200 bg-white px-3 py-2 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200';
+
+interface Props {
+  clubId: string;
+  tankId: string;
+  waterTestId?: string;
+  eventId?: string;
+  /** The tank's keeper: when given, the button only shows for people who may ask about this tank. */
+  ownerId?: string;
+  label?: string;
+}
+
+/** "Ask about this" beside a water test or an observation: a short form that opens the question's thread once sent. */
+export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId, label = 'Ask about this' }: Props) {
+  const ability = useAbility<AppAbility>();
+  const about = waterTestId ?? eventId ?? '';
+  const [open, setOpen] = useState(false);
+  const [title, setTitle, clearTitle] = useDraft(`ask.${about}.title`);
+  const [body, setBody, clearBody] = useDraft(`ask.${about}.body`);
+  const ask = useAskQuestion(clubId, tankId);
+  const navigate = useNavigate();
+  const id = useId();
+  if (ownerId && !ability.can('create', asSubject('Question', { clubId, askerId: ownerId }))) return null;
+
+  const error = ask.error instanceof ApiError ? ask.error : undefined;
+  const send = async () => {
+    try {
+      const res = await ask.mutateAsync({ title, body, mentionIds: [], ...(waterTestId ? { waterTestId } : { eventId }) });
+      clearTitle();
+      clearBody();
+      void navigate(`/questions/${res.question.id}`);
+    } catch {
+      // Shown below; the text stays in the form.
+    }
+  };
+
+  if (!open) {
+    return (
+      <Button type="button" variant="secondary" onClick={() => setOpen(true)} aria-expanded={false} aria-controls={id}>
+        <span aria-hidden>?</span> {label}
+      </Button>
+    );
+  }
+  return (
+    <form
+      id={id}
+      aria-label="Ask your mentor about this reading"
+      className="w-full space-y-3 rounded-card bg-tide-50 p-4 ring-1 ring-tide-200"
+      onSubmit={(e) => {
+        e.preventDefault();
+        void send();
+      }}
+    >
+      <div>
+        <label htmlFor={`${id}-title`} className="block text-sm font-bold text-tide-800">Your question</label>
+        <input id={`${id}-title`} value={title} maxLength={QUESTION_TITLE_MAX} required onChange={(e) => setTitle(e.target.value)} placeholder="Is this nitrate OK for my seahorses?" className={`${fieldClass} min-h-touch`} aria-invalid={error?.fieldMessage('title') ? true : undefined} />
+        {error?.fieldMessage('title') ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error.fieldMessage('title')}</p> : null}
+      </div>
+      <div>
+        <label htmlFor={`${id}-body`} className="block text-sm font-bold text-tide-800">Details</label>
+        <textarea id={`${id}-body`} value={body} rows={4} maxLength={QUESTION_BODY_MAX} required onChange={(e) => setBody(e.target.value)} placeholder="What you noticed, what you already tried…" className={fieldClass} aria-invalid={error?.fieldMessage('body') ? true : undefined} />
+        <p className="mt-1 text-sm text-tide-600">Your mentor sees the figures and concerns of this reading as they are now. **bold**, lists with “- ” and links work.</p>
+        {error?.fieldMessage('body') ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error.fieldMessage('body')}</p> : null}
+      </div>
+      {ask.isError && !error?.fieldMessage('title') && !error?.fieldMessage('body') ? (
+        <Notice tone="error">{error ? error.message : 'Could not send: check your connection.'} Your text is kept: try again.</Notice>
+      ) : null}
+      <div className="flex flex-wrap gap-2">
+        <Button type="submit" busy={ask.isPending}>Send question</Button>
+        <Button type="button" variant="ghost" onClick={() => setOpen(false)}>Not now</Button>
+      </div>
+    </form>
+  );
+}

@@ -1,0 +1,32 @@
+import type { PersonRef } from '../../../../shared/schemas/notification-views';
+import type { QuestionDetailView } from '../../../../shared/schemas/question-views';
+import { relativeTime } from '../../../lib/relative-time';
+import { formatDateTime } from '../lib/figures';
+import { MarkdownLite } from './markdown-lite';
+
+function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: string; body: string; names: string[]; isAsker: boolean }) {
+  return (
+    <li className={`rounded-card p-4 shadow-card ${isAsker ? 'bg-white' : 'bg-kelp-100/40 ring-1 ring-kelp-500/20'}`}>
+      <p className="mb-2 flex flex-wrap items-baseline gap-x-2 text-sm">
+        <span className="font-extrabold text-tide-900">{author.displayName}</span>
+        {isAsker ? <span className="text-xs font-bold text-tide-600">asked</span> : null}
+        <time dateTime={at} title={formatDateTime(at)} className="text-tide-600">{relativeTime(at)}</time>
+      </p>
+      <MarkdownLite text={body} mentionNames={names} />
+    </li>
+  );
+}
+
+/** The question and every reply, oldest first; the asker's messages and the answers look different. */
+export function Thread({ detail }: { detail: QuestionDetailView }) {
+  const { question, replies } = detail;
+  const names = [...new Set([...detail.mentionable, question.asker, ...replies.map((r) => r.author)].map((p) => p.displayName))];
+  return (
+    <ol aria-label="Thread" className="space-y-3">
+      <Message author={question.asker} at={question.createdAt} body={question.body} names={names} isAsker />
+      {replies.map((r) => (
+        <Message key={r.id} author={r.author} at={r.createdAt} body={r.body} names={names} isAsker={r.author.userId === question.asker.userId} />
+      ))}
+    </ol>
+  );
+}

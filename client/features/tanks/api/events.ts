@@ -1,0 +1,40 @@
+import { queryOptions, useInfiniteQuery, useMutation, useQuery } from '@tanstack/react-query';
+import type { CreateTankEventInput } from '../../../../shared/schemas/tank-event.schema';
+import type { Page, TankEventView, TimelineItem } from '../../../../shared/schemas/tank-views';
+import { api } from '../../../lib/api-client';
+import { tankKeys } from './keys';
+import { useTankReadingsChanged } from './water-tests';
+
+const tankPath = (clubId: string, tankId: string) => `/clubs/${clubId}/tanks/${tankId}`;
+
+/** Water changes, for the reference lines on the charts. */
+export const waterChangesQuery = (clubId: string, tankId: string) =>
+  queryOptions({
+    queryKey: tankKeys.waterChanges(clubId, tankId),
+    queryFn: ({ signal }) =>
+      api.get<Page<TankEventView<'water-change'>>>(`${tankPath(clubId, tankId)}/events?kind=water-change&limit=500`, signal).then((p) => p.items),
+  });
+export const useWaterChanges = (clubId: string, tankId: string) => useQuery(waterChangesQuery(clubId, tankId));
+
+const TIMELINE_PAGE = 20;
+
+export function useTimeline(clubId: string, tankId: string) {
+  return useInfiniteQuery({
+    queryKey: tankKeys.timeline(clubId, tankId),
+    initialPageParam: null as string | null,
+    queryFn: ({ pageParam, signal }) => {
+      const qs = new URLSearchParams({ limit: String(TIMELINE_PAGE) });
+      if (pageParam) qs.set('before', pageParam);
+      return api.get<Page<TimelineItem>>(`${tankPath(clubId, tankId)}/timeline?${qs}`, signal);
+    },
+    getNextPageParam: (last) => last.nextCursor,
+  });
+}
+
+export function useCreateTankEvent(clubId: string, tankId: string) {
+  const changed = useTankReadingsChanged(clubId, tankId);
+  return useMutation({
+    mutationFn: (input: CreateTankEventInput) => api.post<{ event: TankEventView }>(`${tankPath(clubId, tankId)}/events`, input).then((r) => r.event),
+    onSuccess: changed,
+  });
+}

@@ -1,0 +1,105 @@
+import { Link } from 'react-router';
+import { PARAMETER_KEYS, parameterInfo } from '../../../../../shared/care/parameters';
+import { builtInProfile, defaultProfileFor } from '../../../../../shared/care/profiles';
+import { SYSTEM_TYPE_LABELS } from '../../../../../shared/constants/tank-labels';
+import type { TankView } from '../../../../../shared/schemas/tank-views';
+import { useCareProfile } from '../../api/care-profiles';
+import { useRecentTests } from '../../api/water-tests';
+import { verdictFor } from '../../lib/bands';
+import { formatDisplay, formatVolume, type UnitPrefs } from '../../lib/display-units';
+import { latestValues } from '../../lib/latest-values';
+import { freshness, shortestCadenceDays, timeAgo, type Freshness } from '../../lib/time-since';
+import { ArchivedBadge, PhaseBadge } from '../badges';
+import { VerdictIcon, verdictTone } from '../verdict-mark';
+
+const FIGURES = 4;
+const FRESHNESS_TONE: Record<Freshness, string> = {
+  fresh: 'text-tide-700',
+  due: 'text-amber-700',
+  stale: 'text-ember-700',
+  never: 'text-tide-600',
+};
+
+function LastTested({ at, level }: { at: string | null; level: Freshness }) {
+  if (!at) return <p className={`text-sm font-bold ${FRESHNESS_TONE.never}`}>No tests yet: log the first one.</p>;
+  const word = level === 'stale' ? ' · overdue for a test' : level === 'due' ? ' · a test is due' : '';
+  return (
+    <p className={`flex items-center gap-1.5 text-sm font-bold ${FRESHNESS_TONE[level]}`}>
+      {level !== 'fresh' ? <VerdictIcon level={level === 'stale' ? 'danger' : 'caution'} /> : null}
+      <span>
+        Last test <time dateTime={at} title={new Date(at).toLocaleString()}>{timeAgo(at)}</time>
+        {word}
+      </span>
+    </p>
+  );
+}
+
+/** One tank in the list: its latest figures in the member's units and how long since the last test. */
+export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: UnitPrefs; showOwner: boolean }) {
+  const recent = useRecentTests(tank.clubId, tank.id);
+  const fetched = useCareProfile(tank.clubId, tank.careProfileKey);
+  const profile = fetched.data ?? builtInProfile(tank.careProfileKey) ?? defaultProfileFor(tank.systemType);
+  const latest = latestValues(recent.data ?? []);
+  const lastAt = recent.data?.[0]?.takenAt ?? null;
+  const figures = PARAMETER_KEYS.filter((k) => latest[k]).slice(0, FIGURES);
+  const level = freshness(lastAt, shortestCadenceDays(profile, tank.phase));
+
+  return (
+    <li className={`rounded-card bg-white shadow-card ring-tide-300 focus-within:ring-2 ${tank.archivedAt ? 'opacity-75' : ''}`}>
+      <Link to={`/tanks/${tank.id}`} className="block p-4 sm:p-5">
+        <div className="flex flex-wrap items-start justify-between gap-2">
+          <div>
+            <h2 className="text-lg font-extrabold text-tide-900">{tank.name}</h2>
+            <p className="text-sm text-tide-700">
+              {SYSTEM_TYPE_LABELS[tank.systemType]} · {formatVolume(tank.volumeL, prefs)}
+            </p>
+            {showOwner ? <p className="text-sm font-semibold text-tide-600">Kept by {tank.owner.displayName}</p> : null}
+          </div>
+          <div className="flex gap-1">
+            {tank.archivedAt ? <ArchivedBadge /> : null}
+            <PhaseBadge phase={tank.phase} />
+          </div>
+        </div>
+        {recent.isPending ? (
+          <div className="mt-3 grid grid-cols-2 gap-2" aria-hidden>
+            {[0, 1, 2, 3].map((i) => <div key={i} className="h-11 animate-pulse rounded-lg bg-tide-50" />)}
+          </div>
+        ) : figures.length ? (
+          <dl className="mt-3 grid grid-cols-2 gap-2">
+            {figures.map((k) => {
+              const v = latest[k]!.value;
+              const verdict = verdictFor(k, v, profile, prefs);
+              return (
+                <div key={k} className="rounded-lg bg-tide-50 px-3 py-1.5">
+                  <dt className="truncate text-xs font-bold text-tide-600">{parameterInfo(k).label}</dt>
+                  <dd className={`flex items-center gap-1 font-extrabold ${verdict ? verdictTone(verdict.level) : 'text-tide-900'}`}>
+                    {verdict ? <VerdictIcon level={verdict.level} direction={verdict.direction} /> : null}
+                    <span className="text-tide-900">{formatDisplay(k, v, prefs)}</span>
+                    {verdict ? <span className="sr-only">{verdict.text}</span> : null}
+                  </dd>
+                </div>
+              );
+            })}
+          </dl>
+        ) : null}
+        <div className="mt-3">{recent.isError ? <p className="text-sm text-ember-700">Could not load the latest tests.</p> : recent.isPending ? null : <LastTested at={lastAt} level={level} />}</div>
+      </Link>
+    </li>
+  );
+}
+
+export function TankListSkeleton() {
+  return (
+    <ul className="grid gap-4 sm:grid-cols-2" aria-label="Loading tanks" aria-busy>
+      {[0, 1, 2].map((i) => (
+        <li key={i} className="rounded-card bg-white p-5 shadow-card">
+          <div className="h-5 w-2/3 animate-pulse rounded bg-tide-100" />
+          <div className="mt-2 h-4 w-1/2 animate-pulse rounded bg-tide-50" />
+          <div className="mt-4 grid grid-cols-2 gap-2">
+            {[0, 1, 2, 3].map((j) => <div key={j} className="h-11 animate-pulse rounded-lg bg-tide-50" />)}
+          </div>
+        </li>
+      ))}
+    </ul>
+  );
+}
