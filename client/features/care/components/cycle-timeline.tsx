@@ -46,8 +46,15 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
       {current ? <p className="mt-2 text-sm text-tide-800">{current.hint}</p> : null}
       {cycle.projectedDoneAt ? (
         <p className="mt-1 text-sm text-tide-700">
-          Likely done around <strong>{fmt.format(new Date(cycle.projectedDoneAt.likely))}</strong> (between {fmt.format(new Date(cycle.projectedDoneAt.earliest))} and{' '}
-          {fmt.format(new Date(cycle.projectedDoneAt.latest))}). A cycle usually takes {typical.typicalMin}–{typical.typicalMax} weeks, sometimes {typical.rangeMin}–{typical.rangeMax} ({typical.provenance}).
+          {Date.parse(cycle.projectedDoneAt.likely) <= Date.now() ? (
+            <>Could finish <strong>any day now</strong>, or as late as {fmt.format(new Date(cycle.projectedDoneAt.latest))}.</>
+          ) : (
+            <>
+              Likely done around <strong>{fmt.format(new Date(cycle.projectedDoneAt.likely))}</strong> (between {fmt.format(new Date(cycle.projectedDoneAt.earliest))} and{' '}
+              {fmt.format(new Date(cycle.projectedDoneAt.latest))}).
+            </>
+          )}{' '}
+          A cycle usually takes {typical.typicalMin}–{typical.typicalMax} weeks, sometimes {typical.rangeMin}–{typical.rangeMax} ({typical.provenance}).
         </p>
       ) : null}
       {cycle.evidence.length ? (

@@ -48,7 +48,7 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
             <tr>
               <th className="py-2 pr-3">Parameter</th>
               <th className="pr-3">Fine between</th>
-              <th className="pr-3">Watch outside, act outside</th>
+              <th className="pr-3">Worth watching between (act now outside)</th>
               <th>Where the numbers come from</th>
             </tr>
           </thead>
