@@ -15,7 +15,7 @@ function renderForm(over: Partial<WaterTestFormProps> & { prefs?: UnitPrefs } = 
   const prefs = over.prefs ?? METRIC;
   const onSave = vi.fn<WaterTestFormProps['onSave']>().mockResolvedValue(undefined);
   const props: WaterTestFormProps = {
-    tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', lastKnown: {} },
+    tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', lastKnown: {}, volumeL: 200, hasLivestock: true },
     profile: REEF_PROFILE,
     prefs,
     initial: newDraft(prefs, {}),
@@ -75,7 +75,7 @@ describe('water-test form', () => {
     const prefs: UnitPrefs = { temperatureUnit: 'F', volumeUnit: 'USgal', salinityDisplay: 'ppt' };
     const { user, onSave } = renderForm({
       prefs,
-      tank: { id: 'tank-2', systemType: 'tropical-freshwater', careProfileKey: 'tropical-freshwater', phase: 'established', lastKnown: {} },
+      tank: { id: 'tank-2', systemType: 'tropical-freshwater', careProfileKey: 'tropical-freshwater', phase: 'established', lastKnown: {}, volumeL: 200, hasLivestock: true },
       profile: TROPICAL_FRESHWATER_PROFILE,
       memory: { parameters: ['temperature'], entries: {} },
     });
@@ -107,5 +107,16 @@ describe('water-test form', () => {
     expect(screen.getByLabelText('pH')).toHaveValue('8.2');
     await user.click(screen.getByRole('button', { name: 'Save test' }));
     expect(onSave).toHaveBeenCalledTimes(2);
+  });
+});
+
+describe('the concern preview on the form', () => {
+  it('when nitrite 1.0 is typed on an established reef, then the form says it would be flagged as urgent before saving', async () => {
+    const { user } = renderForm();
+    await user.click(screen.getByRole('button', { name: /More readings/ }));
+    await user.type(screen.getByRole('textbox', { name: /^Nitrite/ }), '1');
+    const preview = await screen.findByRole('region', { name: 'If you save this' });
+    expect(preview).toHaveTextContent(/Act now/);
+    expect(preview).toHaveTextContent(/Nitrite/);
   });
 });

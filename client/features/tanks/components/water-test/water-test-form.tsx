@@ -14,6 +14,7 @@ import { firstParameters, type EntryMemory } from '../../lib/entry-memory';
 import { PhotoUploadError } from '../../lib/photo-upload-error';
 import { placeServerIssues, schemaResolver } from '../../lib/schema-resolver';
 import { draftToInput, isFilled, waterTestFieldOf, type WaterTestDraft } from '../../lib/water-test-draft';
+import { ConcernPreview } from './concern-preview';
 import { previewDraft } from '../../lib/water-test-preview';
 import { PhotoPicker } from '../photo-picker';
 import { TextAreaField } from '../text-area-field';
@@ -22,7 +23,7 @@ import { ParameterField } from './parameter-field';
 export type WaterTestOutput = z.output<typeof createWaterTestSchema>;
 
 export interface WaterTestFormProps {
-  tank: Pick<TankDetailView, 'id' | 'systemType' | 'careProfileKey' | 'phase' | 'lastKnown'>;
+  tank: Pick<TankDetailView, 'id' | 'systemType' | 'careProfileKey' | 'phase' | 'lastKnown' | 'volumeL' | 'hasLivestock'>;
   profile: CareProfile;
   prefs: UnitPrefs;
   initial: WaterTestDraft;
@@ -95,6 +96,7 @@ export function WaterTestForm({ tank, profile, prefs, initial, memory, testId, s
               {showAll ? 'Show only my usual readings' : `More readings (${hidden})`}
             </Button>
           ) : null}
+          <ConcernPreview tank={tank} profile={profile} normalized={preview.normalized} />
           <TextAreaField label="Anything else about this test? (optional)" rows={2} error={form.formState.errors.note?.message} {...form.register('note')} />
         </fieldset>
         <PhotoPicker label="Photo (optional)" hint="For example the colour card next to the test tube, in daylight." files={photos} onChange={setPhotos} />
