@@ -1,3 +1,4 @@
+import { useState } from 'react';
 import type { CareSummary } from '../api/care';
 
 const STEPS = [
@@ -12,6 +13,7 @@ const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' 
 
 /** Where the tank is in the nitrogen cycle, today's position, and when it is likely done. */
 export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['cycle']; typical: CareSummary['cycleTypical']; phase: 'cycling' | 'established' }) {
+  const [openedAt] = useState(() => Date.now());
   const setback = cycle.stage === 'setback';
   if (phase === 'established' && !setback) {
     return (
@@ -46,7 +48,7 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
       {current ? <p className="mt-2 text-sm text-tide-800">{current.hint}</p> : null}
       {cycle.projectedDoneAt ? (
         <p className="mt-1 text-sm text-tide-700">
-          {Date.parse(cycle.projectedDoneAt.likely) <= Date.now() ? (
+          {Date.parse(cycle.projectedDoneAt.likely) <= openedAt ? (
             <>Could finish <strong>any day now</strong>, or as late as {fmt.format(new Date(cycle.projectedDoneAt.latest))}.</>
           ) : (
             <>
