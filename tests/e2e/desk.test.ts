@@ -1,21 +1,15 @@
 import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reevaluateTank } from '../../server/modules/concerns/reevaluate-tank';
-import { DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { DESK, launchBrowser, PHONE, screenshot, signInOn } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
-import { assignMentor, makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
+import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank, insertWaterTest } from '../helpers/tank-rows';
 
 const CALM = { temperature: 24, salinity: 33, pH: 8.1, ammonia: 0, nitrite: 0, nitrate: 2, alkalinity: 8, calcium: 420, magnesium: 1300 };
 
-async function signIn(page: Page, email: string, path: string) {
-  await page.goto(`${inject('baseUrl')}${path}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
 
 const firstRowTank = (page: Page) => page.locator('ol[aria-label="Tanks by need"] > li').first().getAttribute('data-tank-id');
 
@@ -55,14 +49,14 @@ describe('the mentor desk, live', () => {
 
   it('when the mentee saves an urgent test from another page, then the desk re-orders without a reload', async () => {
     const desk = await (await browser.newContext(DESK)).newPage();
-    await signIn(desk, mentorEmail, '/desk');
+    await signInOn(desk, mentorEmail, '/desk');
     await desk.getByRole('heading', { name: 'Mentor desk' }).waitFor();
     await desk.locator('ol[aria-label="Tanks by need"] > li').nth(1).waitFor();
     expect(await firstRowTank(desk)).toBe(tanks.other);
     await screenshot(desk, 'desk-before-desk');
 
     const phone = await (await browser.newContext(PHONE)).newPage();
-    await signIn(phone, keeperEmail, '/');
+    await signInOn(phone, keeperEmail, '/');
     await phone.getByRole('heading', { name: /Hello, Kai/ }).waitFor();
     const status = await phone.evaluate(
       async ({ clubId, tankId }) => {

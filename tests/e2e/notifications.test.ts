@@ -1,18 +1,12 @@
-import type { Browser, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
-import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
+import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MentorAssignment } from '../../server/modules/mentorship/mentor-assignment.entity';
-import { DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { DESK, launchBrowser, PHONE, screenshot, signInOn } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
-import { makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
+import { makeClub, makeMember } from '../helpers/factories';
 
-async function signIn(page: Page, path: string, email: string) {
-  await page.goto(`${inject('baseUrl')}${path}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-}
 
 describe('mentor requests and live notifications in the browser', () => {
   let browser: Browser;
@@ -36,13 +30,13 @@ describe('mentor requests and live notifications in the browser', () => {
 
   it('when a beginner asks for a mentor on a phone, then the admin’s bell rises without a reload and the admin accepts', async () => {
     const desk = await (await browser.newContext(DESK)).newPage();
-    await signIn(desk, '/club', admin.user.email);
+    await signInOn(desk, admin.user.email, '/club');
     await desk.getByRole('heading', { name: 'Reedbank Keepers' }).waitFor();
     await desk.getByText('No one is waiting.', { exact: false }).waitFor();
     await desk.getByRole('button', { name: 'Notifications, none unread' }).waitFor();
 
     const phone = await (await browser.newContext(PHONE)).newPage();
-    await signIn(phone, '/', beginner.user.email);
+    await signInOn(phone, beginner.user.email, '/');
     await phone.getByRole('heading', { name: 'Hello, Bo' }).waitFor();
     await phone.getByRole('heading', { name: 'Ask for a mentor' }).waitFor();
     await phone.getByLabel('What would you like help with? (optional)').fill('My first 60 litre tank, cycling since Sunday.');

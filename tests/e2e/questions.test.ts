@@ -1,27 +1,15 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { reevaluateTank } from '../../server/modules/concerns/reevaluate-tank';
-import { ARTIFACTS, DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { ARTIFACTS, DESK, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
-import { assignMentor, makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
+import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank, insertWaterTest } from '../helpers/tank-rows';
 
 const DAY = 86_400_000;
 
-async function signIn(browser: Browser, viewport: typeof DESK, email: string, path: string): Promise<{ context: BrowserContext; page: Page; errors: string[] }> {
-  const context = await browser.newContext(viewport);
-  const page = await context.newPage();
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(e.message));
-  await page.goto(`${inject('baseUrl')}${path}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => u.pathname === path);
-  return { context, page, errors };
-}
 
 describe('questions on a reading in the browser', () => {
   let browser: Browser;
@@ -54,7 +42,7 @@ describe('questions on a reading in the browser', () => {
   });
 
   it('when a member asks about a test on her phone, then the mentor answers at a desk and she marks it answered', async () => {
-    const bo = await signIn(browser, PHONE, keeperEmail, `/tanks/${tankId}`);
+    const bo = await openSignedIn(browser, PHONE, keeperEmail, `/tanks/${tankId}`);
     const ask = bo.page.getByRole('list', { name: 'Recent readings to ask about' });
     await ask.waitFor();
     await ask.getByRole('button', { name: 'Ask about this' }).first().click();
@@ -79,7 +67,7 @@ describe('questions on a reading in the browser', () => {
     await screenshot(bo.page, 'question-asked-phone');
 
     // The mentor finds it among the open questions at a desk.
-    const maya = await signIn(browser, DESK, mentorEmail, '/questions');
+    const maya = await openSignedIn(browser, DESK, mentorEmail, '/questions');
     await maya.page.getByRole('link', { name: /Is this nitrate OK for my seahorses\?/ }).click();
     await maya.page.waitForURL((u) => u.pathname === questionPath);
     const reply = maya.page.getByLabel('Your reply');

@@ -1,10 +1,10 @@
-import type { Browser, BrowserContext, Page } from 'playwright-core';
+import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { DESK, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
-import { assignMentor, makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
+import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank } from '../helpers/tank-rows';
 
 const DAY = 86_400_000;
@@ -39,18 +39,6 @@ function bigLog(rows = 5000): string {
   return lines.join('\n');
 }
 
-async function signIn(browser: Browser, viewport: typeof DESK, email: string, path = '/tanks'): Promise<{ context: BrowserContext; page: Page; errors: string[] }> {
-  const context = await browser.newContext(viewport);
-  const page = await context.newPage();
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(e.message));
-  await page.goto(`${inject('baseUrl')}${path}`);
-  await page.getByLabel('E-mail').fill(email);
-  await page.getByLabel('Password').fill(TEST_PASSWORD);
-  await page.getByRole('button', { name: 'Sign in' }).click();
-  await page.waitForURL((u) => u.pathname === path);
-  return { context, page, errors };
-}
 
 async function importFile(page: Page, name: string, csv: string) {
   await page.locator('input[type=file]').setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(csv) });
@@ -84,7 +72,7 @@ describe('tanks in the browser', () => {
   });
 
   it('when a beginner adds a cycling seahorse tank at a desk and imports their log, then bad rows are named before saving and the cycle is charted', async () => {
-    const { context, page, errors } = await signIn(browser, DESK, member.email, '/tanks/new');
+    const { context, page, errors } = await openSignedIn(browser, DESK, member.email, '/tanks/new');
     await page.getByRole('heading', { name: 'Add a tank' }).waitFor();
     await page.getByRole('button', { name: 'Add the tank' }).click();
     await page.getByText('Give the tank a name.').waitFor();
@@ -130,7 +118,7 @@ describe('tanks in the browser', () => {
   });
 
   it('when the beginner logs a test at the tank on a phone, then the preview judges it and the new point is on the chart', async () => {
-    const { context, page, errors } = await signIn(browser, PHONE, member.email, `/tanks/${reefTankId}`);
+    const { context, page, errors } = await openSignedIn(browser, PHONE, member.email, `/tanks/${reefTankId}`);
     await page.getByRole('link', { name: /Log a water test/ }).click();
     await page.getByRole('heading', { name: 'Log a water test' }).waitFor();
     await page.getByLabel('Temperature', { exact: true }).fill('25.4');
@@ -181,7 +169,7 @@ describe('tanks in the browser', () => {
   });
 
   it('when the beginner imports 5,000 old tests, then a bar shows while they save in one transaction and every one arrives', { timeout: 240_000 }, async () => {
-    const { context, page, errors } = await signIn(browser, DESK, member.email);
+    const { context, page, errors } = await openSignedIn(browser, DESK, member.email, '/tanks');
     await page.getByRole('link', { name: /Living-room community/ }).click();
     await page.getByRole('link', { name: /Import a CSV log/ }).click();
     await importFile(page, 'five-thousand.csv', bigLog());
@@ -201,7 +189,7 @@ describe('tanks in the browser', () => {
   });
 
   it("when the mentor opens the list, then they see whose tanks they are; another member is told the tank isn't theirs to see", async () => {
-    const mentor = await signIn(browser, DESK, mentorEmail);
+    const mentor = await openSignedIn(browser, DESK, mentorEmail, '/tanks');
     await mentor.page.getByRole('heading', { name: 'Tanks' }).waitFor();
     await mentor.page.getByText('Kept by Bo Beginner').first().waitFor();
     await mentor.page.getByText(/^Last test/).nth(1).waitFor();
@@ -212,7 +200,7 @@ describe('tanks in the browser', () => {
     expect(await mentor.page.getByRole('link', { name: /Log a water test/ }).count()).toBe(0);
     await mentor.context.close();
 
-    const stranger = await signIn(browser, PHONE, strangerEmail, `/tanks/${reefTankId}`);
+    const stranger = await openSignedIn(browser, PHONE, strangerEmail, `/tanks/${reefTankId}`);
     await stranger.page.getByRole('heading', { name: "That isn't yours to see" }).waitFor();
     await screenshot(stranger.page, 'tank-not-yours-phone');
     await stranger.context.close();

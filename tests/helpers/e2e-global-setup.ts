@@ -2,7 +2,7 @@ import { existsSync } from 'node:fs';
 import type { TestProject } from 'vitest/node';
 import { startServer, type RunningServer } from '../../server/boot';
 import { loadConfig } from '../../server/config/env';
-import { testDatabaseUrl } from './test-database-url';
+import { ensureDatabase, testDatabaseUrl } from './test-database-url';
 
 declare module 'vitest' {
   export interface ProvidedContext {
@@ -19,7 +19,8 @@ export default async function setup(project: TestProject) {
     const { build } = await import('vite');
     await build({ logLevel: 'warn' });
   }
-  const databaseUrl = testDatabaseUrl();
+  const databaseUrl = testDatabaseUrl('e2e');
+  await ensureDatabase(databaseUrl);
   const config = loadConfig({ NODE_ENV: 'test', DATABASE_URL: databaseUrl, PORT: '0' });
   running = await startServer(config);
   await running.dataSource.runMigrations({ transaction: 'each' });

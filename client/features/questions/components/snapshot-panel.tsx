@@ -4,7 +4,7 @@ import { parameterInfo, PARAMETER_KEYS } from '../../../../shared/care/parameter
 import type { QuestionSnapshot } from '../../../../shared/schemas/question-views';
 import { Card } from '../../../components/ui/card';
 import { describeObservation, formatDateTime, formatFigure, type FigurePrefs } from '../lib/figures';
-import { SeverityMark } from './severity-mark';
+import { SeverityBadge } from '../../../components/ui/severity-badge';
 
 function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: FigurePrefs }) {
   const s = snapshot.subject;
@@ -70,7 +70,7 @@ export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot;
               {shown.map((c) => (
                 <li key={c.id} className="py-2">
                   <div className="flex flex-wrap items-center gap-2">
-                    <SeverityMark severity={c.severity} />
+                    <SeverityBadge severity={c.severity} />
                     {c.status === 'acknowledged' ? <span className="text-xs font-bold text-tide-600">seen by a mentor</span> : null}
                   </div>
                   <p className="mt-1 font-bold text-tide-900">{c.reason}</p>
