@@ -1,5 +1,7 @@
 import { Link } from 'react-router';
-import { PARAMETER_KEYS, parameterInfo } from '../../../../../shared/care/parameters';
+import { PARAMETER_KEYS, parameterInfo, type ParameterKey } from '../../../../../shared/care/parameters';
+
+const CYCLE_FIRST: readonly ParameterKey[] = ['ammonia', 'nitrite', 'nitrate', 'temperature'];
 import { builtInProfile, defaultProfileFor } from '../../../../../shared/care/profiles';
 import { SYSTEM_TYPE_LABELS } from '../../../../../shared/constants/tank-labels';
 import type { TankView } from '../../../../../shared/schemas/tank-views';
@@ -41,7 +43,9 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
   const profile = fetched.data ?? builtInProfile(tank.careProfileKey) ?? defaultProfileFor(tank.systemType);
   const latest = latestValues(recent.data ?? []);
   const lastAt = recent.data?.[0]?.takenAt ?? null;
-  const figures = PARAMETER_KEYS.filter((k) => latest[k]).slice(0, FIGURES);
+  // While cycling, the nitrogen figures are the story; afterwards the parameters in their usual order.
+  const order: readonly ParameterKey[] = tank.phase === 'cycling' ? [...CYCLE_FIRST, ...PARAMETER_KEYS.filter((k) => !CYCLE_FIRST.includes(k))] : PARAMETER_KEYS;
+  const figures = order.filter((k) => latest[k]).slice(0, FIGURES);
   const level = freshness(lastAt, shortestCadenceDays(profile, tank.phase));
 
   return (
