@@ -13,11 +13,8 @@ import { createWaterTest } from '../../modules/tanks/water-test.service';
  * concerns are exactly what a real keeper would see. Numbers are shaped like a typical course, not taken from anyone.
  */
 const DAY = 86_400_000;
-const at = (daysAgo: number, hour = 19) => {
-  const d = new Date(Date.now() - daysAgo * DAY);
-  d.setUTCHours(hour, 0, 0, 0);
-  return d.toISOString();
-};
+/** An evening-ish moment `daysAgo` days back, never in the future (tests taken later than now are refused). */
+const at = (daysAgo: number) => new Date(Date.now() - daysAgo * DAY - 3 * 3_600_000).toISOString();
 const round = (n: number, dp = 2) => Math.round(n * 10 ** dp) / 10 ** dp;
 const bump = (day: number, start: number, peak: number, end: number, height: number) =>
   day <= start || day >= end ? 0 : day <= peak ? (height * (day - start)) / (peak - start) : (height * (end - day)) / (end - peak);
