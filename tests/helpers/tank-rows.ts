@@ -1,10 +1,7 @@
 import type { DataSource } from 'typeorm';
 import { defaultProfileFor, type ParameterKey, type SystemType } from '../../shared/care';
+import { VALUE_COLUMNS } from '../../server/modules/tanks/water-test.entity';
 
-const COLUMN: Record<ParameterKey, string> = {
-  temperature: 'temperature_c', salinity: 'salinity_psu', pH: 'ph', ammonia: 'ammonia_mg_l', nitrite: 'nitrite_mg_l',
-  nitrate: 'nitrate_mg_l', alkalinity: 'alkalinity_dkh', calcium: 'calcium_mg_l', magnesium: 'magnesium_mg_l', phosphate: 'phosphate_mg_l',
-};
 
 /** A tank row straight into the database, for tests about what happens around tanks rather than their API. */
 export async function insertTank(
@@ -22,7 +19,7 @@ export async function insertTank(
 
 export async function insertWaterTest(ds: DataSource, tankId: string, takenAt: Date, values: Partial<Record<ParameterKey, number>>): Promise<string> {
   const keys = Object.keys(values) as ParameterKey[];
-  const cols = keys.map((k) => COLUMN[k]);
+  const cols = keys.map((k) => VALUE_COLUMNS[k].column);
   const rows: { id: string }[] = await ds.query(
     `INSERT INTO water_test (tank_id, taken_at, entries${cols.map((c) => `, ${c}`).join('')})
      VALUES ($1, $2, '{}'${keys.map((_, i) => `, $${i + 3}`).join('')}) RETURNING id`,

@@ -1,19 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { ParameterKey, SystemType, TankPhase, WaterTestInput } from '../../../shared/care';
+import { VALUE_COLUMNS } from '../tanks/water-test.entity';
 
-/** Canonical column of each parameter on water_test. */
-const PARAMETER_COLUMNS: Record<ParameterKey, string> = {
-  temperature: 'temperature_c',
-  salinity: 'salinity_psu',
-  pH: 'ph',
-  ammonia: 'ammonia_mg_l',
-  nitrite: 'nitrite_mg_l',
-  nitrate: 'nitrate_mg_l',
-  alkalinity: 'alkalinity_dkh',
-  calcium: 'calcium_mg_l',
-  magnesium: 'magnesium_mg_l',
-  phosphate: 'phosphate_mg_l',
-};
 
 export interface TankForCare {
   id: string;
@@ -45,7 +33,7 @@ export async function loadTankForCare(m: EntityManager, tankId: string): Promise
 
 /** The tank's tests of the last `days` days as the care engine reads them (canonical units). */
 export async function loadHistory(m: EntityManager, tankId: string, now: Date, days = 120): Promise<WaterTestInput[]> {
-  const cols = Object.entries(PARAMETER_COLUMNS).map(([key, col]) => `${col} AS "${key}"`).join(', ');
+  const cols = Object.entries(VALUE_COLUMNS).map(([key, { column }]) => `${column} AS "${key}"`).join(', ');
   const rows: ({ id: string; takenAt: Date } & Record<ParameterKey, number | null>)[] = await m.query(
     `SELECT id, taken_at AS "takenAt", ${cols} FROM water_test
       WHERE tank_id = $1 AND taken_at <= $2 AND taken_at > $2::timestamptz - make_interval(days => $3)
@@ -54,7 +42,7 @@ export async function loadHistory(m: EntityManager, tankId: string, now: Date, d
   );
   return rows.map((r) => {
     const values: WaterTestInput['values'] = {};
-    for (const key of Object.keys(PARAMETER_COLUMNS) as ParameterKey[]) {
+    for (const key of Object.keys(VALUE_COLUMNS) as ParameterKey[]) {
       const v = r[key];
       if (v !== null && v !== undefined) values[key] = Number(v);
     }
