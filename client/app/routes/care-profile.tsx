@@ -4,7 +4,7 @@ import { Card, Notice } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { Spinner } from '../../components/ui/spinner';
 import { useSession } from '../../features/auth/components/session-provider';
-import { useProfile } from '../../features/care/api/profiles';
+import { useProfile } from '../../lib/care-profiles';
 import { ProfileRangesEditor } from '../../features/care/components/profile-ranges-editor';
 
 const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });

@@ -6,7 +6,7 @@ import { Card, Notice } from '../../components/ui/card';
 import { PageHeader } from '../../components/ui/page-header';
 import { Spinner } from '../../components/ui/spinner';
 import { useSession } from '../../features/auth/components/session-provider';
-import { useCopyProfile, useProfiles } from '../../features/care/api/profiles';
+import { useCopyProfile, useProfiles } from '../../lib/care-profiles';
 import { ApiError } from '../../lib/api-client';
 
 export function Component() {

@@ -6,7 +6,7 @@ import { TROPICAL_FRESHWATER_PROFILE } from '../../../shared/care/profiles';
 import { convert } from '../../../shared/chemistry/units';
 import { salinityAsSpecificGravity } from '../../../shared/readings/salinity';
 import { TankForm } from '../../../client/features/tanks/components/tank-form/tank-form';
-import { tankKeys } from '../../../client/features/tanks/api/keys';
+import { profileKeys } from '../../../client/lib/care-profiles';
 import { bandText } from '../../../client/features/tanks/lib/bands';
 import { formatDisplay, formatVolume, toDisplay, type UnitPrefs } from '../../../client/features/tanks/lib/display-units';
 import { newTankDraft } from '../../../client/features/tanks/lib/tank-draft';
@@ -42,7 +42,7 @@ describe('display units', () => {
 
   it('when a US keeper works the volume out from inches, then the live preview shows gross and net US gallons with litres beside', async () => {
     const qc = new QueryClient();
-    qc.setQueryData(tankKeys.profiles('club-1'), [{ key: 'tropical-freshwater', name: 'Tropical freshwater', version: 1, systemTypes: ['tropical-freshwater'], animals: 'fish', source: 'built-in' }]);
+    qc.setQueryData(profileKeys.all('club-1'), { profiles: [{ key: 'tropical-freshwater', name: 'Tropical freshwater', version: 1, systemTypes: ['tropical-freshwater'], animals: 'fish', source: 'built-in' }] });
     render(
       <QueryClientProvider client={qc}>
         <TankForm clubId="club-1" prefs={US} initial={newTankDraft(US, 'tropical-freshwater', 'tropical-freshwater')} submitLabel="Add" onSave={async () => {}} />

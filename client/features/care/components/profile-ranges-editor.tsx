@@ -3,7 +3,7 @@ import { parameterInfo, provenanceLabel, type AnyParameterKey, type CareProfile 
 import { Button } from '../../../components/ui/button';
 import { Notice } from '../../../components/ui/card';
 import { ApiError } from '../../../lib/api-client';
-import { useSaveProfile } from '../api/profiles';
+import { useSaveProfile } from '../../../lib/care-profiles';
 
 type Band = [number, number];
 

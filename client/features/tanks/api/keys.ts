@@ -11,6 +11,4 @@ export const tankKeys = {
   waterChanges: (clubId: string, tankId: string) => [...tankKeys.tank(clubId, tankId), 'events', 'water-change'] as const,
   timeline: (clubId: string, tankId: string) => [...tankKeys.tank(clubId, tankId), 'timeline'] as const,
   photos: (clubId: string, tankId: string) => [...tankKeys.tank(clubId, tankId), 'photos'] as const,
-  profiles: (clubId: string) => ['care-profiles', clubId] as const,
-  profile: (clubId: string, key: string) => [...tankKeys.profiles(clubId), key] as const,
 };

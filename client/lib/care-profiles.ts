@@ -1,13 +1,14 @@
+/** Care profiles as the club sees them: one cache for every screen that reads or edits them. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CareProfile } from '../../../../shared/care';
-import type { CopyCareProfileInput } from '../../../../shared/schemas/care-profile.schema';
-import { api } from '../../../lib/api-client';
+import type { CareProfile, SystemType } from '../../shared/care';
+import type { CopyCareProfileInput } from '../../shared/schemas/care-profile.schema';
+import { api } from './api-client';
 
 export interface ProfileSummary {
   key: string;
   name: string;
   version: number;
-  systemTypes: string[];
+  systemTypes: SystemType[];
   animals: string;
   source: 'built-in' | 'club';
   id?: string;
