@@ -1,6 +1,6 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router/dom';
-import { queryClient } from '../lib/query-client';
+import { queryClient } from '@client/lib/query-client';
 import { createRouter } from './router';
 
 const router = createRouter(queryClient);

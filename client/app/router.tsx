@@ -1,9 +1,9 @@
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
-import { RouteError } from '../components/errors/route-error';
-import { PublicLayout } from '../components/layouts/public-layout';
-import { FullPageSpinner } from '../components/ui/spinner';
-import { meQuery } from '../features/auth/api/me';
+import { RouteError } from '@client/components/errors/route-error';
+import { PublicLayout } from '@client/components/layouts/public-layout';
+import { FullPageSpinner } from '@client/components/ui/spinner';
+import { meQuery } from '@client/features/auth/api/me';
 import { SignedInLayout } from './signed-in-layout';
 
 /** Signed-in pages: the loader makes sure /me is known and sends visitors to sign in first. */

@@ -1,11 +1,11 @@
-import { asSubject } from '../../shared/abilities';
-import { AppShell, type NavItem } from '../components/layouts/app-shell';
-import { FullPageSpinner } from '../components/ui/spinner';
-import { useMe } from '../features/auth/api/me';
-import { SessionProvider, useSession } from '../features/auth/components/session-provider';
-import { UserMenu } from '../features/auth/components/user-menu';
-import { NotificationBell } from '../features/notifications/components/notification-bell';
-import { useLiveSocket } from '../lib/socket';
+import { asSubject } from '@shared/abilities';
+import { AppShell, type NavItem } from '@client/components/layouts/app-shell';
+import { FullPageSpinner } from '@client/components/ui/spinner';
+import { useMe } from '@client/features/auth/api/me';
+import { SessionProvider, useSession } from '@client/features/auth/components/session-provider';
+import { UserMenu } from '@client/features/auth/components/user-menu';
+import { NotificationBell } from '@client/features/notifications/components/notification-bell';
+import { useLiveSocket } from '@client/lib/socket';
 
 function ShellForSession() {
   const { me, activeClub, ability } = useSession();

@@ -1,7 +1,8 @@
 /** Care profiles as the club sees them: one cache for every screen that reads or edits them. */
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CareProfile, SystemType } from '../../shared/care';
-import type { CopyCareProfileInput } from '../../shared/schemas/care-profile.schema';
+import type { CareProfile, SystemType } from '@shared/care';
+import { builtInProfile, defaultProfileFor } from '@shared/care/profiles';
+import type { CopyCareProfileInput } from '@shared/schemas/care-profile.schema';
 import { api } from './api-client';
 
 export interface ProfileSummary {
@@ -33,7 +34,21 @@ export const profileQuery = (clubId: string, key: string) =>
   queryOptions({ queryKey: profileKeys.detail(clubId, key), queryFn: ({ signal }) => api.get<ProfileDetail>(`/clubs/${clubId}/care-profiles/${encodeURIComponent(key)}`, signal), staleTime: 60_000 });
 
 export const useProfiles = (clubId: string) => useQuery(profilesQuery(clubId));
-export const useProfile = (clubId: string, key: string) => useQuery(profileQuery(clubId, key));
+/** One profile with its history; waits while `key` is not known yet. */
+export const useProfile = (clubId: string, key: string | undefined) => useQuery({ ...profileQuery(clubId, key ?? ''), enabled: Boolean(key) });
+
+/**
+ * The profile a tank follows: the club's answer once loaded, the built-in of that key (or the kind's default)
+ * meanwhile, so forms, cards and charts never wait on it.
+ */
+type ProfiledTank = { careProfileKey: string; systemType: SystemType };
+export function useTankProfile(clubId: string, tank: ProfiledTank): CareProfile;
+export function useTankProfile(clubId: string, tank: ProfiledTank | undefined): CareProfile | undefined;
+export function useTankProfile(clubId: string, tank: ProfiledTank | undefined): CareProfile | undefined {
+  const fetched = useProfile(clubId, tank?.careProfileKey);
+  if (!tank) return undefined;
+  return fetched.data?.profile ?? builtInProfile(tank.careProfileKey) ?? defaultProfileFor(tank.systemType);
+}
 
 export function useCopyProfile(clubId: string) {
   const qc = useQueryClient();

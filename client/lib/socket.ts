@@ -1,6 +1,6 @@
 import { useEffect, useRef, useSyncExternalStore } from 'react';
 import { io, type Socket } from 'socket.io-client';
-import type { ClientToServerEvents, ServerToClientEvents } from '../../shared/events/socket-events';
+import type { ClientToServerEvents, ServerToClientEvents } from '@shared/events/socket-events';
 
 export type AppSocket = Socket<ServerToClientEvents, ClientToServerEvents>;
 type EventName = keyof ServerToClientEvents;

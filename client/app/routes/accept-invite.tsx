@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router';
-import { AuthCard } from '../../components/ui/card';
-import { AcceptInviteForm } from '../../features/auth/components/accept-invite-form';
+import { AuthCard } from '@client/components/ui/card';
+import { AcceptInviteForm } from '@client/features/auth/components/accept-invite-form';
 
 export function Component() {
   const [params] = useSearchParams();

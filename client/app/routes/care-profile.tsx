@@ -1,11 +1,11 @@
 import { useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { useProfile } from '../../lib/care-profiles';
-import { ProfileRangesEditor } from '../../features/care/components/profile-ranges-editor';
+import { asSubject } from '@shared/abilities';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { useProfile } from '@client/lib/care-profiles';
+import { ProfileRangesEditor } from '@client/features/care/components/profile-ranges-editor';
 
 const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 

@@ -1,13 +1,13 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Button } from '../../components/ui/button';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { useCopyProfile, useProfiles } from '../../lib/care-profiles';
-import { ApiError } from '../../lib/api-client';
+import { asSubject } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { useCopyProfile, useProfiles } from '@client/lib/care-profiles';
+import { ApiError } from '@client/lib/api-client';
 
 export function Component() {
   const { activeClub, ability } = useSession();

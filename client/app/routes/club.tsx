@@ -1,14 +1,14 @@
 import { Link } from 'react-router';
 import { Can } from '@casl/react';
-import type { AppAbility } from '../../../shared/abilities';
-import { Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { useSession } from '../../features/auth/components/session-provider';
-import { InvitePanel } from '../../features/club/components/invite-panel';
-import { MembersPanel } from '../../features/club/components/members-panel';
-import { MentorCapacityCard } from '../../features/club/components/mentor-capacity-card';
-import { MentorRequestsPanel } from '../../features/club/components/mentor-requests-panel';
-import { asSubject } from '../../../shared/abilities';
+import type { AppAbility } from '@shared/abilities';
+import { Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { InvitePanel } from '@client/features/club/components/invite-panel';
+import { MembersPanel } from '@client/features/club/components/members-panel';
+import { MentorCapacityCard } from '@client/features/club/components/mentor-capacity-card';
+import { MentorRequestsPanel } from '@client/features/club/components/mentor-requests-panel';
+import { asSubject } from '@shared/abilities';
 
 export function Component() {
   const { activeClub, ability, me } = useSession();

@@ -1,14 +1,15 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { careKeys, useConcernAction } from '../../features/care/api/care';
-import { deskKeys, useDesk, type DeskFilters } from '../../features/desk/api/desk';
-import { useDeskAlerts } from '../../features/desk/components/desk-alerts';
-import { DeskRow } from '../../features/desk/components/desk-row';
-import { useSocketEvent, useSocketReconnect } from '../../lib/socket';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { useConcernAction } from '@client/features/care/api/care';
+import { careKeys } from '@client/lib/tank-keys';
+import { deskKeys, useDesk, type DeskFilters } from '@client/features/desk/api/desk';
+import { useDeskAlerts } from '@client/features/desk/components/desk-alerts';
+import { DeskRow } from '@client/features/desk/components/desk-row';
+import { useSocketEvent, useSocketReconnect } from '@client/lib/socket';
 
 const FILTERS: { key: keyof DeskFilters; label: string }[] = [
   { key: 'urgentOnly', label: 'Urgent only' },

@@ -1,6 +1,6 @@
 import { Link } from 'react-router';
-import { AuthCard } from '../../components/ui/card';
-import { ForgotPasswordForm } from '../../features/auth/components/password-reset-forms';
+import { AuthCard } from '@client/components/ui/card';
+import { ForgotPasswordForm } from '@client/features/auth/components/password-reset-forms';
 
 export function Component() {
   return (

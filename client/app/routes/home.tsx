@@ -1,8 +1,8 @@
-import { ROLE_LABELS } from '../../../shared/constants/roles';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { useSession } from '../../features/auth/components/session-provider';
-import { AskForMentorCard } from '../../features/club/components/ask-for-mentor-card';
+import { ROLE_LABELS } from '@shared/constants/roles';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { AskForMentorCard } from '@client/features/club/components/ask-for-mentor-card';
 
 export function Component() {
   const { me, activeClub } = useSession();

@@ -1,8 +1,8 @@
-import { Card } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { ProfileForm } from '../../features/auth/components/profile-form';
-import { useSession } from '../../features/auth/components/session-provider';
-import { NotificationPreferences } from '../../features/notifications/components/notification-preferences';
+import { Card } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { ProfileForm } from '@client/features/auth/components/profile-form';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { NotificationPreferences } from '@client/features/notifications/components/notification-preferences';
 
 export function Component() {
   const { me } = useSession();

@@ -1,21 +1,21 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { lazy, Suspense } from 'react';
 import { Link, useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Button } from '../../components/ui/button';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { questionKeys, useMarkAnswered, useQuestion } from '../../features/questions/api/questions';
-import { QuestionRouteError } from '../../features/questions/components/question-route-error';
-import { ReplyBox } from '../../features/questions/components/reply-box';
-import { SnapshotPanel } from '../../features/questions/components/snapshot-panel';
-import { Thread } from '../../features/questions/components/thread';
-import { useSocketEvent, useSocketReconnect } from '../../lib/socket';
+import { asSubject } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { questionKeys, useMarkAnswered, useQuestion } from '@client/features/questions/api/questions';
+import { QuestionRouteError } from '@client/features/questions/components/question-route-error';
+import { ReplyBox } from '@client/features/questions/components/reply-box';
+import { SnapshotPanel } from '@client/features/questions/components/snapshot-panel';
+import { Thread } from '@client/features/questions/components/thread';
+import { useSocketEvent, useSocketReconnect } from '@client/lib/socket';
 
 // The chart library is the heaviest part of the page: the thread and figures show first.
-const ReadingsChart = lazy(() => import('../../features/questions/components/readings-chart').then((m) => ({ default: m.ReadingsChart })));
+const ReadingsChart = lazy(() => import('@client/features/questions/components/readings-chart').then((m) => ({ default: m.ReadingsChart })));
 
 export function Component() {
   const { questionId = '' } = useParams();

@@ -1,12 +1,12 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
-import { Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { useSession } from '../../features/auth/components/session-provider';
-import { questionKeys, type ListStatus } from '../../features/questions/api/questions';
-import { QuestionList } from '../../features/questions/components/question-list';
-import { QuestionRouteError } from '../../features/questions/components/question-route-error';
-import { useSocketEvent } from '../../lib/socket';
+import { Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { questionKeys, type ListStatus } from '@client/features/questions/api/questions';
+import { QuestionList } from '@client/features/questions/components/question-list';
+import { QuestionRouteError } from '@client/features/questions/components/question-route-error';
+import { useSocketEvent } from '@client/lib/socket';
 
 const TABS: { status: ListStatus; label: string }[] = [
   { status: 'open', label: 'Open' },

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router';
-import { AuthCard } from '../../components/ui/card';
-import { ResetPasswordForm } from '../../features/auth/components/password-reset-forms';
+import { AuthCard } from '@client/components/ui/card';
+import { ResetPasswordForm } from '@client/features/auth/components/password-reset-forms';
 
 export function Component() {
   const [params] = useSearchParams();

@@ -1,6 +1,6 @@
 import { useNavigate, useSearchParams } from 'react-router';
-import { AuthCard } from '../../components/ui/card';
-import { SignInForm } from '../../features/auth/components/sign-in-form';
+import { AuthCard } from '@client/components/ui/card';
+import { SignInForm } from '@client/features/auth/components/sign-in-form';
 
 /** Only same-site paths: a `next` pointing elsewhere is ignored. */
 function safeNext(next: string | null): string {

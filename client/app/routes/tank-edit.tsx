@@ -1,30 +1,22 @@
 import { useMemo, useState } from 'react';
-import { useNavigate, useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Button } from '../../components/ui/button';
-import { Card, Notice } from '../../components/ui/card';
-import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { useUploadPhotos } from '../../features/tanks/api/photos';
-import { useSetArchived, useTank, useUpdateTank } from '../../features/tanks/api/tanks';
-import { TankForm } from '../../features/tanks/components/tank-form/tank-form';
-import { TankRouteError } from '../../features/tanks/components/tank-route-error';
-import { PhotoUploadError } from '../../features/tanks/lib/photo-upload-error';
-import { draftFromTank } from '../../features/tanks/lib/tank-draft';
+import { useNavigate } from 'react-router';
+import { asSubject } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSetArchived } from '@client/features/tanks/api/tanks';
+import { TankForm } from '@client/features/tanks/components/tank-form/tank-form';
+import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { draftFromTank } from '@client/features/tanks/lib/tank-draft';
+import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
-  const { tankId = '' } = useParams();
-  const { me, activeClub, ability } = useSession();
-  const clubId = activeClub?.clubId ?? '';
-  const tank = useTank(clubId, tankId);
-  const update = useUpdateTank(clubId, tankId);
+  const { me, ability, clubId, tankId, tank } = useTankRoute();
   const archive = useSetArchived(clubId, tankId);
-  const upload = useUploadPhotos(clubId);
   const navigate = useNavigate();
   const [confirming, setConfirming] = useState(false);
-  const [saved, setSaved] = useState(false);
   // The form reads its defaults once, on mount: a refetch after saving does not reset what is on screen.
   const initial = useMemo(() => (tank.data ? draftFromTank(tank.data, me.user) : undefined), [tank.data, me.user]);
 
@@ -49,27 +41,7 @@ export function Component() {
       <PageHeader title={`Edit ${t.name}`} />
       <div className="space-y-6">
         <Card>
-          <TankForm
-            clubId={clubId}
-            prefs={me.user}
-            initial={initial}
-            submitLabel="Save changes"
-            onSkipPhotos={() => open('Changes saved.')}
-            onSave={async (input, photos) => {
-              if (!saved) {
-                await update.mutateAsync(input);
-                setSaved(true);
-              }
-              if (photos.length) {
-                try {
-                  await upload.mutateAsync({ tankId, files: photos });
-                } catch (error) {
-                  throw new PhotoUploadError(error);
-                }
-              }
-              open('Changes saved.');
-            }}
-          />
+          <TankForm clubId={clubId} tankId={tankId} prefs={me.user} initial={initial} submitLabel="Save changes" onSaved={() => open('Changes saved.')} />
         </Card>
         <Card>
           <h2 className="text-lg font-extrabold text-tide-900">Archive this tank</h2>

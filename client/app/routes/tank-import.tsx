@@ -1,23 +1,13 @@
-import { useQueryClient } from '@tanstack/react-query';
-import { useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Card, Notice } from '../../components/ui/card';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { careKeys } from '../../features/care/api/care';
-import { useTank } from '../../features/tanks/api/tanks';
-import { useTankReadingsChanged } from '../../features/tanks/api/water-tests';
-import { ImportFlow } from '../../features/tanks/components/import/import-flow';
-import { TankRouteError } from '../../features/tanks/components/tank-route-error';
+import { asSubject } from '@shared/abilities';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { ImportFlow } from '@client/features/import/components/import-flow';
+import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
-  const { tankId = '' } = useParams();
-  const { me, activeClub, ability } = useSession();
-  const clubId = activeClub?.clubId ?? '';
-  const tank = useTank(clubId, tankId);
-  const changed = useTankReadingsChanged(clubId, tankId);
-  const qc = useQueryClient();
+  const { me, ability, clubId, tankId, tank } = useTankRoute();
   if (tank.isError) throw tank.error;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
@@ -27,16 +17,7 @@ export function Component() {
       <PageHeader title="Import a log" subtitle={t.name} />
       <Card>
         {allowed ? (
-          <ImportFlow
-            clubId={clubId}
-            tankId={tankId}
-            prefs={me.user}
-            timeZone={me.user.timeZone}
-            onImported={() => {
-              void changed();
-              void qc.invalidateQueries({ queryKey: careKeys.tank(tankId) });
-            }}
-          />
+          <ImportFlow clubId={clubId} tankId={tankId} prefs={me.user} timeZone={me.user.timeZone} />
         ) : (
           <Notice tone="warning">Only the keeper of this tank can import tests into it{t.archivedAt ? ', and not while it is archived' : ''}.</Notice>
         )}

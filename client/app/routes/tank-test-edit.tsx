@@ -1,40 +1,27 @@
-import { useQueryClient } from '@tanstack/react-query';
-import { useMemo, useRef, useState } from 'react';
+import { useMemo, useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { PARAMETER_KEYS } from '../../../shared/care/parameters';
-import type { UpdateWaterTestInput } from '../../../shared/schemas/water-test.schema';
-import type { WaterTestSaved } from '../../../shared/schemas/tank-views';
-import { Button } from '../../components/ui/button';
-import { Notice } from '../../components/ui/card';
-import { ConfirmDialog } from '../../components/ui/confirm-dialog';
-import { PageHeader } from '../../components/ui/page-header';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { careKeys } from '../../features/care/api/care';
-import { useTankProfile } from '../../features/tanks/api/care-profiles';
-import { useUploadPhotos } from '../../features/tanks/api/photos';
-import { useTank } from '../../features/tanks/api/tanks';
-import { useDeleteWaterTest, useUpdateWaterTest, useWaterTest } from '../../features/tanks/api/water-tests';
-import { TankRouteError } from '../../features/tanks/components/tank-route-error';
-import { WaterTestForm } from '../../features/tanks/components/water-test/water-test-form';
-import { loadEntryMemory } from '../../features/tanks/lib/entry-memory';
-import { PhotoUploadError } from '../../features/tanks/lib/photo-upload-error';
-import { draftFromTest } from '../../features/tanks/lib/water-test-draft';
+import { asSubject } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
+import { PageHeader } from '@client/components/ui/page-header';
+import { Spinner } from '@client/components/ui/spinner';
+import { useDeleteWaterTest, useWaterTest } from '@client/features/readings/api/water-tests';
+import { WaterTestForm } from '@client/features/readings/components/water-test/water-test-form';
+import { loadEntryMemory } from '@client/features/readings/lib/entry-memory';
+import { draftFromTest } from '@client/features/readings/lib/water-test-draft';
+import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { useTankProfile } from '@client/lib/care-profiles';
+import type { SavedNotice } from '@client/lib/saved-notice';
+import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
-  const { tankId = '', testId = '' } = useParams();
-  const { me, activeClub, ability } = useSession();
-  const clubId = activeClub?.clubId ?? '';
-  const tank = useTank(clubId, tankId);
+  const { testId = '' } = useParams();
+  const { me, ability, clubId, tankId, tank } = useTankRoute();
   const test = useWaterTest(clubId, tankId, testId);
   const profile = useTankProfile(clubId, tank.data);
-  const update = useUpdateWaterTest(clubId, tankId, testId);
   const remove = useDeleteWaterTest(clubId, tankId);
-  const upload = useUploadPhotos(clubId);
   const navigate = useNavigate();
-  const qc = useQueryClient();
-  const saved = useRef<WaterTestSaved | undefined>(undefined);
   const [confirming, setConfirming] = useState(false);
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
   const initial = useMemo(() => (test.data ? draftFromTest(test.data, me.user) : undefined), [test.data, me.user]);
@@ -44,10 +31,7 @@ export function Component() {
   if (tank.isPending || test.isPending || !profile || !initial) return <Spinner label="Loading the test…" />;
   const t = tank.data;
   const allowed = !t.archivedAt && ability.can('update', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
-  const back = (message: string, warnings: string[] = []) => {
-    void qc.invalidateQueries({ queryKey: careKeys.tank(tankId) });
-    navigate(`/tanks/${tankId}`, { state: { saved: { message, warnings } } });
-  };
+  const back = (saved: SavedNotice) => navigate(`/tanks/${tankId}`, { state: { saved } });
 
   return (
     <>
@@ -56,35 +40,7 @@ export function Component() {
         <Notice tone="warning">Only the keeper of this tank can change its tests{t.archivedAt ? ', and not while it is archived' : ''}.</Notice>
       ) : (
         <div className="space-y-6">
-          <WaterTestForm
-            tank={t}
-            profile={profile}
-            prefs={me.user}
-            initial={initial}
-            memory={memory}
-            testId={testId}
-            submitLabel="Save changes"
-            onSkipPhotos={() => back('Changes saved.')}
-            onSave={async (input, photos) => {
-              if (!saved.current) {
-                const entries: NonNullable<UpdateWaterTestInput['entries']> = {};
-                for (const k of PARAMETER_KEYS) {
-                  const next = input.entries[k];
-                  if (next) Object.assign(entries, { [k]: next });
-                  else if (test.data.entries[k]) Object.assign(entries, { [k]: null });
-                }
-                saved.current = await update.mutateAsync({ takenAt: input.takenAt, note: input.note, entries });
-              }
-              if (photos.length) {
-                try {
-                  await upload.mutateAsync({ tankId, files: photos, waterTestId: testId, caption: 'Test colours' });
-                } catch (error) {
-                  throw new PhotoUploadError(error);
-                }
-              }
-              back('Changes saved. Derived values such as free ammonia were worked out again.', saved.current.warnings.map((w) => w.message));
-            }}
-          />
+          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} editing={test.data} submitLabel="Save changes" onSaved={back} />
           <div className="border-t border-tide-100 pt-4">
             <Button variant="ghost" className="text-ember-700" onClick={() => setConfirming(true)}>Delete this test</Button>
           </div>
@@ -97,7 +53,7 @@ export function Component() {
             onCancel={() => setConfirming(false)}
             onConfirm={() =>
               remove.mutate(testId, {
-                onSuccess: () => back('The test was deleted.'),
+                onSuccess: () => back({ message: 'The test was deleted.', warnings: [] }),
                 onSettled: () => setConfirming(false),
               })
             }

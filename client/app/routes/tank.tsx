@@ -1,22 +1,22 @@
 import type { ReactNode } from 'react';
-import { useLocation, useParams } from 'react-router';
-import { asSubject } from '../../../shared/abilities';
-import { Button } from '../../components/ui/button';
-import { Card, Notice } from '../../components/ui/card';
-import { Spinner } from '../../components/ui/spinner';
-import { useSession } from '../../features/auth/components/session-provider';
-import { TankCarePanel } from '../../features/care/components/tank-care-panel';
-import { useCareProfile } from '../../features/tanks/api/care-profiles';
-import { useTankPhotos } from '../../features/tanks/api/photos';
-import { useSetArchived, useTank } from '../../features/tanks/api/tanks';
-import { TankHistory } from '../../features/tanks/components/history/tank-history';
-import { Timeline } from '../../features/tanks/components/history/timeline';
-import { LivestockPanel } from '../../features/tanks/components/livestock/livestock-panel';
-import { TankHeader } from '../../features/tanks/components/tank-header';
-import { TankRecords } from '../../features/tanks/components/tank-records';
-import { TankRouteError } from '../../features/tanks/components/tank-route-error';
-import { AskAboutRecent } from '../../features/questions/components/ask-about-recent';
-import type { SavedNotice } from '../../features/tanks/lib/saved-notice';
+import { useLocation } from 'react-router';
+import { asSubject } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { TankCarePanel } from '@client/features/care/components/tank-care-panel';
+import { TankRecords } from '@client/features/import/components/tank-records';
+import { AskAboutRecent } from '@client/features/questions/components/ask-about-recent';
+import { TankHistory } from '@client/features/readings/components/history/tank-history';
+import { Timeline } from '@client/features/readings/components/history/timeline';
+import { useSetArchived } from '@client/features/tanks/api/tanks';
+import { LivestockPanel } from '@client/features/tanks/components/livestock/livestock-panel';
+import { TankHeader } from '@client/features/tanks/components/tank-header';
+import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { useProfile } from '@client/lib/care-profiles';
+import { useTankPhotos } from '@client/lib/photos';
+import type { SavedNotice } from '@client/lib/saved-notice';
+import { useTankRoute } from '../use-tank-route';
 
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
@@ -28,11 +28,8 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 }
 
 export function Component() {
-  const { tankId = '' } = useParams();
-  const { me, activeClub, ability } = useSession();
-  const clubId = activeClub?.clubId ?? '';
-  const tank = useTank(clubId, tankId);
-  const profile = useCareProfile(clubId, tank.data?.careProfileKey);
+  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const profile = useProfile(clubId, tank.data?.careProfileKey).data?.profile;
   const photos = useTankPhotos(clubId, tankId);
   const restore = useSetArchived(clubId, tankId);
   const saved = (useLocation().state as { saved?: SavedNotice } | null)?.saved;
@@ -48,7 +45,7 @@ export function Component() {
 
   return (
     <>
-      <TankHeader tank={t} prefs={me.user} profileName={profile.data?.name} photo={tankPhoto} isOwn={t.owner.id === me.user.id} canLog={canLog} canEdit={canEdit} />
+      <TankHeader tank={t} prefs={me.user} profileName={profile?.name} photo={tankPhoto} isOwn={t.owner.id === me.user.id} canLog={canLog} canEdit={canEdit} />
       <div className="space-y-8">
         {saved ? (
           <Notice tone={saved.warnings.length ? 'warning' : 'success'}>
@@ -64,12 +61,12 @@ export function Component() {
           </Notice>
         ) : null}
         <TankCarePanel clubId={clubId} tankId={t.id} ownerId={t.owner.id} phase={t.phase} />
-        <TankHistory clubId={clubId} tankId={t.id} profile={profile.data} prefs={me.user} cycling={t.phase === 'cycling'} editable={canLog} />
+        <TankHistory clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} cycling={t.phase === 'cycling'} editable={canLog} />
         <Section title={t.owner.id === me.user.id ? 'Ask your mentor' : 'Questions'}>
           <Card><AskAboutRecent clubId={clubId} tankId={t.id} ownerId={t.owner.id} prefs={me.user} canAsk={active && ability.can('create', asSubject('Question', { clubId: t.clubId, askerId: t.owner.id }))} /></Card>
         </Section>
         <Section title="Timeline">
-          <Card><Timeline clubId={clubId} tankId={t.id} profile={profile.data} prefs={me.user} editable={canLog} /></Card>
+          <Card><Timeline clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} editable={canLog} /></Card>
         </Section>
         <Section title="Animals">
           <Card><LivestockPanel clubId={clubId} tankId={t.id} livestock={t.livestock} editable={canEdit} /></Card>

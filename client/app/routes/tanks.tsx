@@ -1,8 +1,8 @@
-import { asSubject } from '../../../shared/abilities';
-import { Notice } from '../../components/ui/card';
-import { useSession } from '../../features/auth/components/session-provider';
-import { TankList } from '../../features/tanks/components/list/tank-list';
-import { TankRouteError } from '../../features/tanks/components/tank-route-error';
+import { asSubject } from '@shared/abilities';
+import { Notice } from '@client/components/ui/card';
+import { useSession } from '@client/features/auth/components/session-provider';
+import { TankList } from '@client/features/tanks/components/list/tank-list';
+import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
 
 export function Component() {
   const { me, activeClub, ability } = useSession();

@@ -1,28 +1,52 @@
 import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
-import { ApiError } from '../../lib/api-client';
+import { ApiError } from '@client/lib/api-client';
 
-function describe(error: unknown): { title: string; detail: string } {
-  if (isRouteErrorResponse(error)) {
-    if (error.status === 404) return { title: "We couldn't find that page", detail: 'The link may be old.' };
-    return { title: `Something went wrong (${error.status})`, detail: error.statusText };
-  }
-  if (error instanceof ApiError) {
-    if (error.isForbidden) return { title: "That isn't yours to see", detail: error.message };
-    if (error.isNotFound) return { title: "We couldn't find that", detail: error.message };
-    return { title: 'Something went wrong', detail: error.message };
-  }
+interface Words {
+  title: string;
+  detail: string;
+}
+
+/** What a screen says instead of the generic words when the thing it shows is not the reader's, or not there. */
+export interface RouteErrorWords {
+  forbidden?: Words;
+  notFound?: Words;
+}
+
+function describe(error: unknown, words: RouteErrorWords): Words {
+  const notFound = (error instanceof ApiError && error.isNotFound) || (isRouteErrorResponse(error) && error.status === 404);
+  if (error instanceof ApiError && error.isForbidden) return words.forbidden ?? { title: "That isn't yours to see", detail: error.message };
+  if (notFound) return words.notFound ?? (error instanceof ApiError ? { title: "We couldn't find that", detail: error.message } : { title: "We couldn't find that page", detail: 'The link may be old.' });
+  if (isRouteErrorResponse(error)) return { title: `Something went wrong (${error.status})`, detail: error.statusText };
+  if (error instanceof ApiError) return { title: 'Something went wrong', detail: error.message };
   return { title: 'Something went wrong', detail: 'Please reload the page. If it keeps happening, tell your club admin.' };
 }
 
+function ErrorMessage({ words, back, className }: { words: Words; back: { to: string; label: string }; className: string }) {
+  return (
+    <div className={className}>
+      <h1 className="text-2xl font-extrabold text-tide-900">{words.title}</h1>
+      <p className="mt-2 text-tide-700">{words.detail}</p>
+      <Link to={back.to} className="mt-6 inline-flex min-h-touch items-center rounded-full bg-tide-700 px-5 font-bold text-white">
+        {back.label}
+      </Link>
+    </div>
+  );
+}
+
+/** The app's last resort: a whole page, with a way back to the start. */
 export function RouteError() {
-  const { title, detail } = describe(useRouteError());
   return (
     <main role="alert" className="mx-auto max-w-md px-4 py-16 text-center">
-      <h1 className="text-2xl font-extrabold text-tide-900">{title}</h1>
-      <p className="mt-2 text-tide-700">{detail}</p>
-      <Link to="/" className="mt-6 inline-flex min-h-touch items-center rounded-full bg-tide-700 px-5 font-bold text-white">
-        Back to the start
-      </Link>
+      <ErrorMessage words={describe(useRouteError(), {})} back={{ to: '/', label: 'Back to the start' }} className="" />
     </main>
+  );
+}
+
+/** A route's error inside the app's frame, in the screen's own words, with a way back to its list. */
+export function SectionRouteError({ words, back }: { words: RouteErrorWords; back: { to: string; label: string } }) {
+  return (
+    <section role="alert">
+      <ErrorMessage words={describe(useRouteError(), words)} back={back} className="mx-auto max-w-md py-12 text-center" />
+    </section>
   );
 }

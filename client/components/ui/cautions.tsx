@@ -11,6 +11,10 @@ export const CAUTIONS = {
   medication: 'Medicate fish only on the advice of a veterinarian who knows aquatic animals.',
   buyingAnimals:
     'Buy animals only from legal, documented sources. Seahorses are protected by international trade rules (CITES) and national laws in many places: prefer captive-bred animals and keep the paperwork.',
+  waterChange:
+    'Match the new water to the tank: same temperature and, for salt water, the same salinity. Treat tap water with a conditioner, and follow the label of any salt mix or conditioner.',
+  quarantine:
+    'Keep new animals in a separate quarantine tank for a few weeks before they join the others, and ask a vet who knows fish if they look unwell.',
 } as const;
 
 export function Caution({ children, title = 'Take care' }: { children: ReactNode; title?: string }) {
@@ -23,4 +27,9 @@ export function Caution({ children, title = 'Take care' }: { children: ReactNode
       </p>
     </aside>
   );
+}
+
+/** One of the worded cautions, by name, beside the action it belongs to. */
+export function CautionFor({ kind, title }: { kind: keyof typeof CAUTIONS; title?: string }) {
+  return <Caution title={title}>{CAUTIONS[kind]}</Caution>;
 }

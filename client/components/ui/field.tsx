@@ -1,4 +1,4 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes } from 'react';
+import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
 
 interface FieldProps {
   label: string;
@@ -6,40 +6,47 @@ interface FieldProps {
   hint?: ReactNode;
 }
 
-const inputClass = (error?: string) =>
-  `mt-1 block w-full min-h-touch rounded-xl border bg-white px-3 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200 ${error ? 'border-ember-500' : 'border-tide-200'}`;
+const controlClass = (error?: string) =>
+  `mt-1 block w-full rounded-xl border bg-white px-3 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200 ${error ? 'border-ember-500' : 'border-tide-200'}`;
 
-export const TextField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttributes<HTMLInputElement>>(function TextField(
-  { label, error, hint, id, ...rest },
-  ref,
-) {
+/** The label, the control and, under it, the error or else the hint, wired to each other for screen readers. */
+function Field({ label, error, hint, id, control }: FieldProps & { id: string | undefined; control: (a11y: { id: string; 'aria-invalid'?: true; 'aria-describedby'?: string }) => ReactNode }) {
   const auto = useId();
   const inputId = id ?? auto;
   return (
     <div>
       <label htmlFor={inputId} className="block text-sm font-bold text-tide-800">{label}</label>
-      <input ref={ref} id={inputId} aria-invalid={error ? true : undefined} aria-describedby={error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined} className={inputClass(error)} {...rest} />
+      {control({ id: inputId, 'aria-invalid': error ? true : undefined, 'aria-describedby': error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined })}
       {hint && !error ? <p id={`${inputId}-hint`} className="mt-1 text-sm text-tide-600">{hint}</p> : null}
       {error ? <p id={`${inputId}-error`} role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error}</p> : null}
     </div>
   );
+}
+
+export const TextField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttributes<HTMLInputElement>>(function TextField({ label, error, hint, id, ...rest }, ref) {
+  return <Field label={label} error={error} hint={hint} id={id} control={(a11y) => <input ref={ref} {...a11y} className={`${controlClass(error)} min-h-touch`} {...rest} />} />;
 });
 
 export const SelectField = forwardRef<HTMLSelectElement, FieldProps & SelectHTMLAttributes<HTMLSelectElement> & { options: { value: string; label: string }[] }>(
   function SelectField({ label, error, hint, id, options, ...rest }, ref) {
-    const auto = useId();
-    const inputId = id ?? auto;
     return (
-      <div>
-        <label htmlFor={inputId} className="block text-sm font-bold text-tide-800">{label}</label>
-        <select ref={ref} id={inputId} aria-invalid={error ? true : undefined} className={inputClass(error)} {...rest}>
-          {options.map((o) => (
-            <option key={o.value} value={o.value}>{o.label}</option>
-          ))}
-        </select>
-        {hint && !error ? <p className="mt-1 text-sm text-tide-600">{hint}</p> : null}
-        {error ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error}</p> : null}
-      </div>
+      <Field
+        label={label}
+        error={error}
+        hint={hint}
+        id={id}
+        control={(a11y) => (
+          <select ref={ref} {...a11y} className={`${controlClass(error)} min-h-touch`} {...rest}>
+            {options.map((o) => (
+              <option key={o.value} value={o.value}>{o.label}</option>
+            ))}
+          </select>
+        )}
+      />
     );
   },
 );
+
+export const TextAreaField = forwardRef<HTMLTextAreaElement, FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>>(function TextAreaField({ label, error, hint, id, rows = 3, ...rest }, ref) {
+  return <Field label={label} error={error} hint={hint} id={id} control={(a11y) => <textarea ref={ref} rows={rows} {...a11y} className={`${controlClass(error)} py-2`} {...rest} />} />;
+});

@@ -1,4 +1,4 @@
-import type { Severity } from '../../../shared/care';
+import type { Severity } from '@shared/care';
 
 /** Colour plus a shape and a word, so severity never relies on colour alone. */
 const LOOK: Record<Severity, { label: string; mark: string; className: string }> = {

@@ -1,7 +1,7 @@
 import { render, screen } from '@testing-library/react';
 import { createMemoryRouter, RouterProvider } from 'react-router';
 import { describe, expect, it } from 'vitest';
-import { Component as NotFound } from '../../../client/app/routes/not-found';
+import { Component as NotFound } from '@client/app/routes/not-found';
 
 describe('not-found page', () => {
   it('when a route is unknown, then it says so and links home', async () => {

@@ -1,7 +1,7 @@
 import { cleanup, render } from '@testing-library/react';
 import { afterEach, describe, expect, it } from 'vitest';
-import { MarkdownLite } from '../../../client/features/questions/components/markdown-lite';
-import { parseMarkdownLite, safeHref } from '../../../client/features/questions/lib/markdown-lite';
+import { MarkdownLite } from '@client/features/questions/components/markdown-lite';
+import { parseMarkdownLite, safeHref } from '@client/features/questions/lib/markdown-lite';
 
 const renderText = (text: string, names: string[] = []) => render(<MarkdownLite text={text} mentionNames={names} />).container;
 

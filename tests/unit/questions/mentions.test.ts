@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { insertMention, mentionAtCaret } from '../../../client/features/questions/lib/mention-query';
-import { mentionedIn } from '../../../shared/questions/mentions';
+import { insertMention, mentionAtCaret } from '@client/features/questions/lib/mention-query';
+import { mentionedIn } from '@shared/questions/mentions';
 
 const people = [
   { userId: 'ana', displayName: 'Ana' },

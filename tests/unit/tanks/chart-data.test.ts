@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { niceTicks, seriesOf, yDomain } from '../../../client/features/tanks/lib/chart-data';
-import type { WaterTestView } from '../../../shared/schemas/tank-views';
+import { niceTicks, seriesOf, yDomain } from '@client/lib/chart-data';
+import type { WaterTestView } from '@shared/schemas/tank-views';
 
 const test = (takenAt: string, values: WaterTestView['values']) => ({ id: takenAt, takenAt, values, freeAmmonia: null }) as WaterTestView;
 

@@ -2,14 +2,14 @@ import { cleanup, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { QueryClient, QueryClientProvider } from '@tanstack/react-query';
 import { afterEach, describe, expect, it } from 'vitest';
-import { TROPICAL_FRESHWATER_PROFILE } from '../../../shared/care/profiles';
-import { convert } from '../../../shared/chemistry/units';
-import { salinityAsSpecificGravity } from '../../../shared/readings/salinity';
-import { TankForm } from '../../../client/features/tanks/components/tank-form/tank-form';
-import { profileKeys } from '../../../client/lib/care-profiles';
-import { bandText } from '../../../client/features/tanks/lib/bands';
-import { formatDisplay, formatVolume, toDisplay, type UnitPrefs } from '../../../client/features/tanks/lib/display-units';
-import { newTankDraft } from '../../../client/features/tanks/lib/tank-draft';
+import { TROPICAL_FRESHWATER_PROFILE } from '@shared/care/profiles';
+import { convert } from '@shared/chemistry/units';
+import { salinityAsSpecificGravity } from '@shared/readings/salinity';
+import { TankForm } from '@client/features/tanks/components/tank-form/tank-form';
+import { profileKeys } from '@client/lib/care-profiles';
+import { bandText } from '@client/lib/bands';
+import { formatDisplay, formatVolume, toDisplay, type UnitPrefs } from '@client/lib/display-units';
+import { newTankDraft } from '@client/features/tanks/lib/tank-draft';
 
 const US: UnitPrefs = { temperatureUnit: 'F', volumeUnit: 'USgal', salinityDisplay: 'sg' };
 const METRIC: UnitPrefs = { temperatureUnit: 'C', volumeUnit: 'L', salinityDisplay: 'ppt' };
@@ -45,7 +45,7 @@ describe('display units', () => {
     qc.setQueryData(profileKeys.all('club-1'), { profiles: [{ key: 'tropical-freshwater', name: 'Tropical freshwater', version: 1, systemTypes: ['tropical-freshwater'], animals: 'fish', source: 'built-in' }] });
     render(
       <QueryClientProvider client={qc}>
-        <TankForm clubId="club-1" prefs={US} initial={newTankDraft(US, 'tropical-freshwater', 'tropical-freshwater')} submitLabel="Add" onSave={async () => {}} />
+        <TankForm clubId="club-1" prefs={US} initial={newTankDraft(US, 'tropical-freshwater', 'tropical-freshwater')} submitLabel="Add" onSaved={() => {}} />
       </QueryClientProvider>,
     );
     const user = userEvent.setup();

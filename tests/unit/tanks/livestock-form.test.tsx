@@ -1,7 +1,7 @@
 import { cleanup, render, screen } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { AddLivestockForm } from '../../../client/features/tanks/components/livestock/livestock-forms';
+import { AddLivestockForm } from '@client/features/tanks/components/livestock/livestock-forms';
 
 describe('adding animals', () => {
   afterEach(cleanup);

@@ -1,26 +1,34 @@
 import { cleanup, render, screen, within } from '@testing-library/react';
 import userEvent from '@testing-library/user-event';
 import { afterEach, describe, expect, it, vi } from 'vitest';
-import { formatNumber } from '../../../shared/care/parameters';
-import { REEF_PROFILE, TROPICAL_FRESHWATER_PROFILE } from '../../../shared/care/profiles';
-import { normalizeWaterTest } from '../../../shared/readings/normalize-water-test';
-import { WaterTestForm, type WaterTestFormProps } from '../../../client/features/tanks/components/water-test/water-test-form';
-import type { UnitPrefs } from '../../../client/features/tanks/lib/display-units';
-import { newDraft } from '../../../client/features/tanks/lib/water-test-draft';
-import { ApiError } from '../../../client/lib/api-client';
+import type { useSaveWaterTest } from '@client/features/readings/api/water-tests';
+import { formatNumber } from '@shared/care/parameters';
+import { REEF_PROFILE, TROPICAL_FRESHWATER_PROFILE } from '@shared/care/profiles';
+import { normalizeWaterTest } from '@shared/readings/normalize-water-test';
+import { WaterTestForm, type WaterTestFormProps } from '@client/features/readings/components/water-test/water-test-form';
+import type { UnitPrefs } from '@client/lib/display-units';
+import { newDraft } from '@client/features/readings/lib/water-test-draft';
+import { ApiError } from '@client/lib/api-client';
 
 const METRIC: UnitPrefs = { temperatureUnit: 'C', volumeUnit: 'L', salinityDisplay: 'sg' };
 
+// The form saves through useSaveWaterTest; here its save stands in for the network (the hook has its own tests).
+type SaveWaterTest = ReturnType<typeof useSaveWaterTest>;
+const save = vi.hoisted(() => ({ onSave: undefined as unknown as SaveWaterTest }));
+vi.mock('@client/features/readings/api/water-tests', () => ({ useSaveWaterTest: () => save.onSave }));
+
 function renderForm(over: Partial<WaterTestFormProps> & { prefs?: UnitPrefs } = {}) {
   const prefs = over.prefs ?? METRIC;
-  const onSave = vi.fn<WaterTestFormProps['onSave']>().mockResolvedValue(undefined);
+  const onSave = vi.fn<SaveWaterTest>().mockResolvedValue({ message: 'Test saved.', warnings: [] });
+  save.onSave = onSave;
   const props: WaterTestFormProps = {
+    clubId: 'club-1',
     tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', lastKnown: {}, volumeL: 200, hasLivestock: true },
     profile: REEF_PROFILE,
     prefs,
     initial: newDraft(prefs, {}),
     memory: { parameters: ['temperature', 'salinity', 'pH', 'ammonia'], entries: {} },
-    onSave,
+    onSaved: () => {},
     ...over,
   };
   render(<WaterTestForm {...props} />);

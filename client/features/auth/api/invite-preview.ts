@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Role } from '../../../../shared/constants/roles';
-import { api } from '../../../lib/api-client';
+import type { Role } from '@shared/constants/roles';
+import { api } from '@client/lib/api-client';
 
 export interface InvitePreview {
   clubName: string;

@@ -1,8 +1,8 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { PackedRules } from '../../../../shared/abilities';
-import type { Role } from '../../../../shared/constants/roles';
-import type { SalinityDisplay, TemperatureUnit, VolumeUnit } from '../../../../shared/constants/units';
-import { api, ApiError } from '../../../lib/api-client';
+import type { PackedRules } from '@shared/abilities';
+import type { Role } from '@shared/constants/roles';
+import type { SalinityDisplay, TemperatureUnit, VolumeUnit } from '@shared/constants/units';
+import { api, ApiError } from '@client/lib/api-client';
 
 export interface MeUser {
   id: string;

@@ -1,6 +1,6 @@
 import { useMutation, useQueryClient } from '@tanstack/react-query';
-import type { AcceptInviteInput, SignInInput, UpdateProfileInput } from '../../../../shared/schemas/auth.schema';
-import { api, resetCsrfToken } from '../../../lib/api-client';
+import type { AcceptInviteInput, SignInInput, UpdateProfileInput } from '@shared/schemas/auth.schema';
+import { api, resetCsrfToken } from '@client/lib/api-client';
 import { authKeys, type MeUser } from './me';
 
 /** After anything that changes who is signed in: new CSRF token, fresh /me, nothing cached from the old person. */

@@ -1,16 +1,15 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import type { z } from 'zod';
-import { ROLE_LABELS } from '../../../../shared/constants/roles';
-import { newAccountFormSchema } from '../../../../shared/schemas/auth.schema';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { TextField } from '../../../components/ui/field';
-import { Spinner } from '../../../components/ui/spinner';
-import { ApiError } from '../../../lib/api-client';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { ROLE_LABELS } from '@shared/constants/roles';
+import { newAccountFormSchema } from '@shared/schemas/auth.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { TextField } from '@client/components/ui/field';
+import { Spinner } from '@client/components/ui/spinner';
+import { ApiError } from '@client/lib/api-client';
+import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import { useMe } from '../api/me';
 import { useInvitePreview } from '../api/invite-preview';
 import { useAcceptInvite } from '../api/mutations';
@@ -21,8 +20,8 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
   const preview = useInvitePreview(token);
   const me = useMe();
   const accept = useAcceptInvite();
-  const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, formState } = useForm<Input>({ resolver: zodResolver(newAccountFormSchema) });
+  const { formError, attempt } = useSaveErrors(fieldsIn(['displayName', 'password']), setError);
 
   if (!token) return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
   if (preview.isPending) return <Spinner label="Checking your invitation…" />;
@@ -37,15 +36,11 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
     </p>
   );
 
-  const acceptAs = async (values?: { displayName: string; password: string }) => {
-    setFormError(undefined);
-    try {
+  const acceptAs = (values?: { displayName: string; password: string }) =>
+    attempt(async () => {
       const res = await accept.mutateAsync({ token, ...values });
       onDone(res.clubId);
-    } catch (e) {
-      setFormError(applyServerErrors(e, setError, ['displayName', 'password']));
-    }
-  };
+    });
 
   if (invite.accountExists) {
     const signedInAsInvitee = me.data?.user.email === invite.email;

@@ -1,14 +1,13 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { z } from 'zod';
-import { EXPERIENCE_LEVELS } from '../../../../shared/constants/roles';
-import { SALINITY_DISPLAYS, TEMPERATURE_UNITS, VOLUME_UNITS } from '../../../../shared/constants/units';
-import { updateProfileSchema } from '../../../../shared/schemas/auth.schema';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { EXPERIENCE_LEVELS } from '@shared/constants/roles';
+import { SALINITY_DISPLAYS, TEMPERATURE_UNITS, VOLUME_UNITS } from '@shared/constants/units';
+import { updateProfileSchema } from '@shared/schemas/auth.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { SelectField, TextField } from '@client/components/ui/field';
+import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import type { MeUser } from '../api/me';
 import { useUpdateProfile } from '../api/mutations';
 
@@ -26,7 +25,6 @@ const options = <K extends keyof typeof LABELS>(key: K, values: readonly (keyof 
 
 export function ProfileForm({ user }: { user: MeUser }) {
   const update = useUpdateProfile();
-  const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, formState } = useForm<Input>({
     resolver: zodResolver(schema),
     defaultValues: {
@@ -38,16 +36,10 @@ export function ProfileForm({ user }: { user: MeUser }) {
       salinityDisplay: user.salinityDisplay,
     },
   });
+  const { formError, attempt } = useSaveErrors(fieldsIn(Object.keys(schema.shape)), setError);
   const e = formState.errors;
   return (
-    <form noValidate className="space-y-4" onSubmit={handleSubmit(async (v) => {
-      setFormError(undefined);
-      try {
-        await update.mutateAsync(v);
-      } catch (err) {
-        setFormError(applyServerErrors(err, setError, Object.keys(schema.shape)));
-      }
-    })}>
+    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => attempt(() => update.mutateAsync(v)))}>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       {update.isSuccess && !formState.isDirty ? <Notice tone="success">Saved.</Notice> : null}
       <TextField label="Your name" error={e.displayName?.message} {...register('displayName')} />

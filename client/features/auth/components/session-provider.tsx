@@ -1,6 +1,6 @@
 import { AbilityProvider } from '@casl/react';
 import { createContext, useContext, useMemo, useState, type ReactNode } from 'react';
-import { createAbility, unpackAbilityRules, type AppAbility } from '../../../../shared/abilities';
+import { createAbility, unpackAbilityRules, type AppAbility } from '@shared/abilities';
 import type { Me, MeMembership } from '../api/me';
 
 interface Session {

@@ -1,32 +1,28 @@
 import { zodResolver } from '@hookform/resolvers/zod';
-import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import { Link } from 'react-router';
 import type { z } from 'zod';
-import { signInSchema } from '../../../../shared/schemas/auth.schema';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { TextField } from '../../../components/ui/field';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { signInSchema } from '@shared/schemas/auth.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { TextField } from '@client/components/ui/field';
+import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import { useSignIn } from '../api/mutations';
 
 type Input = z.input<typeof signInSchema>;
 
 export function SignInForm({ onDone }: { onDone: () => void }) {
   const signIn = useSignIn();
-  const [formError, setFormError] = useState<string>();
   const { register, handleSubmit, setError, formState } = useForm<Input, unknown, z.output<typeof signInSchema>>({
     resolver: zodResolver(signInSchema),
   });
-  const submit = handleSubmit(async (values) => {
-    setFormError(undefined);
-    try {
+  const { formError, attempt } = useSaveErrors(fieldsIn(['email', 'password']), setError);
+  const submit = handleSubmit((values) =>
+    attempt(async () => {
       await signIn.mutateAsync(values);
       onDone();
-    } catch (e) {
-      setFormError(applyServerErrors(e, setError, ['email', 'password']));
-    }
-  });
+    }),
+  );
   return (
     <form onSubmit={submit} noValidate className="space-y-4">
       {formError ? <Notice tone="error">{formError}</Notice> : null}

@@ -1,5 +1,5 @@
 import { Link, useNavigate } from 'react-router';
-import { ROLE_LABELS } from '../../../../shared/constants/roles';
+import { ROLE_LABELS } from '@shared/constants/roles';
 import { useSignOut } from '../api/mutations';
 import { useSession } from './session-provider';
 

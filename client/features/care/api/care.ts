@@ -1,7 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { CycleStageResult, DueTest, ReadinessItem, Severity } from '../../../../shared/care';
-import type { ReadinessChecklistInput } from '../../../../shared/schemas/concern.schema';
-import { api } from '../../../lib/api-client';
+import type { CycleStageResult, DueTest, ReadinessItem, Severity } from '@shared/care';
+import type { ReadinessChecklistInput } from '@shared/schemas/concern.schema';
+import { api } from '@client/lib/api-client';
+import { careKeys } from '@client/lib/tank-keys';
 
 export interface ConcernView {
   id: string;
@@ -35,12 +36,6 @@ export interface CareSummary {
   };
   concerns: ConcernView[];
 }
-
-export const careKeys = {
-  tank: (tankId: string) => ['care', 'tank', tankId] as const,
-  summary: (tankId: string) => [...careKeys.tank(tankId), 'summary'] as const,
-  concerns: (tankId: string, status: 'live' | 'all') => [...careKeys.tank(tankId), 'concerns', status] as const,
-};
 
 export const careSummaryQuery = (clubId: string, tankId: string) =>
   queryOptions({

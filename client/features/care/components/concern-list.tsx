@@ -1,11 +1,11 @@
 import { Can } from '@casl/react';
 import { useState } from 'react';
-import { asSubject, type AppAbility } from '../../../../shared/abilities';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
+import { asSubject, type AppAbility } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
 import { useConcernAction, useConcernHistory, type ConcernView } from '../api/care';
-import { SeverityBadge } from '../../../components/ui/severity-badge';
+import { SeverityBadge } from '@client/components/ui/severity-badge';
 
 const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 

@@ -1,4 +1,4 @@
-import { parameterInfo } from '../../../../shared/care';
+import { parameterInfo } from '@shared/care';
 import type { CareSummary } from '../api/care';
 
 const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });

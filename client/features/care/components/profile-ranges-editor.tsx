@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import { parameterInfo, provenanceLabel, type AnyParameterKey, type CareProfile } from '../../../../shared/care';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
-import { useSaveProfile } from '../../../lib/care-profiles';
+import { parameterInfo, provenanceLabel, type AnyParameterKey, type CareProfile } from '@shared/care';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
+import { useSaveProfile } from '@client/lib/care-profiles';
 
 type Band = [number, number];
 

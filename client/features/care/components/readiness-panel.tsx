@@ -1,11 +1,11 @@
 import { Can } from '@casl/react';
 import { useState } from 'react';
-import { asSubject, type AppAbility } from '../../../../shared/abilities';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
+import { asSubject, type AppAbility } from '@shared/abilities';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
 import { useSaveChecklist, useSignOff, useWithdrawSignOff, type CareSummary } from '../api/care';
-import { CAUTIONS, Caution } from '../../../components/ui/cautions';
+import { CautionFor } from '@client/components/ui/cautions';
 
 const CHECKS = [
   { key: 'equipmentRunning', label: 'Heater, pump and lights have run for a while without trouble' },
@@ -79,7 +79,7 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
         )}
       </Can>
       {error ? <Notice tone="error">{error}</Notice> : null}
-      <Caution title="Before you buy">{CAUTIONS.buyingAnimals}</Caution>
+      <CautionFor kind="buyingAnimals" title="Before you buy" />
     </section>
   );
 }

@@ -1,7 +1,7 @@
-import { Card, Notice } from '../../../components/ui/card';
-import { Spinner } from '../../../components/ui/spinner';
+import { Card, Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
 import { useCareSummary } from '../api/care';
-import { CAUTIONS, Caution } from '../../../components/ui/cautions';
+import { CautionFor } from '@client/components/ui/cautions';
 import { ConcernList } from './concern-list';
 import { CycleTimeline } from './cycle-timeline';
 import { DueTests } from './due-tests';
@@ -21,9 +21,9 @@ export function TankCarePanel({ clubId, tankId, ownerId, phase }: { clubId: stri
       <ConcernList concerns={s.concerns} clubId={clubId} tankId={tankId} ownerId={ownerId} />
       <DueTests due={s.due} />
       <CycleTimeline cycle={s.cycle} typical={s.cycleTypical} phase={phase} />
-      {phase === 'cycling' ? <Caution title="Fishless cycling">{CAUTIONS.fishlessCycling}</Caution> : null}
+      {phase === 'cycling' ? <CautionFor kind="fishlessCycling" title="Fishless cycling" /> : null}
       <ReadinessPanel readiness={s.readiness} clubId={clubId} tankId={tankId} ownerId={ownerId} />
-      <Caution title="Medication">{CAUTIONS.medication}</Caution>
+      <CautionFor kind="medication" title="Medication" />
     </Card>
   );
 }

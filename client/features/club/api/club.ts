@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { Role } from '../../../../shared/constants/roles';
-import type { CreateInviteInput } from '../../../../shared/schemas/club.schema';
-import { api } from '../../../lib/api-client';
+import type { Role } from '@shared/constants/roles';
+import type { CreateInviteInput } from '@shared/schemas/club.schema';
+import { api } from '@client/lib/api-client';
 
 export interface ClubMember {
   membershipId: string;

@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { AcceptMentorRequestInput, CreateMentorRequestInput, DeclineMentorRequestInput } from '../../../../shared/schemas/mentor-request.schema';
-import type { MentorRequestView, MyMentorRequestView } from '../../../../shared/schemas/notification-views';
-import { api } from '../../../lib/api-client';
+import type { AcceptMentorRequestInput, CreateMentorRequestInput, DeclineMentorRequestInput } from '@shared/schemas/mentor-request.schema';
+import type { MentorRequestView, MyMentorRequestView } from '@shared/schemas/notification-views';
+import { api } from '@client/lib/api-client';
 import { clubKeys } from './club';
 
 export const mentorRequestKeys = {

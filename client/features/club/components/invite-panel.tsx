@@ -2,13 +2,13 @@ import { zodResolver } from '@hookform/resolvers/zod';
 import { useState } from 'react';
 import { useForm } from 'react-hook-form';
 import type { z } from 'zod';
-import { ROLE_LABELS, ROLES } from '../../../../shared/constants/roles';
-import { createInviteSchema } from '../../../../shared/schemas/club.schema';
-import { Button } from '../../../components/ui/button';
-import { Card, Notice } from '../../../components/ui/card';
-import { SelectField, TextField } from '../../../components/ui/field';
-import { Spinner } from '../../../components/ui/spinner';
-import { applyServerErrors } from '../../../lib/form-errors';
+import { ROLE_LABELS, ROLES } from '@shared/constants/roles';
+import { createInviteSchema } from '@shared/schemas/club.schema';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { SelectField, TextField } from '@client/components/ui/field';
+import { Spinner } from '@client/components/ui/spinner';
+import { fieldsIn, placeServerErrors } from '@client/lib/form-errors';
 import { useInvites, useResendInvite, useRevokeInvite, useSendInvite } from '../api/club';
 
 const dateFmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
@@ -34,7 +34,7 @@ export function InvitePanel({ clubId }: { clubId: string }) {
           setNotice({ tone: 'success', text: `Invitation sent to ${v.email}.` });
           reset({ email: '', role: v.role });
         } catch (e) {
-          const message = applyServerErrors(e, setError, ['email', 'role']);
+          const message = placeServerErrors(e, fieldsIn(['email', 'role']), setError);
           if (message) setNotice({ tone: 'error', text: message });
         }
       })}>

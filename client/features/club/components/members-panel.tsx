@@ -1,9 +1,9 @@
 import { useState } from 'react';
-import { ROLE_LABELS } from '../../../../shared/constants/roles';
-import { Button } from '../../../components/ui/button';
-import { Card, Notice } from '../../../components/ui/card';
-import { Spinner } from '../../../components/ui/spinner';
-import { ApiError } from '../../../lib/api-client';
+import { ROLE_LABELS } from '@shared/constants/roles';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { ApiError } from '@client/lib/api-client';
 import { useAssignMentor, useAssignments, useEndAssignment, useMembers, type ClubMember } from '../api/club';
 
 /** The club's people; admins also pair mentors with mentees here. */

@@ -1,8 +1,8 @@
 import { useId, useState } from 'react';
-import { MAX_MENTOR_CAPACITY } from '../../../../shared/constants/mentorship';
-import { Button } from '../../../components/ui/button';
-import { Card, Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
+import { MAX_MENTOR_CAPACITY } from '@shared/constants/mentorship';
+import { Button } from '@client/components/ui/button';
+import { Card, Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
 import { useMembers } from '../api/club';
 import { useSetCapacity } from '../api/mentor-requests';
 

@@ -1,6 +1,6 @@
 import { keepPreviousData, queryOptions, useQuery } from '@tanstack/react-query';
-import type { DeskView } from '../../../../shared/schemas/desk.schema';
-import { api } from '../../../lib/api-client';
+import type { DeskView } from '@shared/schemas/desk.schema';
+import { api } from '@client/lib/api-client';
 
 export interface DeskFilters {
   urgentOnly: boolean;

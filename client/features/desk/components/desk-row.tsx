@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
-import { parameterInfo, isParameterKey } from '../../../../shared/care';
-import type { DeskRow as Row } from '../../../../shared/schemas/desk.schema';
-import { Button } from '../../../components/ui/button';
-import { SeverityBadge } from '../../../components/ui/severity-badge';
+import { parameterInfo, isParameterKey } from '@shared/care';
+import type { DeskRow as Row } from '@shared/schemas/desk.schema';
+import { Button } from '@client/components/ui/button';
+import { SeverityBadge } from '@client/components/ui/severity-badge';
 import { Sparkline } from './sparkline';
 
 const STAGE_WORDS: Record<Row['cycleStage'], string> = {

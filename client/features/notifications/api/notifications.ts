@@ -1,7 +1,7 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { UpdateNotificationPreferencesInput } from '../../../../shared/schemas/notification.schema';
-import type { NotificationPage, NotificationPreferencesView, NotificationView } from '../../../../shared/schemas/notification-views';
-import { api } from '../../../lib/api-client';
+import type { UpdateNotificationPreferencesInput } from '@shared/schemas/notification.schema';
+import type { NotificationPage, NotificationPreferencesView, NotificationView } from '@shared/schemas/notification-views';
+import { api } from '@client/lib/api-client';
 
 export const notificationKeys = {
   all: ['notifications'] as const,

@@ -1,9 +1,9 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useId, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
-import { Notice } from '../../../components/ui/card';
-import { Spinner } from '../../../components/ui/spinner';
-import { useSocketEvent, useSocketReconnect } from '../../../lib/socket';
+import { Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSocketEvent, useSocketReconnect } from '@client/lib/socket';
 import { notificationKeys, useMarkAllRead, useMarkRead, useNotifications } from '../api/notifications';
 import { NotificationList } from './notification-list';
 

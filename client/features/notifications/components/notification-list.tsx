@@ -1,5 +1,5 @@
-import type { NotificationView } from '../../../../shared/schemas/notification-views';
-import { relativeTime } from '../../../lib/relative-time';
+import type { NotificationView } from '@shared/schemas/notification-views';
+import { relativeTime } from '@client/lib/relative-time';
 
 const ACCENT: Partial<Record<NotificationView['kind'], string>> = {
   'concern.urgent': 'bg-ember-500',

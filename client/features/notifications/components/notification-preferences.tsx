@@ -1,7 +1,7 @@
-import { EMAIL_MODE_LABELS, EMAIL_MODES, NOTIFICATION_KIND_LABELS, NOTIFICATION_KINDS, type EmailMode, type NotificationKind } from '../../../../shared/constants/notifications';
-import { Notice } from '../../../components/ui/card';
-import { SelectField } from '../../../components/ui/field';
-import { Spinner } from '../../../components/ui/spinner';
+import { EMAIL_MODE_LABELS, EMAIL_MODES, NOTIFICATION_KIND_LABELS, NOTIFICATION_KINDS, type EmailMode, type NotificationKind } from '@shared/constants/notifications';
+import { Notice } from '@client/components/ui/card';
+import { SelectField } from '@client/components/ui/field';
+import { Spinner } from '@client/components/ui/spinner';
 import { usePreferences, useUpdatePreferences } from '../api/notifications';
 
 const OPTIONS = EMAIL_MODES.map((m) => ({ value: m, label: EMAIL_MODE_LABELS[m] }));

@@ -1,8 +1,8 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
-import type { PersonRef } from '../../../../shared/schemas/notification-views';
-import type { QuestionDetailView, QuestionSummaryView, ReplyView } from '../../../../shared/schemas/question-views';
-import type { AskQuestionInput, ReplyInput } from '../../../../shared/schemas/question.schema';
-import { api } from '../../../lib/api-client';
+import type { PersonRef } from '@shared/schemas/notification-views';
+import type { QuestionDetailView, QuestionSummaryView, ReplyView } from '@shared/schemas/question-views';
+import type { AskQuestionInput, ReplyInput } from '@shared/schemas/question.schema';
+import { api } from '@client/lib/api-client';
 
 export type ListStatus = 'open' | 'all';
 

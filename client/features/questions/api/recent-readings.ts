@@ -1,6 +1,6 @@
 import { queryOptions, useQuery } from '@tanstack/react-query';
-import type { Page, TankEventView, WaterTestView } from '../../../../shared/schemas/tank-views';
-import { api } from '../../../lib/api-client';
+import type { Page, TankEventView, WaterTestView } from '@shared/schemas/tank-views';
+import { api } from '@client/lib/api-client';
 import { questionKeys } from './questions';
 
 const RECENT = 5;

@@ -1,11 +1,11 @@
 import { useAbility } from '@casl/react';
 import { useId, useState } from 'react';
 import { useNavigate } from 'react-router';
-import { asSubject, type AppAbility } from '../../../../shared/abilities';
-import { QUESTION_BODY_MAX, QUESTION_TITLE_MAX } from '../../../../shared/schemas/question.schema';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
+import { asSubject, type AppAbility } from '@shared/abilities';
+import { QUESTION_BODY_MAX, QUESTION_TITLE_MAX } from '@shared/schemas/question.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
 import { useAskQuestion } from '../api/questions';
 import { useDraft } from '../lib/use-draft';
 

@@ -1,11 +1,13 @@
 import { useQueryClient } from '@tanstack/react-query';
-import { parameterInfo, PARAMETER_KEYS } from '../../../../shared/care/parameters';
-import { Notice } from '../../../components/ui/card';
-import { Spinner } from '../../../components/ui/spinner';
-import { useSocketEvent } from '../../../lib/socket';
+import { PARAMETER_KEYS } from '@shared/care/parameters';
+import { Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { useSocketEvent } from '@client/lib/socket';
 import { questionKeys } from '../api/questions';
 import { recentReadingsQuery, useRecentReadings } from '../api/recent-readings';
-import { describeObservation, formatDateTime, formatFigure, type FigurePrefs } from '../lib/figures';
+import { describeObservation } from '@client/lib/describe-event';
+import { formatDayTime } from '@client/lib/date-format';
+import { formatLabelled, type ReadingPrefs } from '@client/lib/display-units';
 import { AskAboutReading } from './ask-about-reading';
 import { QuestionList } from './question-list';
 
@@ -13,7 +15,7 @@ function Row({ when, summary, children }: { when: string; summary: string; child
   return (
     <li className="flex flex-wrap items-center justify-between gap-2 py-3">
       <div className="min-w-0">
-        <p className="font-bold text-tide-900">{formatDateTime(when)}</p>
+        <p className="font-bold text-tide-900">{formatDayTime(when)}</p>
         <p className="text-sm text-tide-700">{summary}</p>
       </div>
       {children}
@@ -25,7 +27,7 @@ function Row({ when, summary, children }: { when: string; summary: string; child
  * On the tank page: the latest tests and observations, each with "Ask about this", and the questions already asked
  * about the tank.
  */
-export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clubId: string; tankId: string; ownerId: string; prefs: FigurePrefs; canAsk: boolean }) {
+export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clubId: string; tankId: string; ownerId: string; prefs: ReadingPrefs; canAsk: boolean }) {
   const recent = useRecentReadings(clubId, tankId);
   const qc = useQueryClient();
   // A new test, a reply or a changed status on this tank: the lists here follow without a reload.
@@ -46,7 +48,7 @@ export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clu
         ) : (
           <ul className="divide-y divide-tide-100" aria-label="Recent readings to ask about">
             {recent.data.tests.map((t) => (
-              <Row key={t.id} when={t.takenAt} summary={PARAMETER_KEYS.filter((k) => t.values[k] !== undefined).map((k) => `${parameterInfo(k).label} ${formatFigure(k, t.values[k]!, prefs)}`).join(' · ')}>
+              <Row key={t.id} when={t.takenAt} summary={PARAMETER_KEYS.filter((k) => t.values[k] !== undefined).map((k) => formatLabelled(k, t.values[k]!, prefs)).join(' · ')}>
                 <AskAboutReading clubId={clubId} tankId={tankId} waterTestId={t.id} ownerId={ownerId} />
               </Row>
             ))}

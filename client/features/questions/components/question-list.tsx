@@ -1,8 +1,8 @@
 import { Link } from 'react-router';
-import type { QuestionSummaryView } from '../../../../shared/schemas/question-views';
-import { Card, Notice } from '../../../components/ui/card';
-import { Spinner } from '../../../components/ui/spinner';
-import { relativeTime } from '../../../lib/relative-time';
+import type { QuestionSummaryView } from '@shared/schemas/question-views';
+import { Card, Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { relativeTime } from '@client/lib/relative-time';
 import { useQuestions, type ListStatus } from '../api/questions';
 
 function StatusMark({ q }: { q: QuestionSummaryView }) {

@@ -1,14 +1,15 @@
 import { useState } from 'react';
-import { CartesianGrid, ComposedChart, Line, ReferenceArea, ReferenceLine, ResponsiveContainer, Tooltip, XAxis, YAxis } from 'recharts';
-import { parameterInfo, PARAMETER_KEYS, type ParameterKey } from '../../../../shared/care/parameters';
-import { severityRank } from '../../../../shared/care';
-import type { ChartReading, QuestionSnapshot } from '../../../../shared/schemas/question-views';
-import { Card } from '../../../components/ui/card';
-import { figureUnit, formatDateTime, formatDay, formatFigure, toFigure, type FigurePrefs } from '../lib/figures';
+import { parameterInfo, PARAMETER_KEYS, type ParameterKey } from '@shared/care/parameters';
+import { severityRank } from '@shared/care';
+import { DAY_MS } from '@shared/care/time';
+import type { ChartReading, QuestionSnapshot } from '@shared/schemas/question-views';
+import { ParameterLineChart } from '@client/components/charts/parameter-line-chart';
+import { Card } from '@client/components/ui/card';
+import { CHART_COLOURS, seriesOf } from '@client/lib/chart-data';
+import { formatDay } from '@client/lib/date-format';
+import { formatDisplay, type UnitPrefs } from '@client/lib/display-units';
 
-const DAY_MS = 86_400_000;
 const WINDOW_DAYS = 14;
-const COLOURS = { line: '#18576b', grid: '#d4eef3', ideal: '#2f8f4e', marker: '#9c2a1b', axis: '#1a6c84' } as const;
 
 /** The parameter to open on: the one the worst concern was about, else the first one the test measured. */
 function firstParameter(snapshot: QuestionSnapshot, available: ParameterKey[]): ParameterKey | undefined {
@@ -17,32 +18,19 @@ function firstParameter(snapshot: QuestionSnapshot, available: ParameterKey[]): 
   return [...worst, ...measured].find((k): k is ParameterKey => available.includes(k as ParameterKey)) ?? available[0];
 }
 
-function TooltipBody({ active, payload, unit }: { active?: boolean; payload?: readonly { value?: unknown; payload?: { t: number } }[]; unit: string }) {
-  const p = payload?.[0];
-  if (!active || !p?.payload || typeof p.value !== 'number') return null;
-  return (
-    <div className="rounded-lg bg-white px-3 py-2 text-sm shadow-card ring-1 ring-tide-100">
-      <p className="font-bold text-tide-900">{formatDateTime(p.payload.t)}</p>
-      <p className="font-semibold text-tide-800">{p.value}{unit ? ` ${unit}` : ''}</p>
-    </div>
-  );
-}
-
 /** The tank's readings two weeks either side of the question's date, one parameter at a time, the date marked. */
-export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartReading[]; snapshot: QuestionSnapshot; prefs: FigurePrefs }) {
+export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartReading[]; snapshot: QuestionSnapshot; prefs: UnitPrefs }) {
   const available = PARAMETER_KEYS.filter((k) => readings.some((r) => r.values[k] !== undefined));
   const [chosen, setChosen] = useState<ParameterKey | undefined>(() => firstParameter(snapshot, available));
   const at = Date.parse(snapshot.subject.kind === 'water-test' ? snapshot.subject.takenAt : snapshot.subject.occurredAt);
   const key = chosen && available.includes(chosen) ? chosen : available[0];
   if (!key) return <Card><p className="text-tide-700">No water tests in the two weeks either side of this date.</p></Card>;
 
-  const unit = figureUnit(key, prefs);
-  const decimals = key === 'salinity' && prefs.salinityDisplay === 'sg' ? 4 : parameterInfo(key).decimals;
-  const points = readings.flatMap((r) => (r.values[key] === undefined ? [] : [{ t: Date.parse(r.takenAt), v: Number(toFigure(key, r.values[key]!, prefs).toFixed(decimals)) }]));
-  const band = snapshot.profile?.ranges[key]?.ideal;
-  const ideal = band ? ([toFigure(key, band[0], prefs), toFigure(key, band[1], prefs)] as const) : undefined;
+  const span = [at - WINDOW_DAYS * DAY_MS, at + WINDOW_DAYS * DAY_MS] as const;
+  const points = seriesOf(readings, key, prefs);
+  const range = snapshot.profile?.ranges[key];
   const latest = readings.filter((r) => r.values[key] !== undefined).at(-1);
-  const summary = `${parameterInfo(key).label}: ${points.length} readings between ${formatDay(at - WINDOW_DAYS * DAY_MS)} and ${formatDay(at + WINDOW_DAYS * DAY_MS)}${latest ? `, the last ${formatFigure(key, latest.values[key]!, prefs)}` : ''}.`;
+  const summary = `${parameterInfo(key).label}: ${points.length} readings between ${formatDay(span[0])} and ${formatDay(span[1])}${latest ? `, the last ${formatDisplay(key, latest.values[key]!, prefs)}` : ''}.`;
 
   return (
     <Card>
@@ -56,21 +44,20 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
           ))}
         </div>
       </div>
-      <div role="img" aria-label={summary} className="mt-3 h-56" data-chart={key}>
-        <ResponsiveContainer width="100%" height="100%">
-          <ComposedChart data={points} margin={{ top: 16, right: 8, bottom: 0, left: 0 }}>
-            <CartesianGrid stroke={COLOURS.grid} vertical={false} />
-            <XAxis dataKey="t" type="number" scale="time" domain={[at - WINDOW_DAYS * DAY_MS, at + WINDOW_DAYS * DAY_MS]} tickFormatter={formatDay} stroke={COLOURS.axis} fontSize={12} minTickGap={28} />
-            <YAxis width={52} stroke={COLOURS.axis} fontSize={12} domain={['auto', 'auto']} allowDecimals />
-            {ideal ? <ReferenceArea y1={ideal[0]} y2={ideal[1]} fill={COLOURS.ideal} fillOpacity={0.15} ifOverflow="extendDomain" /> : null}
-            <ReferenceLine x={at} stroke={COLOURS.marker} strokeDasharray="4 3" label={{ value: 'Asked about', position: 'insideTopLeft', fontSize: 11, fill: COLOURS.marker }} />
-            <Tooltip content={<TooltipBody unit={unit} />} />
-            <Line type="monotone" dataKey="v" name={parameterInfo(key).label} stroke={COLOURS.line} strokeWidth={2} dot={{ r: 3.5, fill: COLOURS.line }} isAnimationActive={false} />
-          </ComposedChart>
-        </ResponsiveContainer>
+      <div data-chart={key}>
+        <ParameterLineChart
+          parameter={key}
+          points={points}
+          prefs={prefs}
+          range={range}
+          span={span}
+          markers={[{ at, label: 'Asked about', colour: CHART_COLOURS.marker, position: 'insideTopLeft' }]}
+          summary={summary}
+          className="mt-3 h-56"
+        />
       </div>
       <p className="mt-2 text-sm text-tide-700">
-        Dashed line: the reading asked about.{ideal ? ' Green band: the profile’s ideal range when asked.' : ''} The line shows the tank’s tests as they are today.
+        Dashed line: the reading asked about.{range ? ` Green ${range.ideal[0] === range.ideal[1] ? 'line' : 'band'}: the profile’s ideal range when asked.` : ''} The line shows the tank’s tests as they are today.
       </p>
     </Card>
   );

@@ -1,10 +1,10 @@
 import { useId, useRef, useState } from 'react';
-import { mentionedIn } from '../../../../shared/questions/mentions';
-import type { PersonRef } from '../../../../shared/schemas/notification-views';
-import { QUESTION_BODY_MAX } from '../../../../shared/schemas/question.schema';
-import { Button } from '../../../components/ui/button';
-import { Notice } from '../../../components/ui/card';
-import { ApiError } from '../../../lib/api-client';
+import { mentionedIn } from '@shared/questions/mentions';
+import type { PersonRef } from '@shared/schemas/notification-views';
+import { QUESTION_BODY_MAX } from '@shared/schemas/question.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { ApiError } from '@client/lib/api-client';
 import { useReply } from '../api/questions';
 import { insertMention, mentionAtCaret } from '../lib/mention-query';
 import { useDraft } from '../lib/use-draft';

@@ -1,12 +1,14 @@
 import { useState } from 'react';
-import { severityRank } from '../../../../shared/care';
-import { parameterInfo, PARAMETER_KEYS } from '../../../../shared/care/parameters';
-import type { QuestionSnapshot } from '../../../../shared/schemas/question-views';
-import { Card } from '../../../components/ui/card';
-import { describeObservation, formatDateTime, formatFigure, type FigurePrefs } from '../lib/figures';
-import { SeverityBadge } from '../../../components/ui/severity-badge';
+import { severityRank } from '@shared/care';
+import { parameterInfo, PARAMETER_KEYS } from '@shared/care/parameters';
+import type { QuestionSnapshot } from '@shared/schemas/question-views';
+import { Card } from '@client/components/ui/card';
+import { describeObservation } from '@client/lib/describe-event';
+import { formatDayTime } from '@client/lib/date-format';
+import { formatDisplay, type ReadingPrefs } from '@client/lib/display-units';
+import { SeverityBadge } from '@client/components/ui/severity-badge';
 
-function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: FigurePrefs }) {
+function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: ReadingPrefs }) {
   const s = snapshot.subject;
   if (s.kind === 'observation') {
     return (
@@ -23,13 +25,13 @@ function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: Figur
         {keys.map((k) => (
           <div key={k} className="rounded-xl bg-tide-50 px-3 py-2" data-figure={k}>
             <dt className="text-xs font-bold uppercase tracking-wide text-tide-600">{parameterInfo(k).label}</dt>
-            <dd className="text-lg font-extrabold text-tide-900">{formatFigure(k, s.values[k]!, prefs)}</dd>
+            <dd className="text-lg font-extrabold text-tide-900">{formatDisplay(k, s.values[k]!, prefs)}</dd>
           </div>
         ))}
         {s.freeAmmonia !== null ? (
           <div className="rounded-xl bg-tide-50 px-3 py-2" data-figure="freeAmmonia">
             <dt className="text-xs font-bold uppercase tracking-wide text-tide-600">{parameterInfo('freeAmmonia').label}</dt>
-            <dd className="text-lg font-extrabold text-tide-900">{formatFigure('freeAmmonia', s.freeAmmonia, prefs)}</dd>
+            <dd className="text-lg font-extrabold text-tide-900">{formatDisplay('freeAmmonia', s.freeAmmonia, prefs)}</dd>
           </div>
         ) : null}
       </dl>
@@ -42,7 +44,7 @@ function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: Figur
 const FIRST_CONCERNS = 3;
 
 /** What the question was asked about, exactly as it stood then. */
-export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: FigurePrefs }) {
+export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: ReadingPrefs }) {
   const s = snapshot.subject;
   const at = s.kind === 'water-test' ? s.takenAt : s.occurredAt;
   const [all, setAll] = useState(false);
@@ -52,11 +54,11 @@ export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot;
   return (
     <Card className="space-y-4">
       <header>
-        <h2 className="text-lg font-extrabold text-tide-900">{s.kind === 'water-test' ? 'The water test' : 'The observation'} · {formatDateTime(at)}</h2>
+        <h2 className="text-lg font-extrabold text-tide-900">{s.kind === 'water-test' ? 'The water test' : 'The observation'} · {formatDayTime(at)}</h2>
         <p className="text-sm text-tide-700">
           {snapshot.tank.name}
           {snapshot.profile ? <> · judged by the <strong>{snapshot.profile.name}</strong> profile (version {snapshot.profile.version})</> : null}
-          {' '}· as it stood when asked, {formatDateTime(snapshot.takenAt)}
+          {' '}· as it stood when asked, {formatDayTime(snapshot.takenAt)}
         </p>
       </header>
       <Figures snapshot={snapshot} prefs={prefs} />

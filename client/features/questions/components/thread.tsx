@@ -1,7 +1,7 @@
-import type { PersonRef } from '../../../../shared/schemas/notification-views';
-import type { QuestionDetailView } from '../../../../shared/schemas/question-views';
-import { relativeTime } from '../../../lib/relative-time';
-import { formatDateTime } from '../lib/figures';
+import type { PersonRef } from '@shared/schemas/notification-views';
+import type { QuestionDetailView } from '@shared/schemas/question-views';
+import { relativeTime } from '@client/lib/relative-time';
+import { formatDayTime } from '@client/lib/date-format';
 import { MarkdownLite } from './markdown-lite';
 
 function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: string; body: string; names: string[]; isAsker: boolean }) {
@@ -10,7 +10,7 @@ function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: 
       <p className="mb-2 flex flex-wrap items-baseline gap-x-2 text-sm">
         <span className="font-extrabold text-tide-900">{author.displayName}</span>
         {isAsker ? <span className="text-xs font-bold text-tide-600">asked</span> : null}
-        <time dateTime={at} title={formatDateTime(at)} className="text-tide-600">{relativeTime(at)}</time>
+        <time dateTime={at} title={formatDayTime(at)} className="text-tide-600">{relativeTime(at)}</time>
       </p>
       <MarkdownLite text={body} mentionNames={names} />
     </li>

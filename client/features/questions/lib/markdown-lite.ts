@@ -1,4 +1,4 @@
-import { mentionSpans } from '../../../../shared/questions/mentions';
+import { mentionSpans } from '@shared/questions/mentions';
 
 /**
  * A tiny subset of Markdown for threads: paragraphs, line breaks, "- " and "1. " lists, **bold**, [links](url) and

@@ -1,5 +1,5 @@
-import type { TankPhase } from '../../../../shared/care/types';
-import { TANK_PHASE_LABELS } from '../../../../shared/constants/tank-labels';
+import type { TankPhase } from '@shared/care/types';
+import { TANK_PHASE_LABELS } from '@shared/constants/tank-labels';
 
 export function PhaseBadge({ phase }: { phase: TankPhase }) {
   const tone = phase === 'cycling' ? 'bg-amber-100 text-amber-700 ring-amber-500/30' : 'bg-kelp-100 text-kelp-700 ring-kelp-500/30';

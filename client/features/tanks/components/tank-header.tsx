@@ -1,10 +1,10 @@
 import { Link } from 'react-router';
-import { SYSTEM_TYPE_LABELS } from '../../../../shared/constants/tank-labels';
-import type { PhotoView, TankDetailView } from '../../../../shared/schemas/tank-views';
-import { formatVolume, type UnitPrefs } from '../lib/display-units';
-import { timeAgo } from '../lib/time-since';
+import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
+import type { PhotoView, TankDetailView } from '@shared/schemas/tank-views';
+import { formatVolume, type UnitPrefs } from '@client/lib/display-units';
+import { relativeTime } from '@client/lib/relative-time';
 import { ArchivedBadge, PhaseBadge } from './badges';
-import { TestTubeIcon } from './icons';
+import { TestTubeIcon } from '@client/components/ui/icons';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
 const linkButton = 'inline-flex min-h-touch items-center justify-center gap-2 rounded-full px-5 font-bold';
@@ -27,7 +27,7 @@ export function TankHeader({ tank, prefs, profileName, photo, isOwn, canLog, can
           <dl className="mt-2 grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:flex sm:flex-wrap">
             <div><dt className="inline font-bold text-tide-600">Kind: </dt><dd className="inline text-tide-900">{SYSTEM_TYPE_LABELS[tank.systemType]}</dd></div>
             <div><dt className="inline font-bold text-tide-600">Water: </dt><dd className="inline text-tide-900">{formatVolume(tank.volumeL, prefs)}{tank.volume.source === 'dimensions' ? ` (tank ${formatVolume(tank.volume.grossL, prefs)})` : ''}</dd></div>
-            {setUp ? <div><dt className="inline font-bold text-tide-600">Set up: </dt><dd className="inline text-tide-900">{dateFormat.format(setUp)} ({timeAgo(setUp.toISOString())})</dd></div> : null}
+            {setUp ? <div><dt className="inline font-bold text-tide-600">Set up: </dt><dd className="inline text-tide-900">{dateFormat.format(setUp)} ({relativeTime(setUp.toISOString())})</dd></div> : null}
             <div><dt className="inline font-bold text-tide-600">Animals: </dt><dd className="inline text-tide-900">{animals || 'none yet'}</dd></div>
             {profileName ? <div><dt className="inline font-bold text-tide-600">Profile: </dt><dd className="inline text-tide-900">{profileName}</dd></div> : null}
             {!isOwn ? <div><dt className="inline font-bold text-tide-600">Kept by: </dt><dd className="inline text-tide-900">{tank.owner.displayName}</dd></div> : null}

@@ -1,11 +1,11 @@
-import type { SystemType } from '../../../../shared/care/system-types';
-import type { TankPhase } from '../../../../shared/care/types';
-import { TANK_SHAPES, tankVolume, type TankShape, type TankVolume, type TankVolumeInput } from '../../../../shared/chemistry/tank-volume';
-import { convert } from '../../../../shared/chemistry/units';
-import { CM_PER_INCH, type CreateTankInput, type LENGTH_UNITS } from '../../../../shared/schemas/tank.schema';
-import type { TankView } from '../../../../shared/schemas/tank-views';
-import { volumeUnitOf, type UnitPrefs } from './display-units';
-import { parseDecimal } from './form-values';
+import type { SystemType } from '@shared/care/system-types';
+import type { TankPhase } from '@shared/care/types';
+import { TANK_SHAPES, tankVolume, type TankShape, type TankVolume, type TankVolumeInput } from '@shared/chemistry/tank-volume';
+import { convert } from '@shared/chemistry/units';
+import { CM_PER_INCH, type CreateTankInput, type LENGTH_UNITS } from '@shared/schemas/tank.schema';
+import type { TankView } from '@shared/schemas/tank-views';
+import { volumeUnitOf, type UnitPrefs } from '@client/lib/display-units';
+import { parseDecimal } from '@client/lib/form-values';
 
 type LengthUnit = (typeof LENGTH_UNITS)[number];
 const SIDES = ['length', 'width', 'height', 'diameter', 'bowDepth', 'fillHeight'] as const;

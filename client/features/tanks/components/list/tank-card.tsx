@@ -1,18 +1,18 @@
 import { Link } from 'react-router';
-import { PARAMETER_KEYS, parameterInfo, type ParameterKey } from '../../../../../shared/care/parameters';
+import { PARAMETER_KEYS, parameterInfo, type ParameterKey } from '@shared/care/parameters';
+import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
+import type { TankView } from '@shared/schemas/tank-views';
+import { VerdictIcon, verdictTone } from '@client/components/ui/verdict-mark';
+import { verdictFor } from '@client/lib/bands';
+import { useTankProfile } from '@client/lib/care-profiles';
+import { formatDisplay, formatVolume, type UnitPrefs } from '@client/lib/display-units';
+import { latestValues } from '@client/lib/latest-values';
+import { relativeTime } from '@client/lib/relative-time';
+import { useRecentTests } from '../../api/recent-tests';
+import { freshness, shortestCadenceDays, type Freshness } from '../../lib/freshness';
+import { ArchivedBadge, PhaseBadge } from '../badges';
 
 const CYCLE_FIRST: readonly ParameterKey[] = ['ammonia', 'nitrite', 'nitrate', 'temperature'];
-import { builtInProfile, defaultProfileFor } from '../../../../../shared/care/profiles';
-import { SYSTEM_TYPE_LABELS } from '../../../../../shared/constants/tank-labels';
-import type { TankView } from '../../../../../shared/schemas/tank-views';
-import { useCareProfile } from '../../api/care-profiles';
-import { useRecentTests } from '../../api/water-tests';
-import { verdictFor } from '../../lib/bands';
-import { formatDisplay, formatVolume, type UnitPrefs } from '../../lib/display-units';
-import { latestValues } from '../../lib/latest-values';
-import { freshness, shortestCadenceDays, timeAgo, type Freshness } from '../../lib/time-since';
-import { ArchivedBadge, PhaseBadge } from '../badges';
-import { VerdictIcon, verdictTone } from '../verdict-mark';
 
 const FIGURES = 4;
 const FRESHNESS_TONE: Record<Freshness, string> = {
@@ -29,7 +29,7 @@ function LastTested({ at, level }: { at: string | null; level: Freshness }) {
     <p className={`flex items-center gap-1.5 text-sm font-bold ${FRESHNESS_TONE[level]}`}>
       {level !== 'fresh' ? <VerdictIcon level={level === 'stale' ? 'danger' : 'caution'} /> : null}
       <span>
-        Last test <time dateTime={at} title={new Date(at).toLocaleString()}>{timeAgo(at)}</time>
+        Last test <time dateTime={at} title={new Date(at).toLocaleString()}>{relativeTime(at)}</time>
         {word}
       </span>
     </p>
@@ -39,8 +39,7 @@ function LastTested({ at, level }: { at: string | null; level: Freshness }) {
 /** One tank in the list: its latest figures in the member's units and how long since the last test. */
 export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: UnitPrefs; showOwner: boolean }) {
   const recent = useRecentTests(tank.clubId, tank.id);
-  const fetched = useCareProfile(tank.clubId, tank.careProfileKey);
-  const profile = fetched.data ?? builtInProfile(tank.careProfileKey) ?? defaultProfileFor(tank.systemType);
+  const profile = useTankProfile(tank.clubId, tank);
   const latest = latestValues(recent.data ?? []);
   const lastAt = recent.data?.[0]?.takenAt ?? null;
   // While cycling, the nitrogen figures are the story; afterwards the parameters in their usual order.

@@ -1,9 +1,9 @@
 import { Link, useSearchParams } from 'react-router';
-import { Card, Notice } from '../../../../components/ui/card';
-import { PageHeader } from '../../../../components/ui/page-header';
+import { Card, Notice } from '@client/components/ui/card';
+import { PageHeader } from '@client/components/ui/page-header';
 import { useTankList } from '../../api/tanks';
-import type { UnitPrefs } from '../../lib/display-units';
-import { FishIcon } from '../icons';
+import type { UnitPrefs } from '@client/lib/display-units';
+import { FishIcon } from '@client/components/ui/icons';
 import { TankCard, TankListSkeleton } from './tank-card';
 
 const linkButton = 'inline-flex min-h-touch items-center justify-center rounded-full px-5 font-bold';

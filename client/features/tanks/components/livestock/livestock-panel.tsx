@@ -1,6 +1,6 @@
 import { useState } from 'react';
-import type { LivestockView } from '../../../../../shared/schemas/tank-views';
-import { Button } from '../../../../components/ui/button';
+import type { LivestockView } from '@shared/schemas/tank-views';
+import { Button } from '@client/components/ui/button';
 import { useAddLivestock, useUpdateLivestock } from '../../api/livestock';
 import { AddLivestockForm, LeaveLivestockForm } from './livestock-forms';
 

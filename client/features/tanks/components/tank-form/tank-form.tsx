@@ -1,60 +1,57 @@
 import { useMemo, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
-import { defaultProfileFor } from '../../../../../shared/care/profiles';
-import { SYSTEM_TYPES, type SystemType } from '../../../../../shared/care/system-types';
-import { SYSTEM_TYPE_LABELS, TANK_PHASE_LABELS } from '../../../../../shared/constants/tank-labels';
-import { createTankSchema, TANK_PHASES } from '../../../../../shared/schemas/tank.schema';
-import { Button } from '../../../../components/ui/button';
-import { Notice } from '../../../../components/ui/card';
-import { SelectField, TextField } from '../../../../components/ui/field';
-import { useCareProfiles } from '../../api/care-profiles';
-import type { UnitPrefs } from '../../lib/display-units';
-import { todayIsoDate } from '../../lib/form-values';
-import { PhotoUploadError } from '../../lib/photo-upload-error';
-import { placeServerIssues, schemaResolver } from '../../lib/schema-resolver';
+import type { TankDetailView } from '@shared/schemas/tank-views';
+import { defaultProfileFor } from '@shared/care/profiles';
+import { SYSTEM_TYPES, type SystemType } from '@shared/care/system-types';
+import { SYSTEM_TYPE_LABELS, TANK_PHASE_LABELS } from '@shared/constants/tank-labels';
+import { createTankSchema, TANK_PHASES } from '@shared/schemas/tank.schema';
+import { Button } from '@client/components/ui/button';
+import { Notice } from '@client/components/ui/card';
+import { SelectField, TextAreaField, TextField } from '@client/components/ui/field';
+import { CautionFor } from '@client/components/ui/cautions';
+import { PhotoPicker } from '@client/components/ui/photo-picker';
+import { PhotoRetry } from '@client/components/ui/photo-retry';
+import { useProfiles } from '@client/lib/care-profiles';
+import type { UnitPrefs } from '@client/lib/display-units';
+import { useSaveErrors } from '@client/lib/form-errors';
+import { todayIsoDate } from '@client/lib/form-values';
+import { schemaResolver } from '@client/lib/schema-resolver';
+import { useSaveTank } from '../../api/tanks';
 import { tankDraftToInput, tankFieldOf, type TankDraft } from '../../lib/tank-draft';
-import { PhotoPicker } from '../photo-picker';
-import { TankCaution } from '../safety';
-import { TextAreaField } from '../text-area-field';
 import { VolumeFields } from './volume-fields';
 
 export type TankOutput = z.output<typeof createTankSchema>;
 
-/** New or edited tank, checked with the shared tank schema before anything is sent. */
-export function TankForm({ clubId, prefs, initial, submitLabel, onSave, onSkipPhotos }: { clubId: string; prefs: UnitPrefs; initial: TankDraft; submitLabel: string; onSave: (input: TankOutput, photos: File[]) => Promise<void>; onSkipPhotos?: () => void }) {
+/**
+ * New or edited tank (`tankId` given), checked with the shared tank schema before anything is sent, then saved with
+ * its photo; `onSaved` gets the stored tank.
+ */
+export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved }: { clubId: string; tankId?: string; prefs: UnitPrefs; initial: TankDraft; submitLabel: string; onSaved: (tank: TankDetailView) => void }) {
   const resolver = useMemo(() => schemaResolver<TankDraft, typeof createTankSchema>(createTankSchema, tankDraftToInput, tankFieldOf), []);
   const form = useForm<TankDraft, unknown, TankOutput>({ defaultValues: initial, resolver });
   const { register, formState, setValue } = form;
   const systemType = useWatch({ control: form.control, name: 'systemType' });
-  const profiles = useCareProfiles(clubId);
-  const suitable = (profiles.data ?? []).filter((p) => p.systemTypes.includes(systemType));
+  const profiles = useProfiles(clubId);
+  const suitable = (profiles.data?.profiles ?? []).filter((p) => p.systemTypes.includes(systemType));
   const [photos, setPhotos] = useState<File[]>([]);
-  const [formError, setFormError] = useState<string>();
-  const [photoError, setPhotoError] = useState<string>();
+  const save = useSaveTank(clubId, tankId);
+  const { formError, photoError, attempt } = useSaveErrors(tankFieldOf, form.setError);
   const e = formState.errors;
 
   const systemField = register('systemType', {
     onChange: (ev: { target: { value: SystemType } }) => {
-      const chosen = profiles.data?.find((p) => p.key === form.getValues('careProfileKey'));
+      const chosen = profiles.data?.profiles.find((p) => p.key === form.getValues('careProfileKey'));
       if (!chosen?.systemTypes.includes(ev.target.value)) setValue('careProfileKey', defaultProfileFor(ev.target.value).key);
     },
   });
 
-  const submit = form.handleSubmit(async (values) => {
-    setFormError(undefined);
-    setPhotoError(undefined);
-    try {
-      await onSave(values, photos);
-    } catch (error) {
-      if (error instanceof PhotoUploadError) setPhotoError(error.message);
-      else setFormError(placeServerIssues(error, tankFieldOf, (name, err) => form.setError(name as never, err)));
-    }
-  });
+  // Without photos once the tank is stored and its photo failed: "carry on without it".
+  const submit = (withPhotos: boolean) => form.handleSubmit((values) => attempt(async () => onSaved(await save(values, withPhotos ? photos : []))));
 
   return (
     <FormProvider {...form}>
-      <form noValidate onSubmit={submit} className="space-y-6">
+      <form noValidate onSubmit={submit(true)} className="space-y-6">
         {formError ? <Notice tone="error">{formError}</Notice> : null}
         {e.root?.message ? <Notice tone="error">{e.root.message}</Notice> : null}
         <fieldset disabled={photoError !== undefined} className="space-y-6">
@@ -92,18 +89,12 @@ export function TankForm({ clubId, prefs, initial, submitLabel, onSave, onSkipPh
           </fieldset>
           <div className="space-y-2">
             <TextAreaField label="Equipment notes (optional)" hint="Heater, filter, lights, pumps, skimmer: what runs and when it was last serviced." error={e.equipmentNotes?.message} {...register('equipmentNotes')} />
-            <TankCaution kind="electricity" title="Safety" />
+            <CautionFor kind="electricity" title="Safety" />
           </div>
         </fieldset>
         <PhotoPicker label="Photo of the tank (optional)" files={photos} onChange={setPhotos} />
         {photoError !== undefined ? (
-          <div className="space-y-3">
-            <Notice tone="warning">The tank is saved. The photo did not upload: {photoError}</Notice>
-            <div className="flex flex-wrap gap-2">
-              <Button type="submit" busy={formState.isSubmitting}>Try the photo again</Button>
-              <Button type="button" variant="secondary" onClick={onSkipPhotos}>Carry on without it</Button>
-            </div>
-          </div>
+          <PhotoRetry saved="The tank is saved." error={photoError} busy={formState.isSubmitting} onSkip={submit(false)} />
         ) : (
           <Button type="submit" className="w-full sm:w-auto" busy={formState.isSubmitting}>{submitLabel}</Button>
         )}

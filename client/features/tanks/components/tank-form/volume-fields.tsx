@@ -1,9 +1,9 @@
 import { useFormContext, useWatch } from 'react-hook-form';
-import { TANK_SHAPES } from '../../../../../shared/chemistry/tank-volume';
-import { TANK_SHAPE_LABELS } from '../../../../../shared/constants/tank-labels';
-import { LENGTH_UNITS } from '../../../../../shared/schemas/tank.schema';
-import { SelectField, TextField } from '../../../../components/ui/field';
-import { formatVolume, type UnitPrefs } from '../../lib/display-units';
+import { TANK_SHAPES } from '@shared/chemistry/tank-volume';
+import { TANK_SHAPE_LABELS } from '@shared/constants/tank-labels';
+import { LENGTH_UNITS } from '@shared/schemas/tank.schema';
+import { SelectField, TextField } from '@client/components/ui/field';
+import { formatVolume, type UnitPrefs } from '@client/lib/display-units';
 import { previewVolume, SHAPE_SIDES, type TankDraft } from '../../lib/tank-draft';
 
 const SIDE_LABELS = { length: 'Length (side to side)', width: 'Depth (front to back)', height: 'Height', diameter: 'Diameter', bowDepth: 'Extra depth of the bow at the middle', fillHeight: 'Water height (optional)' } as const;

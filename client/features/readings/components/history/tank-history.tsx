@@ -1,0 +1,70 @@
+import { lazy, Suspense, useMemo, useState } from 'react';
+import type { CareProfile } from '@shared/care/profiles';
+import { Card, Notice } from '@client/components/ui/card';
+import { Spinner } from '@client/components/ui/spinner';
+import { useWaterChanges } from '../../api/events';
+import { useTestsSince } from '../../api/water-tests';
+import type { UnitPrefs } from '@client/lib/display-units';
+import { TestsTable } from './tests-table';
+
+// The chart library is the largest part of the page: it loads on its own, after the tank's facts.
+const ChartsSection = lazy(() => import('../charts/charts-section').then((m) => ({ default: m.ChartsSection })));
+
+const RANGES = [
+  { days: 30, label: '30 days' },
+  { days: 90, label: '3 months' },
+  { days: 365, label: 'A year' },
+  { days: null, label: 'Everything' },
+] as const;
+type Days = (typeof RANGES)[number]['days'];
+
+/** Start of the local day `days` ago: stable all day, so the query key does not change on every render. */
+function startOf(days: Days): string | null {
+  if (days === null) return null;
+  const d = new Date();
+  d.setHours(0, 0, 0, 0);
+  d.setDate(d.getDate() - days);
+  return d.toISOString();
+}
+
+/** The tank's readings over a chosen period: charts first, then the table of past tests. */
+export function TankHistory({ clubId, tankId, profile, prefs, cycling, editable }: { clubId: string; tankId: string; profile: CareProfile | undefined; prefs: UnitPrefs; cycling: boolean; editable: boolean }) {
+  const [days, setDays] = useState<Days>(90);
+  const [now] = useState(() => Date.now());
+  const from = useMemo(() => startOf(days), [days]);
+  const tests = useTestsSince(clubId, tankId, from);
+  const waterChanges = useWaterChanges(clubId, tankId);
+  const list = tests.data ?? [];
+
+  return (
+    <section aria-labelledby="readings-heading" className="space-y-4">
+      <div className="flex flex-wrap items-center justify-between gap-3">
+        <h2 id="readings-heading" className="text-xl font-extrabold text-tide-900">Readings</h2>
+        <div role="group" aria-label="Period shown" className="flex flex-wrap gap-1 rounded-full bg-white p-1 shadow-card">
+          {RANGES.map((r) => (
+            <button key={r.label} type="button" aria-pressed={days === r.days} onClick={() => setDays(r.days)} className={`min-h-touch rounded-full px-3 text-sm font-bold ${days === r.days ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50'}`}>
+              {r.label}
+            </button>
+          ))}
+        </div>
+      </div>
+      {tests.isPending ? (
+        <Card><Spinner label="Loading readings…" /></Card>
+      ) : tests.isError ? (
+        <Notice tone="error">{tests.error.message}</Notice>
+      ) : list.length === 0 ? (
+        <Card><p className="text-tide-700">No tests in this period{days !== null ? ': try a longer one' : ' yet. Your first test will draw the first point on each chart'}.</p></Card>
+      ) : (
+        <>
+          <Suspense fallback={<Card><Spinner label="Drawing the charts…" /></Card>}>
+            <ChartsSection tests={list} waterChanges={waterChanges.data ?? []} profile={profile} prefs={prefs} from={from ? Date.parse(from) : null} now={now} cycling={cycling} />
+          </Suspense>
+          <Card>
+            <h3 className="mb-3 text-lg font-extrabold text-tide-900">Past tests</h3>
+            <TestsTable tests={list} prefs={prefs} editable={editable} tankId={tankId} />
+          </Card>
+        </>
+      )}
+    </section>
+  );
+}
