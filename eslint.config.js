@@ -1,7 +1,56 @@
+import { readdirSync } from 'node:fs';
+import { fileURLToPath } from 'node:url';
 import js from '@eslint/js';
+import { createTypeScriptImportResolver } from 'eslint-import-resolver-typescript';
+import importX from 'eslint-plugin-import-x';
 import reactHooks from 'eslint-plugin-react-hooks';
 import globals from 'globals';
 import tseslint from 'typescript-eslint';
+
+const root = fileURLToPath(new URL('.', import.meta.url));
+
+/**
+ * The client's walls: client/app composes features; a feature imports client/components and client/lib but never
+ * another feature; components and lib import no feature and no app code; lib holds no UI; nothing in the client
+ * reaches into the server. Imports inside client/ may not go round in a circle. Paths resolve through tsconfig, so
+ * the @client and @shared aliases count like relative paths.
+ */
+const features = readdirSync(new URL('client/features', import.meta.url), { withFileTypes: true })
+  .filter((d) => d.isDirectory())
+  .map((d) => d.name);
+const clientWalls = [
+  {
+    files: ['client/**/*.{ts,tsx}'],
+    plugins: { 'import-x': importX },
+    settings: {
+      // Without these the plugin cannot read .ts/.tsx modules, and no-cycle passes without looking.
+      'import-x/extensions': ['.ts', '.tsx', '.js'],
+      'import-x/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx'] },
+      'import-x/resolver-next': [createTypeScriptImportResolver({ project: `${root}tsconfig.json` })],
+    },
+    rules: {
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          basePath: root,
+          zones: [
+            ...features.map((feature) => ({
+              target: `./client/features/${feature}`,
+              from: './client/features',
+              except: [`./${feature}`],
+              message: `Features don't import each other: move what ${feature} needs to client/lib or client/components, or compose the two in client/app/routes.`,
+            })),
+            { target: ['./client/features', './client/components', './client/lib'], from: './client/app', message: 'Only client/app imports the app layer.' },
+            { target: ['./client/components', './client/lib'], from: './client/features', message: 'client/components and client/lib serve every feature and import none.' },
+            { target: './client/lib', from: './client/components', message: 'client/lib holds no UI: components import lib, not the other way round.' },
+            { target: './client', from: './server', message: 'The client talks to the server over HTTP and sockets only; shared code lives in shared/.' },
+          ],
+        },
+      ],
+      'import-x/no-cycle': ['error', { ignoreExternal: true }],
+    },
+  },
+];
 
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'tests/e2e/artifacts/**', 'coverage/**'] },
@@ -30,14 +79,5 @@ export default tseslint.config(
       ],
     },
   },
-  {
-    // Features don't import each other; app → features → components/lib.
-    files: ['client/features/**/*.{ts,tsx}', 'client/components/**/*.{ts,tsx}', 'client/lib/**/*.{ts,tsx}'],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        { patterns: [{ group: ['**/app/**', '@client/app/*'], message: 'Only client/app imports the app layer.' }] },
-      ],
-    },
-  },
+  ...clientWalls,
 );

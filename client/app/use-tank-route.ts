@@ -1,4 +1,5 @@
 import { useParams } from 'react-router';
+import { asSubject } from '@shared/abilities';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useTank } from '@client/features/tanks/api/tanks';
 
@@ -8,5 +9,9 @@ export function useTankRoute() {
   const session = useSession();
   const clubId = session.activeClub?.clubId ?? '';
   const tank = useTank(clubId, tankId);
-  return { ...session, clubId, tankId, tank };
+  const t = tank.data;
+  /** Whether the viewer may add or change this kind of record on the tank now: never while it is archived. */
+  const mayLog = (action: 'create' | 'update', what: 'Tank' | 'WaterTest' | 'TankEvent') =>
+    Boolean(t && !t.archivedAt && session.ability.can(action, asSubject(what, { clubId: t.clubId, ownerId: t.owner.id })));
+  return { ...session, clubId, tankId, tank, mayLog };
 }

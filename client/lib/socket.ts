@@ -44,13 +44,19 @@ function useCurrentSocket(): AppSocket | null {
   return useSyncExternalStore(subscribe, snapshot, () => null);
 }
 
-/** Calls `handler` for each `name` event; the latest handler is used without re-subscribing. */
-export function useSocketEvent<E extends EventName>(name: E, handler: ServerToClientEvents[E]): void {
-  const socket = useCurrentSocket();
+/** The handler of the latest render (in a ref, the same object every render), so a listener stays subscribed while the handler it calls is kept current. */
+function useLatest<T>(handler: T) {
   const latest = useRef(handler);
   useEffect(() => {
     latest.current = handler;
   });
+  return latest;
+}
+
+/** Calls `handler` for each `name` event; the latest handler is used without re-subscribing. */
+export function useSocketEvent<E extends EventName>(name: E, handler: ServerToClientEvents[E]): void {
+  const socket = useCurrentSocket();
+  const latest = useLatest(handler);
   useEffect(() => {
     if (!socket) return;
     const listener = ((...args: Parameters<ServerToClientEvents[E]>) => (latest.current as (...a: typeof args) => void)(...args)) as never;
@@ -58,16 +64,13 @@ export function useSocketEvent<E extends EventName>(name: E, handler: ServerToCl
     return () => {
       socket.off(name, listener);
     };
-  }, [socket, name]);
+  }, [socket, name, latest]);
 }
 
 /** Calls `handler` after the connection comes back (e.g. a server restart), so missed events can be refetched. */
 export function useSocketReconnect(handler: () => void): void {
   const socket = useCurrentSocket();
-  const latest = useRef(handler);
-  useEffect(() => {
-    latest.current = handler;
-  });
+  const latest = useLatest(handler);
   useEffect(() => {
     if (!socket) return;
     const listener = () => latest.current();
@@ -75,5 +78,5 @@ export function useSocketReconnect(handler: () => void): void {
     return () => {
       socket.io.off('reconnect', listener);
     };
-  }, [socket]);
+  }, [socket, latest]);
 }

@@ -53,6 +53,8 @@ describe('the mentor desk, live', () => {
     await desk.getByRole('heading', { name: 'Mentor desk' }).waitFor();
     await desk.locator('ol[aria-label="Tanks by need"] > li').nth(1).waitFor();
     expect(await firstRowTank(desk)).toBe(tanks.other);
+    // A mark on this page's window: a reload would wipe it.
+    await desk.evaluate(() => Object.assign(window, { deskNotReloaded: true }));
     await screenshot(desk, 'desk-before-desk');
 
     const phone = await (await browser.newContext(PHONE)).newPage();
@@ -72,11 +74,10 @@ describe('the mentor desk, live', () => {
     );
     expect(status).toBe(201);
 
-    const started = Date.now();
+    // The socket event moves the row (how fast belongs in a benchmark, not here), and the page was not reloaded.
     await desk.waitForFunction((id) => document.querySelector('ol[aria-label="Tanks by need"] > li')?.getAttribute('data-tank-id') === id, tanks.keeper, { timeout: 5_000 });
-    const elapsed = Date.now() - started;
     await desk.getByText(/Nitrite/).first().waitFor();
     await screenshot(desk, 'desk-after-urgent-desk');
-    expect(elapsed).toBeLessThan(5_000);
+    expect(await desk.evaluate(() => 'deskNotReloaded' in window)).toBe(true);
   });
 });

@@ -5,9 +5,8 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useProfile } from '@client/lib/care-profiles';
+import { formatDate } from '@client/lib/date-format';
 import { ProfileRangesEditor } from '@client/features/care/components/profile-ranges-editor';
-
-const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
 
 export function Component() {
   const { key = '' } = useParams();
@@ -32,7 +31,7 @@ export function Component() {
             <ol className="mt-2 space-y-3">
               {d.history.map((h) => (
                 <li key={h.version}>
-                  <p className="font-bold text-tide-900">Version {h.version} · {when.format(new Date(h.changedAt))}</p>
+                  <p className="font-bold text-tide-900">Version {h.version} · {formatDate(h.changedAt)}</p>
                   <p className="text-sm text-tide-800">{h.note}</p>
                   {h.changes.length ? (
                     <ul className="list-disc pl-5 text-sm text-tide-700">

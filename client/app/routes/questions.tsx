@@ -2,15 +2,16 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
+import { Segmented } from '@client/components/ui/segmented';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { questionKeys, type ListStatus } from '@client/features/questions/api/questions';
 import { QuestionList } from '@client/features/questions/components/question-list';
 import { QuestionRouteError } from '@client/features/questions/components/question-route-error';
 import { useSocketEvent } from '@client/lib/socket';
 
-const TABS: { status: ListStatus; label: string }[] = [
-  { status: 'open', label: 'Open' },
-  { status: 'all', label: 'All' },
+const TABS: { value: ListStatus; label: string }[] = [
+  { value: 'open', label: 'Open' },
+  { value: 'all', label: 'All' },
 ];
 
 export function Component() {
@@ -30,13 +31,7 @@ export function Component() {
         title={answers ? 'Questions' : 'My questions'}
         subtitle={answers ? 'What your mentees and the club’s keepers asked about their readings.' : 'Ask from any water test or observation on your tank’s page.'}
       />
-      <div role="group" aria-label="Which questions" className="mb-4 inline-flex gap-1 rounded-full bg-white p-1 shadow-card">
-        {TABS.map((t) => (
-          <button key={t.status} type="button" aria-pressed={status === t.status} onClick={() => setStatus(t.status)} className={`min-h-touch rounded-full px-4 text-sm font-bold ${status === t.status ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50'}`}>
-            {t.label}
-          </button>
-        ))}
-      </div>
+      <Segmented label="Which questions" options={TABS} value={status} onChange={setStatus} inline className="mb-4" />
       <QuestionList
         clubId={clubId}
         status={status}

@@ -17,7 +17,7 @@ export function Component() {
   const archive = useSetArchived(clubId, tankId);
   const navigate = useNavigate();
   const [confirming, setConfirming] = useState(false);
-  // The form reads its defaults once, on mount: a refetch after saving does not reset what is on screen.
+  // The form reads `initial` once, on mount: a later refetch of the tank changes this value but not what is on screen.
   const initial = useMemo(() => (tank.data ? draftFromTank(tank.data, me.user) : undefined), [tank.data, me.user]);
 
   if (tank.isError) throw tank.error;

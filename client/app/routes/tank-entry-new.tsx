@@ -1,6 +1,5 @@
 import { useState } from 'react';
 import { useNavigate, useSearchParams } from 'react-router';
-import { asSubject } from '@shared/abilities';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
@@ -13,7 +12,7 @@ const isPosted = (k: string | null): k is PostedKind => (POSTED_KINDS as readonl
 
 export function Component() {
   const [params, setParams] = useSearchParams();
-  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const { me, clubId, tankId, tank, mayLog } = useTankRoute();
   const navigate = useNavigate();
   const asked = params.get('kind');
   const kind: PostedKind = isPosted(asked) ? asked : 'water-change';
@@ -23,7 +22,7 @@ export function Component() {
   if (tank.isError) throw tank.error;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
-  const allowed = !t.archivedAt && ability.can('create', asSubject('TankEvent', { clubId: t.clubId, ownerId: t.owner.id }));
+  const allowed = mayLog('create', 'TankEvent');
 
   return (
     <>

@@ -1,4 +1,3 @@
-import { asSubject } from '@shared/abilities';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
@@ -7,11 +6,11 @@ import { TankRouteError } from '@client/features/tanks/components/tank-route-err
 import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
-  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const { me, clubId, tankId, tank, mayLog } = useTankRoute();
   if (tank.isError) throw tank.error;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
-  const allowed = !t.archivedAt && ability.can('create', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
+  const allowed = mayLog('create', 'WaterTest');
   return (
     <>
       <PageHeader title="Import a log" subtitle={t.name} />

@@ -1,6 +1,5 @@
 import { useMemo, useState } from 'react';
 import { useNavigate, useParams } from 'react-router';
-import { asSubject } from '@shared/abilities';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
@@ -17,7 +16,7 @@ import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
   const { testId = '' } = useParams();
-  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const { me, clubId, tankId, tank, mayLog } = useTankRoute();
   const test = useWaterTest(clubId, tankId, testId);
   const profile = useTankProfile(clubId, tank.data);
   const remove = useDeleteWaterTest(clubId, tankId);
@@ -30,7 +29,7 @@ export function Component() {
   if (test.isError) throw test.error;
   if (tank.isPending || test.isPending || !profile || !initial) return <Spinner label="Loading the test…" />;
   const t = tank.data;
-  const allowed = !t.archivedAt && ability.can('update', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
+  const allowed = mayLog('update', 'WaterTest');
   const back = (saved: SavedNotice) => navigate(`/tanks/${tankId}`, { state: { saved } });
 
   return (

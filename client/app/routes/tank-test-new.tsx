@@ -1,6 +1,5 @@
 import { useMemo } from 'react';
 import { Link, useNavigate } from 'react-router';
-import { asSubject } from '@shared/abilities';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
@@ -12,7 +11,7 @@ import { useTankProfile } from '@client/lib/care-profiles';
 import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
-  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const { me, clubId, tankId, tank, mayLog } = useTankRoute();
   const profile = useTankProfile(clubId, tank.data);
   const navigate = useNavigate();
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
@@ -21,7 +20,7 @@ export function Component() {
   if (tank.isError) throw tank.error;
   if (tank.isPending || !profile) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
-  const allowed = !t.archivedAt && ability.can('create', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
+  const allowed = mayLog('create', 'WaterTest');
 
   return (
     <>

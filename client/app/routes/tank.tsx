@@ -28,7 +28,7 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 }
 
 export function Component() {
-  const { me, ability, clubId, tankId, tank } = useTankRoute();
+  const { me, ability, clubId, tankId, tank, mayLog } = useTankRoute();
   const profile = useProfile(clubId, tank.data?.careProfileKey).data?.profile;
   const photos = useTankPhotos(clubId, tankId);
   const restore = useSetArchived(clubId, tankId);
@@ -39,8 +39,8 @@ export function Component() {
   const t = tank.data;
   const subject = asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id });
   const active = !t.archivedAt;
-  const canEdit = active && ability.can('update', subject);
-  const canLog = active && ability.can('create', asSubject('WaterTest', { clubId: t.clubId, ownerId: t.owner.id }));
+  const canEdit = mayLog('update', 'Tank');
+  const canLog = mayLog('create', 'WaterTest');
   const tankPhoto = photos.data?.find((p) => !p.waterTestId && !p.eventId);
 
   return (

@@ -16,6 +16,15 @@ function Brand() {
   );
 }
 
+/** The same links in the header (wide screens) and the bottom bar (phones), each with its look. */
+function NavLinks({ nav, look }: { nav: NavItem[]; look: (active: boolean) => string }) {
+  return nav.map((item) => (
+    <NavLink key={item.to} to={item.to} end={item.end} className={({ isActive }) => look(isActive)}>
+      {item.label}
+    </NavLink>
+  ));
+}
+
 export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: ReactNode }) {
   const navigation = useNavigation();
   return (
@@ -24,18 +33,7 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
-            {nav.map((item) => (
-              <NavLink
-                key={item.to}
-                to={item.to}
-                end={item.end}
-                className={({ isActive }) =>
-                  `rounded-full px-3 py-2 text-sm font-bold ${isActive ? 'bg-tide-600 text-white' : 'text-tide-100 hover:bg-tide-700'}`
-                }
-              >
-                {item.label}
-              </NavLink>
-            ))}
+            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-tide-600 text-white' : 'text-tide-100 hover:bg-tide-700'}`} />
           </nav>
           {headerEnd}
         </div>
@@ -49,18 +47,7 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
         className="fixed inset-x-0 bottom-0 grid border-t border-tide-100 bg-white sm:hidden"
       >
-        {nav.map((item) => (
-          <NavLink
-            key={item.to}
-            to={item.to}
-            end={item.end}
-            className={({ isActive }) =>
-              `flex min-h-14 items-center justify-center text-xs font-bold ${isActive ? 'text-tide-700' : 'text-tide-400'}`
-            }
-          >
-            {item.label}
-          </NavLink>
-        ))}
+        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-tide-700' : 'text-tide-400'}`} />
       </nav>
     </div>
   );

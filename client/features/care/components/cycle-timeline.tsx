@@ -1,4 +1,5 @@
 import { useState } from 'react';
+import { formatDay } from '@client/lib/date-format';
 import type { CareSummary } from '../api/care';
 
 const STEPS = [
@@ -8,8 +9,6 @@ const STEPS = [
   { stage: 'nitrite-falling', label: 'Nitrite down', hint: 'Nitrite is being turned into nitrate.' },
   { stage: 'cycled', label: 'Cycled', hint: 'Ammonia and nitrite read zero with nitrate present.' },
 ] as const;
-
-const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
 
 /** Where the tank is in the nitrogen cycle, today's position, and when it is likely done. */
 export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['cycle']; typical: CareSummary['cycleTypical']; phase: 'cycling' | 'established' }) {
@@ -49,11 +48,11 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
       {cycle.projectedDoneAt ? (
         <p className="mt-1 text-sm text-tide-700">
           {Date.parse(cycle.projectedDoneAt.likely) <= openedAt ? (
-            <>Could finish <strong>any day now</strong>, or as late as {fmt.format(new Date(cycle.projectedDoneAt.latest))}.</>
+            <>Could finish <strong>any day now</strong>, or as late as {formatDay(cycle.projectedDoneAt.latest)}.</>
           ) : (
             <>
-              Likely done around <strong>{fmt.format(new Date(cycle.projectedDoneAt.likely))}</strong> (between {fmt.format(new Date(cycle.projectedDoneAt.earliest))} and{' '}
-              {fmt.format(new Date(cycle.projectedDoneAt.latest))}).
+              Likely done around <strong>{formatDay(cycle.projectedDoneAt.likely)}</strong> (between {formatDay(cycle.projectedDoneAt.earliest)} and{' '}
+              {formatDay(cycle.projectedDoneAt.latest)}).
             </>
           )}{' '}
           A cycle usually takes {typical.typicalMin}–{typical.typicalMax} weeks, sometimes {typical.rangeMin}–{typical.rangeMax} ({typical.provenance}).

@@ -1,7 +1,6 @@
 import { parameterInfo } from '@shared/care';
+import { formatDay } from '@client/lib/date-format';
 import type { CareSummary } from '../api/care';
-
-const fmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
 
 /** Which tests are due or overdue, most overdue first. */
 export function DueTests({ due }: { due: CareSummary['due'] }) {
@@ -20,7 +19,7 @@ export function DueTests({ due }: { due: CareSummary['due'] }) {
             }`}
           >
             {parameterInfo(d.parameter).label}:{' '}
-            {d.status === 'overdue' ? `${d.overdueByDays} day${d.overdueByDays === 1 ? '' : 's'} late` : d.status === 'due' ? 'due today' : `next ${fmt.format(new Date(d.dueAt))}`}
+            {d.status === 'overdue' ? `${d.overdueByDays} day${d.overdueByDays === 1 ? '' : 's'} late` : d.status === 'due' ? 'due today' : `next ${formatDay(d.dueAt)}`}
             <span className="sr-only"> (every {d.cadenceDays} days)</span>
           </li>
         ))}

@@ -48,7 +48,8 @@ export const useMembers = (clubId: string) => useQuery(membersQuery(clubId));
 export const useInvites = (clubId: string, enabled: boolean) => useQuery({ ...invitesQuery(clubId), enabled });
 export const useAssignments = (clubId: string) => useQuery(assignmentsQuery(clubId));
 
-function useClubMutation<I, O>(clubId: string, fn: (input: I) => Promise<O>) {
+/** After any change in a club its members, loads, pairings, invites and requests may all differ: refetch the club's queries. */
+export function useClubMutation<I, O>(clubId: string, fn: (input: I) => Promise<O>) {
   const qc = useQueryClient();
   return useMutation({ mutationFn: fn, onSuccess: () => qc.invalidateQueries({ queryKey: clubKeys.all(clubId) }) });
 }
@@ -59,7 +60,3 @@ export const useRevokeInvite = (clubId: string) => useClubMutation(clubId, (id: 
 export const useAssignMentor = (clubId: string) =>
   useClubMutation(clubId, (i: { mentorId: string; menteeId: string }) => api.post(`/clubs/${clubId}/mentor-assignments`, i));
 export const useEndAssignment = (clubId: string) => useClubMutation(clubId, (id: string) => api.post(`/clubs/${clubId}/mentor-assignments/${id}/end`));
-export const useUpdateMembership = (clubId: string) =>
-  useClubMutation(clubId, (i: { membershipId: string; role?: Role; status?: 'active' | 'suspended' }) =>
-    api.patch(`/clubs/${clubId}/members/${i.membershipId}`, { role: i.role, status: i.status }),
-  );

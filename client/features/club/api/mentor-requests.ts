@@ -1,8 +1,8 @@
-import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
+import { queryOptions, useQuery } from '@tanstack/react-query';
 import type { AcceptMentorRequestInput, CreateMentorRequestInput, DeclineMentorRequestInput } from '@shared/schemas/mentor-request.schema';
 import type { MentorRequestView, MyMentorRequestView } from '@shared/schemas/notification-views';
 import { api } from '@client/lib/api-client';
-import { clubKeys } from './club';
+import { clubKeys, useClubMutation } from './club';
 
 export const mentorRequestKeys = {
   open: (clubId: string) => [...clubKeys.all(clubId), 'mentor-requests', 'open'] as const,
@@ -23,17 +23,11 @@ export const myRequestQuery = (clubId: string) =>
 export const useOpenRequests = (clubId: string) => useQuery(openRequestsQuery(clubId));
 export const useMyRequest = (clubId: string) => useQuery(myRequestQuery(clubId));
 
-/** After any answer the club's loads, pairings and requests all change: refetch the club's queries. */
-function useClubChange<I, O>(clubId: string, fn: (input: I) => Promise<O>) {
-  const qc = useQueryClient();
-  return useMutation({ mutationFn: fn, onSuccess: () => qc.invalidateQueries({ queryKey: clubKeys.all(clubId) }) });
-}
-
 export const useAskForMentor = (clubId: string) =>
-  useClubChange(clubId, (input: CreateMentorRequestInput) => api.post<{ request: MentorRequestView }>(`/clubs/${clubId}/mentor-requests`, input));
+  useClubMutation(clubId, (input: CreateMentorRequestInput) => api.post<{ request: MentorRequestView }>(`/clubs/${clubId}/mentor-requests`, input));
 export const useAcceptRequest = (clubId: string) =>
-  useClubChange(clubId, ({ id, ...input }: AcceptMentorRequestInput & { id: string }) => api.post(`/clubs/${clubId}/mentor-requests/${id}/accept`, input));
+  useClubMutation(clubId, ({ id, ...input }: AcceptMentorRequestInput & { id: string }) => api.post(`/clubs/${clubId}/mentor-requests/${id}/accept`, input));
 export const useDeclineRequest = (clubId: string) =>
-  useClubChange(clubId, ({ id, ...input }: DeclineMentorRequestInput & { id: string }) => api.post(`/clubs/${clubId}/mentor-requests/${id}/decline`, input));
+  useClubMutation(clubId, ({ id, ...input }: DeclineMentorRequestInput & { id: string }) => api.post(`/clubs/${clubId}/mentor-requests/${id}/decline`, input));
 export const useSetCapacity = (clubId: string) =>
-  useClubChange(clubId, ({ userId, capacity }: { userId: string; capacity: number }) => api.patch(`/clubs/${clubId}/mentors/${userId}/capacity`, { capacity }));
+  useClubMutation(clubId, ({ userId, capacity }: { userId: string; capacity: number }) => api.patch(`/clubs/${clubId}/mentors/${userId}/capacity`, { capacity }));

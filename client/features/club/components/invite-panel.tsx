@@ -8,10 +8,9 @@ import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { SelectField, TextField } from '@client/components/ui/field';
 import { Spinner } from '@client/components/ui/spinner';
+import { formatDay } from '@client/lib/date-format';
 import { fieldsIn, placeServerErrors } from '@client/lib/form-errors';
 import { useInvites, useResendInvite, useRevokeInvite, useSendInvite } from '../api/club';
-
-const dateFmt = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
 
 export function InvitePanel({ clubId }: { clubId: string }) {
   const invites = useInvites(clubId, true);
@@ -54,7 +53,7 @@ export function InvitePanel({ clubId }: { clubId: string }) {
               <div>
                 <p className="font-bold text-tide-900">{i.email}</p>
                 <p className="text-sm text-tide-600">
-                  {ROLE_LABELS[i.role]} · {i.state === 'expired' ? 'expired' : `link works until ${dateFmt.format(new Date(i.expiresAt))}`}
+                  {ROLE_LABELS[i.role]} · {i.state === 'expired' ? 'expired' : `link works until ${formatDay(i.expiresAt)}`}
                 </p>
               </div>
               <div className="flex gap-2">

@@ -1,6 +1,7 @@
 import { lazy, Suspense, useMemo, useState } from 'react';
 import type { CareProfile } from '@shared/care/profiles';
 import { Card, Notice } from '@client/components/ui/card';
+import { Segmented } from '@client/components/ui/segmented';
 import { Spinner } from '@client/components/ui/spinner';
 import { useWaterChanges } from '../../api/events';
 import { useTestsSince } from '../../api/water-tests';
@@ -11,12 +12,12 @@ import { TestsTable } from './tests-table';
 const ChartsSection = lazy(() => import('../charts/charts-section').then((m) => ({ default: m.ChartsSection })));
 
 const RANGES = [
-  { days: 30, label: '30 days' },
-  { days: 90, label: '3 months' },
-  { days: 365, label: 'A year' },
-  { days: null, label: 'Everything' },
+  { value: 30, label: '30 days' },
+  { value: 90, label: '3 months' },
+  { value: 365, label: 'A year' },
+  { value: null, label: 'Everything' },
 ] as const;
-type Days = (typeof RANGES)[number]['days'];
+type Days = (typeof RANGES)[number]['value'];
 
 /** Start of the local day `days` ago: stable all day, so the query key does not change on every render. */
 function startOf(days: Days): string | null {
@@ -40,13 +41,7 @@ export function TankHistory({ clubId, tankId, profile, prefs, cycling, editable 
     <section aria-labelledby="readings-heading" className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
         <h2 id="readings-heading" className="text-xl font-extrabold text-tide-900">Readings</h2>
-        <div role="group" aria-label="Period shown" className="flex flex-wrap gap-1 rounded-full bg-white p-1 shadow-card">
-          {RANGES.map((r) => (
-            <button key={r.label} type="button" aria-pressed={days === r.days} onClick={() => setDays(r.days)} className={`min-h-touch rounded-full px-3 text-sm font-bold ${days === r.days ? 'bg-tide-700 text-white' : 'text-tide-700 hover:bg-tide-50'}`}>
-              {r.label}
-            </button>
-          ))}
-        </div>
+        <Segmented<Days> label="Period shown" options={RANGES} value={days} onChange={setDays} />
       </div>
       {tests.isPending ? (
         <Card><Spinner label="Loading readings…" /></Card>

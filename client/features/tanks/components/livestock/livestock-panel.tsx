@@ -1,11 +1,12 @@
 import { useState } from 'react';
 import type { LivestockView } from '@shared/schemas/tank-views';
 import { Button } from '@client/components/ui/button';
+import { formatDate } from '@client/lib/date-format';
 import { useAddLivestock, useUpdateLivestock } from '../../api/livestock';
 import { AddLivestockForm, LeaveLivestockForm } from './livestock-forms';
 
-const dateFormat = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
-const day = (iso: string) => dateFormat.format(new Date(`${iso}T12:00:00`));
+/** A calendar date ("2026-03-12") read at local noon, so no time zone moves it to another day. */
+const day = (isoDate: string) => formatDate(new Date(`${isoDate}T12:00:00`));
 
 function Animal({ a, editable, onLeave }: { a: LivestockView; editable: boolean; onLeave?: () => void }) {
   return (
