@@ -12,7 +12,8 @@ export const tankPhotosQuery = (clubId: string, tankId: string) =>
     queryKey: tankKeys.photos(clubId, tankId),
     queryFn: ({ signal }) => api.get<{ photos: PhotoView[] }>(base(clubId, tankId), signal).then((r) => r.photos),
   });
-export const useTankPhotos = (clubId: string, tankId: string) => useQuery(tankPhotosQuery(clubId, tankId));
+/** `enabled` waits for the tank itself: a reader who may not see it is told once, by the tank's own answer. */
+export const useTankPhotos = (clubId: string, tankId: string, enabled = true) => useQuery({ ...tankPhotosQuery(clubId, tankId), enabled });
 
 export interface PhotoUpload {
   tankId: string;

@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
@@ -25,7 +25,7 @@ describe('accounts in the browser', () => {
   });
 
   it('when an admin invites a beginner at a desk, then the beginner joins from the e-mail link on a phone', async () => {
-    const desk = await (await browser.newContext(DESK)).newPage();
+    const { page: desk } = await openPage(browser, DESK);
     await desk.goto(`${inject('baseUrl')}/club`);
     await desk.getByLabel('E-mail').fill(adminEmail);
     await desk.getByLabel('Password').fill(TEST_PASSWORD);
@@ -39,10 +39,11 @@ describe('accounts in the browser', () => {
     await desk.getByText('Invitation sent to beginner.bo@test.example.').waitFor();
     await desk.getByText('beginner.bo@test.example', { exact: true }).waitFor();
     await screenshot(desk, 'club-admin-invites-desk');
+    await expectAccessible(desk);
 
     const mail = await waitForMail(ds, 'beginner.bo@test.example');
     const link = linkIn(mail, '/invites/accept');
-    const phone = await (await browser.newContext(PHONE)).newPage();
+    const { page: phone } = await openPage(browser, PHONE);
     await phone.goto(`${inject('baseUrl')}${link.pathname}${link.search}`);
     await phone.getByText('Reedbank Keepers').first().waitFor();
     await phone.getByLabel('Your name').fill('Bo Beginner');
@@ -51,11 +52,13 @@ describe('accounts in the browser', () => {
     await phone.getByRole('button', { name: /create my account/i }).click();
     await phone.getByText(/too common/i).waitFor();
     await screenshot(phone, 'accept-invite-weak-password-phone');
+    await expectAccessible(phone);
     await phone.getByLabel('Choose a password').fill('slow tides at dusk');
     await phone.getByLabel('Type it again').fill('slow tides at dusk');
     await phone.getByRole('button', { name: /create my account/i }).click();
     await phone.getByRole('heading', { name: 'Hello, Bo' }).waitFor();
     expect(await phone.getByText('Reedbank Keepers · Member').isVisible()).toBe(true);
     await screenshot(phone, 'home-new-member-phone');
+    await expectAccessible(phone);
   });
 });

@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESK, launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { makeClub, makeMember, TEST_PASSWORD } from '../helpers/factories';
@@ -29,7 +29,7 @@ describe('concerns on the tank page', () => {
   });
 
   it('when a test with nitrite 1.0 is saved on a seahorse tank, then an urgent concern shows on the tank page and stays in history once resolved', async () => {
-    const page = await (await browser.newContext(PHONE)).newPage();
+    const { page } = await openPage(browser, PHONE);
     await page.goto(`${inject('baseUrl')}/tanks/${tankId}`);
     await page.getByLabel('E-mail').fill(keeperEmail);
     await page.getByLabel('Password').fill(TEST_PASSWORD);
@@ -53,6 +53,7 @@ describe('concerns on the tank page', () => {
     await concern.waitFor();
     expect(await page.getByText('Act now').first().isVisible()).toBe(true);
     await screenshot(page, 'tank-urgent-concern-phone');
+    await expectAccessible(page);
 
     await page.getByRole('listitem').filter({ hasText: /Nitrite 1 mg\/L NO2: toxic/ }).getByRole('button', { name: 'Mark resolved' }).click();
     await page.getByText(/Nitrite 1 mg\/L NO2: toxic/).first().waitFor({ state: 'detached' });
@@ -60,12 +61,13 @@ describe('concerns on the tank page', () => {
     await page.getByText(/Nitrite 1 mg\/L NO2: toxic/).first().waitFor();
     expect(await page.getByText(/^resolved/).first().isVisible()).toBe(true);
     await screenshot(page, 'tank-concern-history-phone');
+    await expectAccessible(page);
   });
 
   it('when a club admin opens the care profiles at a desk, then shipped profiles show their sources', async () => {
     const club = await makeClub(ds, 'Profile Viewers');
     const admin = await makeMember(ds, club, 'Ava Admin', 'admin');
-    const page = await (await browser.newContext(DESK)).newPage();
+    const { page } = await openPage(browser, DESK);
     await page.goto(`${inject('baseUrl')}/club/profiles/seahorse-large`);
     await page.getByLabel('E-mail').fill(admin.user.email);
     await page.getByLabel('Password').fill(TEST_PASSWORD);
@@ -73,5 +75,6 @@ describe('concerns on the tank page', () => {
     await page.getByText('Shipped with Shoalwise (make a club copy to adjust it)').waitFor();
     expect(await page.getByText(/common practice, no source/i).count()).toBeGreaterThan(0);
     await screenshot(page, 'care-profile-desk');
+    await expectAccessible(page);
   });
 });

@@ -2,7 +2,7 @@ import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reevaluateTank } from '../../server/modules/concerns/reevaluate-tank';
-import { DESK, launchBrowser, PHONE, screenshot, signInOn } from '../helpers/browser';
+import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot, signInOn } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
@@ -48,7 +48,7 @@ describe('the mentor desk, live', () => {
   });
 
   it('when the mentee saves an urgent test from another page, then the desk re-orders without a reload', async () => {
-    const desk = await (await browser.newContext(DESK)).newPage();
+    const { page: desk } = await openPage(browser, DESK);
     await signInOn(desk, mentorEmail, '/desk');
     await desk.getByRole('heading', { name: 'Mentor desk' }).waitFor();
     await desk.locator('ol[aria-label="Tanks by need"] > li').nth(1).waitFor();
@@ -56,8 +56,9 @@ describe('the mentor desk, live', () => {
     // A mark on this page's window: a reload would wipe it.
     await desk.evaluate(() => Object.assign(window, { deskNotReloaded: true }));
     await screenshot(desk, 'desk-before-desk');
+    await expectAccessible(desk);
 
-    const phone = await (await browser.newContext(PHONE)).newPage();
+    const { page: phone } = await openPage(browser, PHONE);
     await signInOn(phone, keeperEmail, '/');
     await phone.getByRole('heading', { name: /Hello, Kai/ }).waitFor();
     const status = await phone.evaluate(
@@ -78,6 +79,7 @@ describe('the mentor desk, live', () => {
     await desk.waitForFunction((id) => document.querySelector('ol[aria-label="Tanks by need"] > li')?.getAttribute('data-tank-id') === id, tanks.keeper, { timeout: 5_000 });
     await desk.getByText(/Nitrite/).first().waitFor();
     await screenshot(desk, 'desk-after-urgent-desk');
+    await expectAccessible(desk);
     expect(await desk.evaluate(() => 'deskNotReloaded' in window)).toBe(true);
   });
 });

@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import type { Browser } from 'playwright-core';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { launchBrowser, PHONE, screenshot } from '../helpers/browser';
+import { expectAccessible, launchBrowser, openPage, PHONE, screenshot } from '../helpers/browser';
 
 describe('the app shell in a browser', () => {
   let browser: Browser;
@@ -11,11 +11,7 @@ describe('the app shell in a browser', () => {
   afterAll(() => browser?.close());
 
   it('when a visitor opens a signed-in page on a phone, then they land on sign-in, in Nunito', async () => {
-    const context = await browser.newContext(PHONE);
-    const page = await context.newPage();
-    const consoleErrors: string[] = [];
-    // The browser itself logs the expected 401 of /api/me for a signed-out visitor; anything else is a bug.
-    page.on('console', (m) => m.type() === 'error' && !/status of 401/.test(m.text()) && consoleErrors.push(m.text()));
+    const { page } = await openPage(browser, PHONE);
     await page.goto(`${inject('baseUrl')}/profile`);
     await page.getByRole('heading', { name: 'Sign in' }).waitFor();
     expect(new URL(page.url()).pathname).toBe('/sign-in');
@@ -25,7 +21,6 @@ describe('the app shell in a browser', () => {
     expect(await page.evaluate(() => document.fonts.check('16px Nunito'))).toBe(true);
     const path = await screenshot(page, 'sign-in-phone');
     expect(existsSync(path)).toBe(true);
-    expect(consoleErrors).toEqual([]);
-    await context.close();
+    await expectAccessible(page);
   });
 });

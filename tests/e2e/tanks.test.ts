@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { DESK, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
+import { DESK, expectAccessible, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
@@ -72,7 +72,7 @@ describe('tanks in the browser', () => {
   });
 
   it('when a beginner adds a cycling seahorse tank at a desk and imports their log, then bad rows are named before saving and the cycle is charted', async () => {
-    const { context, page, errors } = await openSignedIn(browser, DESK, member.email, '/tanks/new');
+    const { page } = await openSignedIn(browser, DESK, member.email, '/tanks/new');
     await page.getByRole('heading', { name: 'Add a tank' }).waitFor();
     await page.getByRole('button', { name: 'Add the tank' }).click();
     await page.getByText('Give the tank a name.').waitFor();
@@ -87,6 +87,7 @@ describe('tanks in the browser', () => {
     await page.getByLabel('Equipment notes (optional)').fill('Sponge filter and a 150 W heater on a timer-free socket.');
     await page.getByText(/RCD\/GFCI/).waitFor();
     await screenshot(page, 'tank-form-desk');
+    await expectAccessible(page);
     await page.getByRole('button', { name: 'Add the tank' }).click();
     await page.getByRole('heading', { name: 'Seahorse nursery' }).waitFor();
     reefTankId = new URL(page.url()).pathname.split('/')[2]!;
@@ -105,6 +106,7 @@ describe('tanks in the browser', () => {
     await problems.getByText(/is not a real date/).waitFor();
     await problems.getByText('"lots" is not a number.').waitFor();
     await screenshot(page, 'tank-import-review-desk');
+    await expectAccessible(page);
     await page.getByRole('button', { name: `Save ${good} tests` }).click();
     await page.getByText(`Saved ${good} tests from cycle-log.csv. 3 rows with errors were left out.`).waitFor({ timeout: 30_000 });
     await page.getByRole('link', { name: 'See them on the charts' }).click();
@@ -113,12 +115,11 @@ describe('tanks in the browser', () => {
     await page.locator('figure[data-chart="ammonia"] .recharts-line').waitFor();
     expect(await page.locator('figure[data-chart="pH"] [role=img]').getAttribute('aria-label')).toContain(`${good} readings`);
     await screenshot(page, 'tank-page-desk');
-    expect(errors).toEqual([]);
-    await context.close();
+    await expectAccessible(page);
   });
 
   it('when the beginner logs a test at the tank on a phone, then the preview judges it and the new point is on the chart', async () => {
-    const { context, page, errors } = await openSignedIn(browser, PHONE, member.email, `/tanks/${reefTankId}`);
+    const { page } = await openSignedIn(browser, PHONE, member.email, `/tanks/${reefTankId}`);
     await page.getByRole('link', { name: /Log a water test/ }).click();
     await page.getByRole('heading', { name: 'Log a water test' }).waitFor();
     await page.getByLabel('Temperature', { exact: true }).fill('25.4');
@@ -133,6 +134,7 @@ describe('tanks in the browser', () => {
     await page.getByTestId('preview-ammonia').getByText(/Free ammonia \(the toxic part\)/).waitFor();
     await page.getByText('6 readings ready to save.').waitFor();
     await screenshot(page, 'water-test-form-phone');
+    await expectAccessible(page);
 
     await page.getByRole('button', { name: 'Save test' }).click();
     await page.getByText(/Test saved: 6 readings/).waitFor();
@@ -143,6 +145,7 @@ describe('tanks in the browser', () => {
     // Nothing may push the page sideways on a phone (wide tables scroll inside their own box).
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
     await screenshot(page, 'tank-page-after-test-phone');
+    await expectAccessible(page);
 
     await page.getByRole('link', { name: 'Add a water change or note' }).click();
     await page.getByRole('heading', { name: 'Add to the timeline' }).waitFor();
@@ -151,6 +154,7 @@ describe('tanks in the browser', () => {
     await page.getByText("About 43.7 L of the tank's 219 L.").waitFor();
     await page.getByLabel('New water').selectOption('mixed-salt');
     await screenshot(page, 'water-change-form-phone');
+    await expectAccessible(page);
     await page.getByRole('button', { name: 'Save water change' }).click();
     await page.getByText('Water change saved. It is on the timeline.').waitFor();
     await page.locator('figure[data-chart="pH"] .recharts-reference-line').first().waitFor({ state: 'attached' });
@@ -164,12 +168,10 @@ describe('tanks in the browser', () => {
     await page.getByRole('button', { name: 'Save changes' }).click();
     await page.getByText(/Changes saved/).waitFor();
     await page.locator('figure[data-chart="pH"] figcaption').getByText('pH 8.2').waitFor();
-    expect(errors).toEqual([]);
-    await context.close();
   });
 
   it('when the beginner imports 5,000 old tests, then a bar shows while they save in one transaction and every one arrives', { timeout: 240_000 }, async () => {
-    const { context, page, errors } = await openSignedIn(browser, DESK, member.email, '/tanks');
+    const { page } = await openSignedIn(browser, DESK, member.email, '/tanks');
     await page.getByRole('link', { name: /Living-room community/ }).click();
     await page.getByRole('link', { name: /Import a CSV log/ }).click();
     await importFile(page, 'five-thousand.csv', bigLog());
@@ -184,8 +186,7 @@ describe('tanks in the browser', () => {
     await page.goto(`${inject('baseUrl')}/tanks`);
     await page.getByText('Last test 2 hours ago').waitFor();
     await screenshot(page, 'tank-list-desk');
-    expect(errors).toEqual([]);
-    await context.close();
+    await expectAccessible(page);
   });
 
   it("when the mentor opens the list, then they see whose tanks they are; another member is told the tank isn't theirs to see", async () => {
@@ -195,14 +196,15 @@ describe('tanks in the browser', () => {
     await mentor.page.getByText(/^Last test/).nth(1).waitFor();
     expect(await mentor.page.getByText('Kept by Bo Beginner').count()).toBe(2);
     await screenshot(mentor.page, 'tank-list-mentor-desk');
+    await expectAccessible(mentor.page);
     await mentor.page.getByRole('link', { name: /Seahorse nursery/ }).click();
     await mentor.page.getByText('Kept by:').waitFor();
     expect(await mentor.page.getByRole('link', { name: /Log a water test/ }).count()).toBe(0);
-    await mentor.context.close();
 
     const stranger = await openSignedIn(browser, PHONE, strangerEmail, `/tanks/${reefTankId}`);
+    stranger.guard.expectFailure({ path: new RegExp(`/tanks/${reefTankId}$`), status: 403 });
     await stranger.page.getByRole('heading', { name: "That isn't yours to see" }).waitFor();
     await screenshot(stranger.page, 'tank-not-yours-phone');
-    await stranger.context.close();
+    await expectAccessible(stranger.page);
   });
 });

@@ -8,7 +8,7 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { questionKeys, useMarkAnswered, useQuestion } from '@client/features/questions/api/questions';
-import { QuestionRouteError } from '@client/features/questions/components/question-route-error';
+import { QuestionLoadError, QuestionRouteError } from '@client/features/questions/components/question-route-error';
 import { ReplyBox } from '@client/features/questions/components/reply-box';
 import { SnapshotPanel } from '@client/features/questions/components/snapshot-panel';
 import { Thread } from '@client/features/questions/components/thread';
@@ -35,7 +35,7 @@ export function Component() {
   useSocketReconnect(refresh);
 
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
-  if (detail.isError) throw detail.error;
+  if (detail.isError) return <QuestionLoadError error={detail.error} />;
   if (detail.isPending) return <Spinner label="Loading the question…" />;
   const d = detail.data;
   const q = d.question;

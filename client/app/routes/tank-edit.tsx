@@ -8,7 +8,7 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
 import { useSetArchived } from '@client/features/tanks/api/tanks';
 import { TankForm } from '@client/features/tanks/components/tank-form/tank-form';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { draftFromTank } from '@client/features/tanks/lib/tank-draft';
 import { useTankRoute } from '../use-tank-route';
 
@@ -20,7 +20,7 @@ export function Component() {
   // The form reads `initial` once, on mount: a later refetch of the tank changes this value but not what is on screen.
   const initial = useMemo(() => (tank.data ? draftFromTank(tank.data, me.user) : undefined), [tank.data, me.user]);
 
-  if (tank.isError) throw tank.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
   if (tank.isPending || !initial) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
   const allowed = ability.can('update', asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id }));

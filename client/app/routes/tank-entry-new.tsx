@@ -5,7 +5,7 @@ import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
 import { EventForm } from '@client/features/readings/components/events/event-form';
 import { newEventDraft, POSTED_KINDS, type PostedKind } from '@client/features/readings/lib/event-draft';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankRoute } from '../use-tank-route';
 
 const isPosted = (k: string | null): k is PostedKind => (POSTED_KINDS as readonly (string | null)[]).includes(k);
@@ -19,7 +19,7 @@ export function Component() {
   // Made once: switching kinds later keeps what was typed in the others.
   const [initial] = useState(() => newEventDraft(kind, me.user));
 
-  if (tank.isError) throw tank.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'TankEvent');

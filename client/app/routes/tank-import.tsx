@@ -2,12 +2,12 @@ import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Spinner } from '@client/components/ui/spinner';
 import { ImportFlow } from '@client/features/import/components/import-flow';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankRoute } from '../use-tank-route';
 
 export function Component() {
   const { me, clubId, tankId, tank, mayLog } = useTankRoute();
-  if (tank.isError) throw tank.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'WaterTest');

@@ -9,7 +9,7 @@ import { useDeleteWaterTest, useWaterTest } from '@client/features/readings/api/
 import { WaterTestForm } from '@client/features/readings/components/water-test/water-test-form';
 import { loadEntryMemory } from '@client/features/readings/lib/entry-memory';
 import { draftFromTest } from '@client/features/readings/lib/water-test-draft';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankProfile } from '@client/lib/care-profiles';
 import type { SavedNotice } from '@client/lib/saved-notice';
 import { useTankRoute } from '../use-tank-route';
@@ -25,8 +25,8 @@ export function Component() {
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
   const initial = useMemo(() => (test.data ? draftFromTest(test.data, me.user) : undefined), [test.data, me.user]);
 
-  if (tank.isError) throw tank.error;
-  if (test.isError) throw test.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
+  if (test.isError) return <TankLoadError error={test.error} />;
   if (tank.isPending || test.isPending || !profile || !initial) return <Spinner label="Loading the test…" />;
   const t = tank.data;
   const allowed = mayLog('update', 'WaterTest');

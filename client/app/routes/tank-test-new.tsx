@@ -6,7 +6,7 @@ import { Spinner } from '@client/components/ui/spinner';
 import { WaterTestForm } from '@client/features/readings/components/water-test/water-test-form';
 import { loadEntryMemory } from '@client/features/readings/lib/entry-memory';
 import { newDraft } from '@client/features/readings/lib/water-test-draft';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankProfile } from '@client/lib/care-profiles';
 import { useTankRoute } from '../use-tank-route';
 
@@ -17,7 +17,7 @@ export function Component() {
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
   const initial = useMemo(() => newDraft(me.user, memory.entries), [me.user, memory]);
 
-  if (tank.isError) throw tank.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
   if (tank.isPending || !profile) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'WaterTest');

@@ -12,7 +12,7 @@ import { Timeline } from '@client/features/readings/components/history/timeline'
 import { useSetArchived } from '@client/features/tanks/api/tanks';
 import { LivestockPanel } from '@client/features/tanks/components/livestock/livestock-panel';
 import { TankHeader } from '@client/features/tanks/components/tank-header';
-import { TankRouteError } from '@client/features/tanks/components/tank-route-error';
+import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useProfile } from '@client/lib/care-profiles';
 import { useTankPhotos } from '@client/lib/photos';
 import type { SavedNotice } from '@client/lib/saved-notice';
@@ -30,11 +30,11 @@ function Section({ title, children }: { title: string; children: ReactNode }) {
 export function Component() {
   const { me, ability, clubId, tankId, tank, mayLog } = useTankRoute();
   const profile = useProfile(clubId, tank.data?.careProfileKey).data?.profile;
-  const photos = useTankPhotos(clubId, tankId);
+  const photos = useTankPhotos(clubId, tankId, tank.isSuccess);
   const restore = useSetArchived(clubId, tankId);
   const saved = (useLocation().state as { saved?: SavedNotice } | null)?.saved;
 
-  if (tank.isError) throw tank.error;
+  if (tank.isError) return <TankLoadError error={tank.error} />;
   if (tank.isPending) return <Spinner label="Loading the tank…" />;
   const t = tank.data;
   const subject = asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id });

@@ -42,11 +42,16 @@ export function RouteError() {
   );
 }
 
-/** A route's error inside the app's frame, in the screen's own words, with a way back to its list. */
-export function SectionRouteError({ words, back }: { words: RouteErrorWords; back: { to: string; label: string } }) {
+/** What a screen shows when its data could not be had: a refusal or a missing record is an answer, not a crash. */
+export function SectionError({ error, words, back }: { error: unknown; words: RouteErrorWords; back: { to: string; label: string } }) {
   return (
     <section role="alert">
-      <ErrorMessage words={describe(useRouteError(), words)} back={back} className="mx-auto max-w-md py-12 text-center" />
+      <ErrorMessage words={describe(error, words)} back={back} className="mx-auto max-w-md py-12 text-center" />
     </section>
   );
+}
+
+/** A route's error inside the app's frame, in the screen's own words, with a way back to its list. */
+export function SectionRouteError(props: { words: RouteErrorWords; back: { to: string; label: string } }) {
+  return <SectionError error={useRouteError()} {...props} />;
 }

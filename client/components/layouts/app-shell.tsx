@@ -47,7 +47,7 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
         className="fixed inset-x-0 bottom-0 grid border-t border-tide-100 bg-white sm:hidden"
       >
-        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-tide-700' : 'text-tide-400'}`} />
+        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-tide-800' : 'text-tide-600'}`} />
       </nav>
     </div>
   );

@@ -30,7 +30,7 @@ function ConcernItem({ concern, clubId, ownerId }: { concern: ConcernView; clubI
         <SeverityBadge severity={concern.severity} />
         {concern.status === 'acknowledged' ? <span className="text-xs font-bold text-tide-600">seen by a mentor</span> : null}
         {concern.status === 'resolved' ? <span className="text-xs font-bold text-kelp-700">resolved {concern.resolved?.byTest ? 'by a later test' : ''}</span> : null}
-        <span className="text-xs text-tide-500">{when.format(new Date(concern.raisedAt))}</span>
+        <span className="text-xs text-tide-600">{when.format(new Date(concern.raisedAt))}</span>
       </div>
       <p className="mt-1 font-bold text-tide-900">{concern.reason}</p>
       {live && concern.nextSteps.length ? (
@@ -85,7 +85,7 @@ export function ConcernList({ concerns, clubId, tankId, ownerId }: { concerns: C
       </button>
       {showHistory ? (
         history.isPending ? <p className="text-sm text-tide-600">Loading…</p> : resolved.length === 0 ? <p className="text-sm text-tide-600">None resolved yet.</p> : (
-          <ul className="divide-y divide-tide-100 opacity-80">
+          <ul aria-label="Resolved concerns" className="divide-y divide-tide-100">
             {resolved.map((c) => (
               <ConcernItem key={c.id} concern={c} clubId={clubId} ownerId={ownerId} />
             ))}

@@ -1,6 +1,6 @@
 /** A tiny line of the recent values; drawn as SVG so a row stays light. */
 export function Sparkline({ points, label }: { points: { at: string; value: number }[]; label: string }) {
-  if (points.length < 2) return <span className="text-xs text-tide-500">{points.length === 1 ? '1 test' : 'no tests'}</span>;
+  if (points.length < 2) return <span className="text-xs text-tide-600">{points.length === 1 ? '1 test' : 'no tests'}</span>;
   const w = 96;
   const h = 28;
   const values = points.map((p) => p.value);

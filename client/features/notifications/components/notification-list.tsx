@@ -23,7 +23,7 @@ export function NotificationList(p: {
             <button type="button" onClick={() => p.onOpen(n)} className="min-h-touch flex-1 rounded-lg px-1 py-1 text-left hover:bg-tide-50">
               <span className={`block text-sm ${unread ? 'font-extrabold text-tide-950' : 'font-semibold text-tide-800'}`}>{n.title}</span>
               {n.body ? <span className="mt-0.5 line-clamp-2 block text-sm text-tide-700">{n.body}</span> : null}
-              <span className="mt-0.5 block text-xs text-tide-500">
+              <span className="mt-0.5 block text-xs text-tide-600">
                 {n.clubName} · {relativeTime(n.createdAt)}
                 {unread ? <span className="sr-only"> · unread</span> : null}
               </span>

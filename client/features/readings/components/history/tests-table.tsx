@@ -44,7 +44,7 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
           ),
           cell: (c) => {
             const v = c.getValue();
-            return v === undefined ? <span className="text-tide-300">–</span> : formatDisplayNumber(k, v, prefs);
+            return v === undefined ? <span className="text-tide-600">–</span> : formatDisplayNumber(k, v, prefs);
           },
           sortUndefined: 'last',
           filterFn: hasValue,

@@ -48,7 +48,7 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
   const level = freshness(lastAt, shortestCadenceDays(profile, tank.phase));
 
   return (
-    <li className={`rounded-card bg-white shadow-card ring-tide-300 focus-within:ring-2 ${tank.archivedAt ? 'opacity-75' : ''}`}>
+    <li className={`rounded-card shadow-card ring-tide-300 focus-within:ring-2 ${tank.archivedAt ? 'bg-sand-100' : 'bg-white'}`}>
       <Link to={`/tanks/${tank.id}`} className="block p-4 sm:p-5">
         <div className="flex flex-wrap items-start justify-between gap-2">
           <div>
