@@ -1,5 +1,6 @@
 import { QueryClientProvider } from '@tanstack/react-query';
 import { RouterProvider } from 'react-router/dom';
+import { ToastProvider } from '@client/components/ui/toast';
 import { queryClient } from '@client/lib/query-client';
 import { createRouter } from './router';
 
@@ -8,7 +9,9 @@ const router = createRouter(queryClient);
 export function App() {
   return (
     <QueryClientProvider client={queryClient}>
-      <RouterProvider router={router} />
+      <ToastProvider>
+        <RouterProvider router={router} />
+      </ToastProvider>
     </QueryClientProvider>
   );
 }

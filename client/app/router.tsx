@@ -1,8 +1,9 @@
+import { FullPageLoading } from '@client/components/ui/skeleton';
 import type { QueryClient } from '@tanstack/react-query';
 import { createBrowserRouter, redirect, type LoaderFunctionArgs } from 'react-router';
 import { RouteError } from '@client/components/errors/route-error';
 import { PublicLayout } from '@client/components/layouts/public-layout';
-import { FullPageSpinner } from '@client/components/ui/spinner';
+
 import { meQuery } from '@client/features/auth/api/me';
 import { SignedInLayout } from './signed-in-layout';
 
@@ -20,7 +21,7 @@ export function createRouter(queryClient: QueryClient) {
   return createBrowserRouter([
     {
       errorElement: <RouteError />,
-      HydrateFallback: FullPageSpinner,
+      HydrateFallback: FullPageLoading,
       children: [
         {
           element: <PublicLayout />,

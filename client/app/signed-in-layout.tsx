@@ -1,6 +1,7 @@
+import { FullPageLoading } from '@client/components/ui/skeleton';
 import { asSubject } from '@shared/abilities';
 import { AppShell, type NavItem } from '@client/components/layouts/app-shell';
-import { FullPageSpinner } from '@client/components/ui/spinner';
+
 import { useMe } from '@client/features/auth/api/me';
 import { SessionProvider, useSession } from '@client/features/auth/components/session-provider';
 import { UserMenu } from '@client/features/auth/components/user-menu';
@@ -23,7 +24,7 @@ function ShellForSession() {
 
 export function SignedInLayout() {
   const { data: me } = useMe();
-  if (!me) return <FullPageSpinner />;
+  if (!me) return <FullPageLoading />;
   return (
     <SessionProvider me={me}>
       <ShellForSession />

@@ -2,6 +2,7 @@ import type { AnyParameterKey, ParameterKey } from '@shared/care/parameters';
 import type { Band } from '@shared/care/profiles';
 import type { CanonicalValues } from '@shared/readings/normalize-water-test';
 import { toDisplay, type ReadingPrefs, type UnitPrefs } from './display-units';
+import { colorVar } from '../../tailwind.config';
 
 export interface Point {
   t: number;
@@ -61,16 +62,16 @@ export function yDomain(values: readonly number[], band?: readonly [number, numb
   return [lo, hi];
 }
 
-/** The chart palette: our tide, amber and kelp, matched to tailwind.config.ts. */
+/** The chart palette, from the theme's roles so the charts follow the colour scheme too. */
 export const CHART_COLOURS = {
-  line: '#18576b',
-  grid: '#d4eef3',
-  ideal: '#2f8f4e',
-  caution: '#c98a0b',
-  waterChange: '#23869f',
-  axis: '#1a6c84',
-  ammonia: '#9c2a1b',
-  nitrite: '#c98a0b',
-  nitrate: '#18576b',
-  marker: '#9c2a1b',
+  line: colorVar('link'),
+  grid: colorVar('line'),
+  ideal: colorVar('ok'),
+  caution: colorVar('watch'),
+  waterChange: colorVar('ink-muted'),
+  axis: colorVar('ink-muted'),
+  ammonia: colorVar('danger'),
+  nitrite: colorVar('watch'),
+  nitrate: colorVar('link'),
+  marker: colorVar('danger'),
 } as const;

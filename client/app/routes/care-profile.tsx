@@ -2,7 +2,7 @@ import { useParams } from 'react-router';
 import { asSubject } from '@shared/abilities';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useProfile } from '@client/lib/care-profiles';
 import { formatDate } from '@client/lib/date-format';
@@ -13,7 +13,7 @@ export function Component() {
   const { activeClub, ability } = useSession();
   const clubId = activeClub?.clubId ?? '';
   const detail = useProfile(clubId, key);
-  if (detail.isPending) return <Spinner />;
+  if (detail.isPending) return <Loading label="Loading…" />;
   if (detail.isError) return <Notice tone="error">{detail.error.message}</Notice>;
   const d = detail.data;
   const editable = d.source === 'club' && ability.can('update', asSubject('CareProfile', { clubId }));
@@ -27,14 +27,14 @@ export function Component() {
         </Card>
         {d.history.length ? (
           <Card>
-            <h2 className="text-lg font-extrabold text-tide-900">History</h2>
+            <h2 className="text-lg font-extrabold text-ink">History</h2>
             <ol className="mt-2 space-y-3">
               {d.history.map((h) => (
                 <li key={h.version}>
-                  <p className="font-bold text-tide-900">Version {h.version} · {formatDate(h.changedAt)}</p>
-                  <p className="text-sm text-tide-800">{h.note}</p>
+                  <p className="font-bold text-ink">Version {h.version} · {formatDate(h.changedAt)}</p>
+                  <p className="text-sm text-ink-soft">{h.note}</p>
                   {h.changes.length ? (
-                    <ul className="list-disc pl-5 text-sm text-tide-700">
+                    <ul className="list-disc pl-5 text-sm text-ink-muted">
                       {h.changes.map((c) => <li key={c}>{c}</li>)}
                     </ul>
                   ) : null}

@@ -4,7 +4,9 @@ import { asSubject } from '@shared/abilities';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
+import { TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useCopyProfile, useProfiles } from '@client/lib/care-profiles';
 import { ApiError } from '@client/lib/api-client';
@@ -22,15 +24,15 @@ export function Component() {
   return (
     <>
       <PageHeader title="Care profiles" subtitle="The ranges each kind of tank is judged by. Shipped ones cite their sources; club copies can be adjusted." />
-      {profiles.isPending ? <Spinner /> : profiles.isError ? <Notice tone="error">{profiles.error.message}</Notice> : (
+      {profiles.isPending ? <Loading label="Loading…" /> : profiles.isError ? <Notice tone="error">{profiles.error.message}</Notice> : (
         <div className="space-y-4">
           <Card>
-            <ul className="divide-y divide-tide-100">
+            <ul className="divide-y divide-line">
               {profiles.data.profiles.map((p) => (
                 <li key={p.key} className="flex flex-wrap items-center justify-between gap-2 py-3">
                   <div>
-                    <Link to={`/club/profiles/${p.key}`} className="font-bold text-tide-900 underline">{p.name}</Link>
-                    <p className="text-sm text-tide-600">{p.source === 'club' ? `Club copy, version ${p.version}` : 'Shipped with Shoalwise'} · for {p.animals}</p>
+                    <Link to={`/club/profiles/${p.key}`} className="font-bold text-ink underline">{p.name}</Link>
+                    <p className="text-sm text-ink-muted">{p.source === 'club' ? `Club copy, version ${p.version}` : 'Shipped with Shoalwise'} · for {p.animals}</p>
                   </div>
                 </li>
               ))}
@@ -38,18 +40,14 @@ export function Component() {
           </Card>
           {canCopy ? (
             <Card>
-              <h2 className="text-lg font-extrabold text-tide-900">Make a club copy</h2>
-              <p className="text-sm text-tide-700">Start from a profile and adjust its ranges for your club. Tanks keep following the original until their keeper picks the copy.</p>
+              <h2 className="text-lg font-extrabold text-ink">Make a club copy</h2>
+              <p className="text-sm text-ink-muted">Start from a profile and adjust its ranges for your club. Tanks keep following the original until their keeper picks the copy.</p>
               <div className="mt-3 grid gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
-                <label className="text-sm font-bold text-tide-800">Start from
-                  <select value={basedOn} onChange={(e) => setBasedOn(e.target.value)} className="mt-1 block min-h-touch w-full rounded-xl border border-tide-200 bg-white px-3 font-normal">
-                    <option value="">Choose…</option>
-                    {profiles.data.profiles.map((p) => <option key={p.key} value={p.key}>{p.name}</option>)}
-                  </select>
-                </label>
-                <label className="text-sm font-bold text-tide-800">Name of the copy
-                  <input value={name} onChange={(e) => setName(e.target.value)} className="mt-1 block min-h-touch w-full rounded-xl border border-tide-200 px-3 font-normal" />
-                </label>
+                <SelectField label="Start from" value={basedOn} onChange={(e) => setBasedOn(e.target.value)}>
+                  <option value="">Choose…</option>
+                  {profiles.data.profiles.map((p) => <option key={p.key} value={p.key}>{p.name}</option>)}
+                </SelectField>
+                <TextField label="Name of the copy" value={name} onChange={(e) => setName(e.target.value)} />
                 <Button busy={copy.isPending} onClick={async () => {
                   setError(undefined);
                   try {

@@ -1,8 +1,8 @@
-import { Link } from 'react-router';
 import { Can } from '@casl/react';
 import type { AppAbility } from '@shared/abilities';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
+import { ButtonLink } from '@client/components/ui/button';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { InvitePanel } from '@client/features/club/components/invite-panel';
 import { MembersPanel } from '@client/features/club/components/members-panel';
@@ -19,7 +19,7 @@ export function Component() {
       <PageHeader
         title={activeClub.clubName}
         subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'}
-        actions={<Link to="/club/profiles" className="inline-flex min-h-touch items-center rounded-full bg-white px-4 font-bold text-tide-800 ring-1 ring-tide-200">Care profiles</Link>}
+        actions={<ButtonLink variant="secondary" to="/club/profiles">Care profiles</ButtonLink>}
       />
       <div className="space-y-5">
         <Can<AppAbility> I="create" this={asSubject('Invite', { clubId: activeClub.clubId })}>

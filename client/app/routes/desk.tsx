@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useState } from 'react';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useConcernAction } from '@client/features/care/api/care';
 import { careKeys } from '@client/lib/tank-keys';
@@ -61,34 +61,34 @@ export function Component() {
             type="button"
             aria-pressed={filters[f.key]}
             onClick={() => setFilters((s) => ({ ...s, [f.key]: !s[f.key] }))}
-            className={`min-h-touch rounded-full px-4 text-sm font-bold ring-1 ${filters[f.key] ? 'bg-tide-700 text-white ring-tide-700' : 'bg-white text-tide-800 ring-tide-200'}`}
+            className={`min-h-touch rounded-full px-4 text-sm font-bold ring-1 ${filters[f.key] ? 'bg-accent text-on-accent ring-accent' : 'bg-surface text-ink-soft ring-line-strong'}`}
           >
             {f.label}
           </button>
         ))}
         <span className="grow" />
-        <label className="flex min-h-touch items-center gap-2 text-sm text-tide-800">
-          <input type="checkbox" className="size-5 accent-tide-700" checked={alerts.prefs.sound} onChange={(e) => alerts.setSound(e.target.checked)} />
+        <label className="flex min-h-touch items-center gap-2 text-sm text-ink-soft">
+          <input type="checkbox" className="size-5 accent-accent" checked={alerts.prefs.sound} onChange={(e) => alerts.setSound(e.target.checked)} />
           Chime on urgent
         </label>
         {alerts.desktopSupported ? (
-          <label className="flex min-h-touch items-center gap-2 text-sm text-tide-800">
-            <input type="checkbox" className="size-5 accent-tide-700" checked={alerts.prefs.desktop} onChange={(e) => void alerts.setDesktop(e.target.checked)} />
+          <label className="flex min-h-touch items-center gap-2 text-sm text-ink-soft">
+            <input type="checkbox" className="size-5 accent-accent" checked={alerts.prefs.desktop} onChange={(e) => void alerts.setDesktop(e.target.checked)} />
             Desktop notice
           </label>
         ) : null}
       </div>
       {desk.isPending ? (
-        <Card><Spinner label="Gathering your mentees’ tanks…" /></Card>
+        <Card><Loading label="Gathering your mentees’ tanks…" /></Card>
       ) : desk.isError ? (
         <Notice tone="error">{desk.error.message}</Notice>
       ) : desk.data.total === 0 ? (
-        <Card><p className="text-tide-800">No mentees’ tanks yet. When a club admin pairs you with a beginner, their tanks appear here.</p></Card>
+        <Card><p className="text-ink-soft">No mentees’ tanks yet. When a club admin pairs you with a beginner, their tanks appear here.</p></Card>
       ) : desk.data.rows.length === 0 ? (
-        <Card><p className="text-tide-800">No tank matches these filters ({desk.data.total} in all).</p></Card>
+        <Card><p className="text-ink-soft">No tank matches these filters ({desk.data.total} in all).</p></Card>
       ) : (
         <>
-          <p className="mb-2 text-sm text-tide-600">{desk.data.rows.length} of {desk.data.total} tanks</p>
+          <p className="mb-2 text-sm text-ink-muted">{desk.data.rows.length} of {desk.data.total} tanks</p>
           <ol className="space-y-3" aria-label="Tanks by need">
             {desk.data.rows.map((row) => (
               <DeskRow

@@ -15,7 +15,7 @@ export function Component() {
       ) : (
         <div className="space-y-5">
           <Card>
-            <p className="text-tide-800">
+            <p className="text-ink-soft">
               Log your water tests, watch your tank through the nitrogen cycle, and let your mentor spot trouble early.
             </p>
           </Card>

@@ -1,11 +1,11 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { lazy, Suspense } from 'react';
-import { Link, useParams } from 'react-router';
+import { useParams } from 'react-router';
 import { asSubject } from '@shared/abilities';
-import { Button } from '@client/components/ui/button';
+import { Button, ButtonLink } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading, PageSkeleton } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { questionKeys, useMarkAnswered, useQuestion } from '@client/features/questions/api/questions';
 import { QuestionLoadError, QuestionRouteError } from '@client/features/questions/components/question-route-error';
@@ -36,7 +36,7 @@ export function Component() {
 
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   if (detail.isError) return <QuestionLoadError error={detail.error} />;
-  if (detail.isPending) return <Spinner label="Loading the question…" />;
+  if (detail.isPending) return <PageSkeleton label="Loading the question…" />;
   const d = detail.data;
   const q = d.question;
   const subject = asSubject('Question', { clubId: q.clubId, askerId: q.asker.userId });
@@ -49,18 +49,18 @@ export function Component() {
         title={q.title}
         subtitle={`${q.asker.userId === me.user.id ? 'You' : q.asker.displayName} asked about ${q.tankName}`}
         actions={
-          <Link to={`/tanks/${q.tankId}`} className="inline-flex min-h-touch items-center rounded-full bg-white px-4 font-bold text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50">
+          <ButtonLink variant="secondary" to={`/tanks/${q.tankId}`}>
             Open the tank
-          </Link>
+          </ButtonLink>
         }
       />
       <div className="mb-4 flex flex-wrap items-center gap-3">
         {q.status === 'answered' ? (
-          <span className="rounded-full bg-kelp-100 px-3 py-1 text-sm font-extrabold text-kelp-700">✓ Answered</span>
+          <span className="rounded-full bg-ok-soft px-3 py-1 text-sm font-extrabold text-ok">✓ Answered</span>
         ) : q.awaitingAnswer ? (
-          <span className="rounded-full bg-amber-100 px-3 py-1 text-sm font-extrabold text-amber-700">● Waiting for an answer</span>
+          <span className="rounded-full bg-watch-soft px-3 py-1 text-sm font-extrabold text-watch">● Waiting for an answer</span>
         ) : (
-          <span className="rounded-full bg-tide-50 px-3 py-1 text-sm font-extrabold text-tide-700">↩ Replied: over to {isAsker ? 'you' : q.asker.displayName}</span>
+          <span className="rounded-full bg-tint px-3 py-1 text-sm font-extrabold text-ink-muted">↩ Replied: over to {isAsker ? 'you' : q.asker.displayName}</span>
         )}
         {isAsker ? (
           <Button variant={q.status === 'answered' ? 'secondary' : 'primary'} busy={mark.isPending} onClick={() => mark.mutate(q.status !== 'answered')}>
@@ -72,7 +72,7 @@ export function Component() {
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <div className="space-y-4 lg:order-2">
           <SnapshotPanel snapshot={d.snapshot} prefs={me.user} />
-          <Suspense fallback={<Card><Spinner label="Drawing the chart…" /></Card>}>
+          <Suspense fallback={<Card><Loading label="Drawing the chart…" /></Card>}>
             <ReadingsChart readings={d.readings} snapshot={d.snapshot} prefs={me.user} />
           </Suspense>
         </div>

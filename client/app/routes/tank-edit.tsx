@@ -5,7 +5,7 @@ import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useSetArchived } from '@client/features/tanks/api/tanks';
 import { TankForm } from '@client/features/tanks/components/tank-form/tank-form';
 import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
@@ -21,7 +21,7 @@ export function Component() {
   const initial = useMemo(() => (tank.data ? draftFromTank(tank.data, me.user) : undefined), [tank.data, me.user]);
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
-  if (tank.isPending || !initial) return <Spinner label="Loading the tank…" />;
+  if (tank.isPending || !initial) return <PageSkeleton label="Loading the tank…" />;
   const t = tank.data;
   const allowed = ability.can('update', asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id }));
   const open = (message: string) => navigate(`/tanks/${tankId}`, { state: { saved: { message, warnings: [] } } });
@@ -44,8 +44,8 @@ export function Component() {
           <TankForm clubId={clubId} tankId={tankId} prefs={me.user} initial={initial} submitLabel="Save changes" onSaved={() => open('Changes saved.')} />
         </Card>
         <Card>
-          <h2 className="text-lg font-extrabold text-tide-900">Archive this tank</h2>
-          <p className="mt-1 text-tide-700">Taken the tank down? Archiving hides it from your list but keeps its whole history. You can restore it at any time.</p>
+          <h2 className="text-lg font-extrabold text-ink">Archive this tank</h2>
+          <p className="mt-1 text-ink-muted">Taken the tank down? Archiving hides it from your list but keeps its whole history. You can restore it at any time.</p>
           <Button variant="secondary" className="mt-3" onClick={() => setConfirming(true)}>Archive…</Button>
         </Card>
       </div>

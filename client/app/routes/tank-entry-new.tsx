@@ -2,7 +2,7 @@ import { useState } from 'react';
 import { useNavigate, useSearchParams } from 'react-router';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { EventForm } from '@client/features/readings/components/events/event-form';
 import { newEventDraft, POSTED_KINDS, type PostedKind } from '@client/features/readings/lib/event-draft';
 import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
@@ -20,7 +20,7 @@ export function Component() {
   const [initial] = useState(() => newEventDraft(kind, me.user));
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
-  if (tank.isPending) return <Spinner label="Loading the tank…" />;
+  if (tank.isPending) return <PageSkeleton label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'TankEvent');
 

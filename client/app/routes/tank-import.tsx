@@ -1,6 +1,6 @@
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { ImportFlow } from '@client/features/import/components/import-flow';
 import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankRoute } from '../use-tank-route';
@@ -8,7 +8,7 @@ import { useTankRoute } from '../use-tank-route';
 export function Component() {
   const { me, clubId, tankId, tank, mayLog } = useTankRoute();
   if (tank.isError) return <TankLoadError error={tank.error} />;
-  if (tank.isPending) return <Spinner label="Loading the tank…" />;
+  if (tank.isPending) return <PageSkeleton label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'WaterTest');
   return (

@@ -4,7 +4,7 @@ import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useDeleteWaterTest, useWaterTest } from '@client/features/readings/api/water-tests';
 import { WaterTestForm } from '@client/features/readings/components/water-test/water-test-form';
 import { loadEntryMemory } from '@client/features/readings/lib/entry-memory';
@@ -27,7 +27,7 @@ export function Component() {
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
   if (test.isError) return <TankLoadError error={test.error} />;
-  if (tank.isPending || test.isPending || !profile || !initial) return <Spinner label="Loading the test…" />;
+  if (tank.isPending || test.isPending || !profile || !initial) return <PageSkeleton label="Loading the test…" />;
   const t = tank.data;
   const allowed = mayLog('update', 'WaterTest');
   const back = (saved: SavedNotice) => navigate(`/tanks/${tankId}`, { state: { saved } });
@@ -40,8 +40,8 @@ export function Component() {
       ) : (
         <div className="space-y-6">
           <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} editing={test.data} submitLabel="Save changes" onSaved={back} />
-          <div className="border-t border-tide-100 pt-4">
-            <Button variant="ghost" className="text-ember-700" onClick={() => setConfirming(true)}>Delete this test</Button>
+          <div className="border-t border-line pt-4">
+            <Button variant="ghost" className="text-danger" onClick={() => setConfirming(true)}>Delete this test</Button>
           </div>
           <ConfirmDialog
             open={confirming}

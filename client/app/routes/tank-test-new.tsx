@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { Link, useNavigate } from 'react-router';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { WaterTestForm } from '@client/features/readings/components/water-test/water-test-form';
 import { loadEntryMemory } from '@client/features/readings/lib/entry-memory';
 import { newDraft } from '@client/features/readings/lib/water-test-draft';
@@ -18,7 +18,7 @@ export function Component() {
   const initial = useMemo(() => newDraft(me.user, memory.entries), [me.user, memory]);
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
-  if (tank.isPending || !profile) return <Spinner label="Loading the tank…" />;
+  if (tank.isPending || !profile) return <PageSkeleton label="Loading the tank…" />;
   const t = tank.data;
   const allowed = mayLog('create', 'WaterTest');
 
@@ -27,9 +27,9 @@ export function Component() {
       <PageHeader title="Log a water test" subtitle={t.name} />
       {allowed ? (
         <>
-          <p className="mb-4 text-sm text-tide-700">
+          <p className="mb-4 text-sm text-ink-muted">
             Fill in what you tested; leave the rest empty. Not a test?{' '}
-            <Link to={`/tanks/${tankId}/entries/new`} className="font-bold text-tide-700 underline">Log a water change, a dose or what you saw</Link>.
+            <Link to={`/tanks/${tankId}/entries/new`} className="font-bold text-link underline">Log a water change, a dose or what you saw</Link>.
           </p>
           <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })} />
         </>

@@ -3,7 +3,7 @@ import { useLocation } from 'react-router';
 import { asSubject } from '@shared/abilities';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { TankCarePanel } from '@client/features/care/components/tank-care-panel';
 import { TankRecords } from '@client/features/import/components/tank-records';
 import { AskAboutRecent } from '@client/features/questions/components/ask-about-recent';
@@ -21,7 +21,7 @@ import { useTankRoute } from '../use-tank-route';
 function Section({ title, children }: { title: string; children: ReactNode }) {
   return (
     <section aria-label={title}>
-      <h2 className="mb-3 text-xl font-extrabold text-tide-900">{title}</h2>
+      <h2 className="mb-3 text-xl font-extrabold text-ink">{title}</h2>
       {children}
     </section>
   );
@@ -35,7 +35,7 @@ export function Component() {
   const saved = (useLocation().state as { saved?: SavedNotice } | null)?.saved;
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
-  if (tank.isPending) return <Spinner label="Loading the tank…" />;
+  if (tank.isPending) return <PageSkeleton label="Loading the tank…" />;
   const t = tank.data;
   const subject = asSubject('Tank', { clubId: t.clubId, ownerId: t.owner.id });
   const active = !t.archivedAt;

@@ -12,8 +12,8 @@ export function ChartTooltip({ active, payload, format }: { active?: boolean; pa
   if (!active || !payload?.length) return null;
   const t = payload[0]?.payload?.t;
   return (
-    <div className="rounded-lg bg-white px-3 py-2 text-sm shadow-card ring-1 ring-tide-100">
-      {t !== undefined ? <p className="font-bold text-tide-900">{formatDayTime(t)}</p> : null}
+    <div className="rounded-lg bg-surface px-3 py-2 text-sm shadow-card ring-1 ring-line">
+      {t !== undefined ? <p className="font-bold text-ink">{formatDayTime(t)}</p> : null}
       {payload.map((p) =>
         typeof p.value === 'number' ? (
           <p key={String(p.name)} style={{ color: p.color }} className="font-semibold">

@@ -1,4 +1,5 @@
-import { isRouteErrorResponse, Link, useRouteError } from 'react-router';
+import { isRouteErrorResponse, useRouteError } from 'react-router';
+import { ButtonLink } from '@client/components/ui/button';
 import { ApiError } from '@client/lib/api-client';
 
 interface Words {
@@ -24,11 +25,11 @@ function describe(error: unknown, words: RouteErrorWords): Words {
 function ErrorMessage({ words, back, className }: { words: Words; back: { to: string; label: string }; className: string }) {
   return (
     <div className={className}>
-      <h1 className="text-2xl font-extrabold text-tide-900">{words.title}</h1>
-      <p className="mt-2 text-tide-700">{words.detail}</p>
-      <Link to={back.to} className="mt-6 inline-flex min-h-touch items-center rounded-full bg-tide-700 px-5 font-bold text-white">
+      <h1 className="text-2xl font-extrabold text-ink">{words.title}</h1>
+      <p className="mt-2 text-ink-muted">{words.detail}</p>
+      <ButtonLink to={back.to} className="mt-6">
         {back.label}
-      </Link>
+      </ButtonLink>
     </div>
   );
 }

@@ -9,7 +9,7 @@ export interface NavItem {
 
 function Brand() {
   return (
-    <NavLink to="/" className="flex items-center gap-2 font-extrabold text-white">
+    <NavLink to="/" className="flex items-center gap-2 font-extrabold text-on-chrome">
       <img src="/favicon.svg" alt="" className="size-8" />
       <span className="text-lg">Shoalwise</span>
     </NavLink>
@@ -29,15 +29,15 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
   const navigation = useNavigation();
   return (
     <div className="min-h-dvh">
-      <header className="bg-tide-800">
+      <header className="bg-chrome">
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
-            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-tide-600 text-white' : 'text-tide-100 hover:bg-tide-700'}`} />
+            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-chrome-active text-on-chrome' : 'text-on-chrome-muted hover:bg-chrome-active'}`} />
           </nav>
           {headerEnd}
         </div>
-        {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-tide-300" aria-hidden /> : null}
+        {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-on-chrome-muted" aria-hidden /> : null}
       </header>
       <main className="mx-auto max-w-5xl px-4 pt-6 pb-24 sm:pb-10">
         <Outlet />
@@ -45,9 +45,9 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
       <nav
         aria-label="Main (mobile)"
         style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
-        className="fixed inset-x-0 bottom-0 grid border-t border-tide-100 bg-white sm:hidden"
+        className="fixed inset-x-0 bottom-0 grid border-t border-line bg-surface sm:hidden"
       >
-        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-tide-800' : 'text-tide-600'}`} />
+        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-ink-soft' : 'text-ink-muted'}`} />
       </nav>
     </div>
   );

@@ -1,19 +1,36 @@
 import type { ReactNode } from 'react';
+import { TONES, type Tone } from './badge';
 
-export function Card({ children, className = '' }: { children: ReactNode; className?: string }) {
-  return <section className={`rounded-card bg-white p-5 shadow-card ${className}`}>{children}</section>;
+/** A white (in dark mode, deep) panel: the unit every screen is built from. `title` gives it a heading. */
+export function Card({ children, title, actions, className = '' }: { children: ReactNode; title?: ReactNode; actions?: ReactNode; className?: string }) {
+  return (
+    <section className={`rounded-card bg-surface p-5 shadow-card ring-1 ring-line ${className}`}>
+      {title ? (
+        <div className="mb-3 flex flex-wrap items-center justify-between gap-2">
+          <h2 className="text-lg font-extrabold text-ink">{title}</h2>
+          {actions}
+        </div>
+      ) : null}
+      {children}
+    </section>
+  );
 }
 
-export function Notice({ tone = 'info', children }: { tone?: 'info' | 'success' | 'warning' | 'error'; children: ReactNode }) {
-  const tones = {
-    info: 'bg-tide-50 text-tide-800 ring-tide-200',
-    success: 'bg-kelp-100 text-kelp-700 ring-kelp-500/30',
-    warning: 'bg-amber-100 text-amber-700 ring-amber-500/30',
-    error: 'bg-ember-100 text-ember-700 ring-ember-500/30',
-  } as const;
+type NoticeTone = 'info' | 'success' | 'warning' | 'error';
+const NOTICE: Record<NoticeTone, { tone: Tone; mark: string }> = {
+  info: { tone: 'info', mark: 'i' },
+  success: { tone: 'ok', mark: '✓' },
+  warning: { tone: 'watch', mark: '!' },
+  error: { tone: 'danger', mark: '▲' },
+};
+
+/** A message in the page's flow; errors are announced at once, the rest politely. */
+export function Notice({ tone = 'info', children }: { tone?: NoticeTone; children: ReactNode }) {
+  const look = NOTICE[tone];
   return (
-    <div role={tone === 'error' ? 'alert' : 'status'} className={`rounded-xl px-4 py-3 text-sm font-semibold ring-1 ${tones[tone]}`}>
-      {children}
+    <div role={tone === 'error' ? 'alert' : 'status'} className={`flex gap-2 rounded-control px-4 py-3 text-sm font-semibold ring-1 ${TONES[look.tone]}`}>
+      <span aria-hidden className="font-extrabold">{look.mark}</span>
+      <div className="min-w-0 flex-1">{children}</div>
     </div>
   );
 }
@@ -22,8 +39,8 @@ export function AuthCard({ title, subtitle, children }: { title: string; subtitl
   return (
     <div className="mx-auto max-w-md">
       <Card>
-        <h1 className="text-2xl font-extrabold text-tide-900">{title}</h1>
-        {subtitle ? <p className="mt-1 text-tide-700">{subtitle}</p> : null}
+        <h1 className="text-2xl font-extrabold text-ink">{title}</h1>
+        {subtitle ? <p className="mt-1 text-ink-muted">{subtitle}</p> : null}
         <div className="mt-5">{children}</div>
       </Card>
     </div>

@@ -1,4 +1,5 @@
 import type { ReactNode } from 'react';
+import { TONES } from './badge';
 
 /** The trade's usual cautions, worded once, shown beside the actions they belong to. */
 export const CAUTIONS = {
@@ -19,7 +20,7 @@ export const CAUTIONS = {
 
 export function Caution({ children, title = 'Take care' }: { children: ReactNode; title?: string }) {
   return (
-    <aside className="flex gap-3 rounded-xl bg-amber-100 px-4 py-3 text-sm text-amber-700 ring-1 ring-amber-500/30">
+    <aside className={`flex gap-3 rounded-control px-4 py-3 text-sm ring-1 ${TONES.watch}`}>
       <span aria-hidden className="mt-0.5 text-base font-extrabold">!</span>
       <p>
         <strong className="font-extrabold">{title}: </strong>

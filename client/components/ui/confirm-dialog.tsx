@@ -1,7 +1,8 @@
-import { useEffect, useRef, type ReactNode } from 'react';
+import type { ReactNode } from 'react';
 import { Button } from './button';
+import { Dialog } from './dialog';
 
-/** A modal question with a confirm and a cancel button; Escape or the backdrop cancels. */
+/** A question before an action: confirm or cancel; Escape or the backdrop cancels. */
 export function ConfirmDialog({
   open,
   title,
@@ -21,32 +22,19 @@ export function ConfirmDialog({
   onConfirm: () => void;
   onCancel: () => void;
 }) {
-  const ref = useRef<HTMLDialogElement>(null);
-  useEffect(() => {
-    const d = ref.current;
-    if (!d) return;
-    if (open && !d.open) d.showModal?.();
-    if (!open && d.open) d.close();
-  }, [open]);
   return (
-    <dialog
-      ref={ref}
-      aria-labelledby="confirm-dialog-title"
-      onCancel={(e) => {
-        e.preventDefault();
-        onCancel();
-      }}
-      onClick={(e) => e.target === ref.current && onCancel()}
-      className="m-auto w-[min(28rem,calc(100vw-2rem))] rounded-card bg-white p-0 shadow-card backdrop:bg-tide-950/50"
-    >
-      <div className="p-5">
-        <h2 id="confirm-dialog-title" className="text-lg font-extrabold text-tide-900">{title}</h2>
-        <div className="mt-2 space-y-2 text-tide-800">{children}</div>
-        <div className="mt-5 flex flex-wrap justify-end gap-2">
+    <Dialog
+      open={open}
+      title={title}
+      onClose={onCancel}
+      footer={
+        <>
           <Button variant="secondary" onClick={onCancel}>Cancel</Button>
           <Button variant={tone} busy={busy} onClick={onConfirm}>{confirmLabel}</Button>
-        </div>
-      </div>
-    </dialog>
+        </>
+      }
+    >
+      {children}
+    </Dialog>
   );
 }

@@ -1,52 +1,60 @@
-import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type SelectHTMLAttributes, type TextareaHTMLAttributes } from 'react';
+import { forwardRef, useId, type InputHTMLAttributes, type ReactNode, type TextareaHTMLAttributes } from 'react';
 
-interface FieldProps {
-  label: string;
+/** The look of every text box: the same edge, focus and error state wherever one is drawn. */
+export const controlClass = (invalid?: boolean) =>
+  `block rounded-control border bg-surface px-3 text-base text-ink focus:border-focus focus:outline-none focus:ring-2 focus:ring-focus/40 disabled:bg-tint disabled:text-ink-muted ${invalid ? 'border-danger' : 'border-line-strong'}`;
+
+export interface FieldProps {
+  label: ReactNode;
   error?: string;
   hint?: ReactNode;
 }
 
-const controlClass = (error?: string) =>
-  `mt-1 block w-full rounded-xl border bg-white px-3 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200 ${error ? 'border-ember-500' : 'border-tide-200'}`;
+/** What the control needs to be tied to its label, hint and error. */
+export interface ControlA11y {
+  id: string;
+  'aria-invalid'?: true;
+  'aria-describedby'?: string;
+}
 
-/** The label, the control and, under it, the error or else the hint, wired to each other for screen readers. */
-function Field({ label, error, hint, id, control }: FieldProps & { id: string | undefined; control: (a11y: { id: string; 'aria-invalid'?: true; 'aria-describedby'?: string }) => ReactNode }) {
+/**
+ * The label, the control and, under it, the hint and the error, wired to each other for screen readers:
+ * the control names both in aria-describedby, and the error is announced when it appears.
+ */
+export function Field({ label, error, hint, id, children }: FieldProps & { id?: string; children: (a11y: ControlA11y) => ReactNode }) {
   const auto = useId();
-  const inputId = id ?? auto;
+  const controlId = id ?? auto;
+  const described = [hint ? `${controlId}-hint` : '', error ? `${controlId}-error` : ''].filter(Boolean).join(' ');
   return (
     <div>
-      <label htmlFor={inputId} className="block text-sm font-bold text-tide-800">{label}</label>
-      {control({ id: inputId, 'aria-invalid': error ? true : undefined, 'aria-describedby': error ? `${inputId}-error` : hint ? `${inputId}-hint` : undefined })}
-      {hint && !error ? <p id={`${inputId}-hint`} className="mt-1 text-sm text-tide-600">{hint}</p> : null}
-      {error ? <p id={`${inputId}-error`} role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error}</p> : null}
+      <label htmlFor={controlId} className="block text-sm font-bold text-ink-soft">{label}</label>
+      {children({ id: controlId, 'aria-invalid': error ? true : undefined, 'aria-describedby': described || undefined })}
+      {hint ? <p id={`${controlId}-hint`} className="mt-1 text-sm text-ink-muted">{hint}</p> : null}
+      {error ? <p id={`${controlId}-error`} role="alert" className="mt-1 text-sm font-semibold text-danger">{error}</p> : null}
     </div>
   );
 }
 
-export const TextField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttributes<HTMLInputElement>>(function TextField({ label, error, hint, id, ...rest }, ref) {
-  return <Field label={label} error={error} hint={hint} id={id} control={(a11y) => <input ref={ref} {...a11y} className={`${controlClass(error)} min-h-touch`} {...rest} />} />;
+export const Input = forwardRef<HTMLInputElement, InputHTMLAttributes<HTMLInputElement>>(function Input({ className = 'mt-1 w-full', ...rest }, ref) {
+  return <input ref={ref} {...rest} className={`${controlClass(rest['aria-invalid'] === true)} min-h-touch ${className}`} />;
 });
 
-export const SelectField = forwardRef<HTMLSelectElement, FieldProps & SelectHTMLAttributes<HTMLSelectElement> & { options: { value: string; label: string }[] }>(
-  function SelectField({ label, error, hint, id, options, ...rest }, ref) {
-    return (
-      <Field
-        label={label}
-        error={error}
-        hint={hint}
-        id={id}
-        control={(a11y) => (
-          <select ref={ref} {...a11y} className={`${controlClass(error)} min-h-touch`} {...rest}>
-            {options.map((o) => (
-              <option key={o.value} value={o.value}>{o.label}</option>
-            ))}
-          </select>
-        )}
-      />
-    );
-  },
-);
+export const Textarea = forwardRef<HTMLTextAreaElement, TextareaHTMLAttributes<HTMLTextAreaElement>>(function Textarea({ className = 'mt-1 w-full', rows = 3, ...rest }, ref) {
+  return <textarea ref={ref} rows={rows} {...rest} className={`${controlClass(rest['aria-invalid'] === true)} py-2 ${className}`} />;
+});
 
-export const TextAreaField = forwardRef<HTMLTextAreaElement, FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>>(function TextAreaField({ label, error, hint, id, rows = 3, ...rest }, ref) {
-  return <Field label={label} error={error} hint={hint} id={id} control={(a11y) => <textarea ref={ref} rows={rows} {...a11y} className={`${controlClass(error)} py-2`} {...rest} />} />;
+export const TextField = forwardRef<HTMLInputElement, FieldProps & InputHTMLAttributes<HTMLInputElement>>(function TextField({ label, error, hint, id, ...rest }, ref) {
+  return (
+    <Field label={label} error={error} hint={hint} id={id}>
+      {(a11y) => <Input ref={ref} {...a11y} {...rest} />}
+    </Field>
+  );
+});
+
+export const TextAreaField = forwardRef<HTMLTextAreaElement, FieldProps & TextareaHTMLAttributes<HTMLTextAreaElement>>(function TextAreaField({ label, error, hint, id, ...rest }, ref) {
+  return (
+    <Field label={label} error={error} hint={hint} id={id}>
+      {(a11y) => <Textarea ref={ref} {...a11y} {...rest} />}
+    </Field>
+  );
 });

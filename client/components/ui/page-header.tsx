@@ -4,8 +4,8 @@ export function PageHeader({ title, subtitle, actions }: { title: string; subtit
   return (
     <header className="mb-5 flex flex-wrap items-end justify-between gap-3">
       <div>
-        <h1 className="text-2xl font-extrabold text-tide-900">{title}</h1>
-        {subtitle ? <p className="mt-1 text-tide-700">{subtitle}</p> : null}
+        <h1 className="text-2xl font-extrabold text-ink">{title}</h1>
+        {subtitle ? <p className="mt-1 text-ink-muted">{subtitle}</p> : null}
       </div>
       {actions ? <div className="flex gap-2">{actions}</div> : null}
     </header>

@@ -19,8 +19,8 @@ function Thumb({ file, onRemove }: { file: File; onRemove: () => void }) {
   useEffect(() => () => URL.revokeObjectURL(url), [url]);
   return (
     <li className="relative">
-      <img src={url} alt={`Chosen photo ${file.name}`} className="size-20 rounded-xl object-cover ring-1 ring-tide-100" />
-      <button type="button" onClick={onRemove} aria-label={`Remove ${file.name}`} className="absolute -top-2 -right-2 grid size-8 place-items-center rounded-full bg-tide-900 text-sm font-bold text-white">
+      <img src={url} alt={`Chosen photo ${file.name}`} className="size-20 rounded-xl object-cover ring-1 ring-line" />
+      <button type="button" onClick={onRemove} aria-label={`Remove ${file.name}`} className="absolute -top-2 -right-2 grid size-8 place-items-center rounded-full bg-ink text-sm font-bold text-surface">
         ×
       </button>
     </li>
@@ -33,8 +33,8 @@ export function PhotoPicker({ label, hint, files, onChange, disabled }: { label:
   const [error, setError] = useState<string>();
   return (
     <div>
-      <p className="text-sm font-bold text-tide-800">{label}</p>
-      {hint ? <p className="text-sm text-tide-600">{hint}</p> : null}
+      <p className="text-sm font-bold text-ink-soft">{label}</p>
+      {hint ? <p className="text-sm text-ink-muted">{hint}</p> : null}
       <div className="mt-2 flex flex-wrap items-center gap-3">
         {files.length ? (
           <ul className="flex flex-wrap gap-3">
@@ -44,7 +44,7 @@ export function PhotoPicker({ label, hint, files, onChange, disabled }: { label:
           </ul>
         ) : null}
         {files.length < PHOTO_MAX_FILES ? (
-          <label htmlFor={id} className={`inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-white px-4 font-bold text-tide-800 ring-1 ring-tide-200 hover:bg-tide-50 ${disabled ? 'pointer-events-none opacity-50' : ''}`}>
+          <label htmlFor={id} className={`inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-surface px-4 font-bold text-ink-soft ring-1 ring-line-strong hover:bg-tint ${disabled ? 'pointer-events-none opacity-50' : ''}`}>
             <CameraIcon /> {files.length ? 'Add another' : 'Add a photo'}
           </label>
         ) : null}
@@ -64,7 +64,7 @@ export function PhotoPicker({ label, hint, files, onChange, disabled }: { label:
           }}
         />
       </div>
-      {error ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error}</p> : null}
+      {error ? <p role="alert" className="mt-1 text-sm font-semibold text-danger">{error}</p> : null}
     </div>
   );
 }

@@ -1,9 +1,9 @@
 import type { Verdict } from '@client/lib/bands';
 
 const TONE: Record<Verdict['level'], string> = {
-  ok: 'text-kelp-700',
-  caution: 'text-amber-700',
-  danger: 'text-ember-700',
+  ok: 'text-ok',
+  caution: 'text-watch',
+  danger: 'text-danger',
 };
 
 /** A shape per level (circle, triangle, octagon) so the meaning never rests on colour alone. */

@@ -1,13 +1,12 @@
 import { zodResolver } from '@hookform/resolvers/zod';
 import { useForm } from 'react-hook-form';
-import { Link } from 'react-router';
 import type { z } from 'zod';
 import { ROLE_LABELS } from '@shared/constants/roles';
 import { newAccountFormSchema } from '@shared/schemas/auth.schema';
-import { Button } from '@client/components/ui/button';
+import { Button, ButtonLink } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { TextField } from '@client/components/ui/field';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { ApiError } from '@client/lib/api-client';
 import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import { useMe } from '../api/me';
@@ -24,14 +23,14 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
   const { formError, attempt } = useSaveErrors(fieldsIn(['displayName', 'password']), setError);
 
   if (!token) return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
-  if (preview.isPending) return <Spinner label="Checking your invitation…" />;
+  if (preview.isPending) return <Loading label="Checking your invitation…" />;
   if (preview.isError) {
     const message = preview.error instanceof ApiError && preview.error.isNotFound ? 'This invitation link is not valid. Check that you copied all of it.' : preview.error.message;
     return <Notice tone="error">{message}</Notice>;
   }
   const invite = preview.data;
   const intro = (
-    <p className="mb-4 text-tide-800">
+    <p className="mb-4 text-ink-soft">
       <strong>{invite.clubName}</strong> invites <strong>{invite.email}</strong> to join as {ROLE_LABELS[invite.role].toLowerCase()}.
     </p>
   );
@@ -53,9 +52,9 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
         ) : (
           <>
             <Notice>You already have a Shoalwise account. Sign in as {invite.email}, then open this link again.</Notice>
-            <Link to={`/sign-in?next=${encodeURIComponent(`/invites/accept?token=${token}`)}`} className="inline-flex min-h-touch w-full items-center justify-center rounded-full bg-tide-700 font-bold text-white">
+            <ButtonLink to={`/sign-in?next=${encodeURIComponent(`/invites/accept?token=${token}`)}`} className="w-full">
               Sign in
-            </Link>
+            </ButtonLink>
           </>
         )}
       </div>

@@ -6,7 +6,8 @@ import { SALINITY_DISPLAYS, TEMPERATURE_UNITS, VOLUME_UNITS } from '@shared/cons
 import { updateProfileSchema } from '@shared/schemas/auth.schema';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
-import { SelectField, TextField } from '@client/components/ui/field';
+import { TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
 import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import type { MeUser } from '../api/me';
 import { useUpdateProfile } from '../api/mutations';
@@ -46,7 +47,7 @@ export function ProfileForm({ user }: { user: MeUser }) {
       <SelectField label="Experience" options={options('experienceLevel', EXPERIENCE_LEVELS)} error={e.experienceLevel?.message} {...register('experienceLevel')} />
       <TextField label="Time zone" hint="Used for reminders and the dates on your tests, e.g. Europe/London." error={e.timeZone?.message} {...register('timeZone')} />
       <fieldset className="grid gap-4 sm:grid-cols-3">
-        <legend className="mb-2 text-sm font-extrabold uppercase tracking-wide text-tide-600">Units I read</legend>
+        <legend className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">Units I read</legend>
         <SelectField label="Temperature" options={options('temperatureUnit', TEMPERATURE_UNITS)} {...register('temperatureUnit')} />
         <SelectField label="Tank volume" options={options('volumeUnit', VOLUME_UNITS)} {...register('volumeUnit')} />
         <SelectField label="Salinity" options={options('salinityDisplay', SALINITY_DISPLAYS)} {...register('salinityDisplay')} />

@@ -30,7 +30,7 @@ export function SignInForm({ onDone }: { onDone: () => void }) {
       <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
       <Button type="submit" busy={formState.isSubmitting} className="w-full">Sign in</Button>
       <p className="text-center text-sm">
-        <Link to="/forgot-password" className="font-bold text-tide-700 underline">Forgot your password?</Link>
+        <Link to="/forgot-password" className="font-bold text-link underline">Forgot your password?</Link>
       </p>
     </form>
   );

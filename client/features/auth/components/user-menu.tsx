@@ -12,12 +12,12 @@ export function UserMenu() {
   return (
     <div className="flex items-center gap-2">
       {clubs.length > 1 ? (
-        <label className="flex items-center gap-1 text-sm text-tide-100">
+        <label className="flex items-center gap-1 text-sm text-on-chrome-muted">
           <span className="sr-only">Club</span>
           <select
             value={activeClub?.clubId}
             onChange={(e) => setActiveClubId(e.target.value)}
-            className="min-h-touch max-w-40 rounded-full border-0 bg-tide-700 px-3 text-sm font-bold text-white sm:max-w-56"
+            className="min-h-touch max-w-40 rounded-full border-0 bg-chrome-active px-3 text-sm font-bold text-on-chrome sm:max-w-56"
           >
             {clubs.map((c) => (
               <option key={c.clubId} value={c.clubId}>{c.clubName} · {ROLE_LABELS[c.role]}</option>
@@ -25,20 +25,20 @@ export function UserMenu() {
           </select>
         </label>
       ) : activeClub ? (
-        <span className="hidden text-sm font-bold text-tide-100 sm:inline">{activeClub.clubName}</span>
+        <span className="hidden text-sm font-bold text-on-chrome-muted sm:inline">{activeClub.clubName}</span>
       ) : null}
       <details className="relative">
-        <summary className="flex size-touch cursor-pointer list-none items-center justify-center rounded-full bg-tide-600 font-extrabold text-white" aria-label={`Account of ${me.user.displayName}`}>
+        <summary className="flex size-touch cursor-pointer list-none items-center justify-center rounded-full bg-chrome-active font-extrabold text-on-chrome" aria-label={`Account of ${me.user.displayName}`}>
           {me.user.displayName.slice(0, 1).toUpperCase()}
         </summary>
-        <div className="absolute right-0 z-20 mt-2 w-56 rounded-card bg-white p-2 shadow-card ring-1 ring-tide-100">
-          <p className="px-3 py-2 text-sm text-tide-700">
-            Signed in as <strong className="block text-tide-900">{me.user.displayName}</strong>
+        <div className="absolute right-0 z-20 mt-2 w-56 rounded-card bg-surface p-2 shadow-card ring-1 ring-line">
+          <p className="px-3 py-2 text-sm text-ink-muted">
+            Signed in as <strong className="block text-ink">{me.user.displayName}</strong>
           </p>
-          <Link to="/profile" className="block rounded-lg px-3 py-2 font-bold text-tide-800 hover:bg-tide-50">Profile and units</Link>
+          <Link to="/profile" className="block rounded-lg px-3 py-2 font-bold text-ink-soft hover:bg-tint">Profile and units</Link>
           <button
             type="button"
-            className="block w-full rounded-lg px-3 py-2 text-left font-bold text-tide-800 hover:bg-tide-50"
+            className="block w-full rounded-lg px-3 py-2 text-left font-bold text-ink-soft hover:bg-tint"
             onClick={async () => {
               await signOut.mutateAsync();
               navigate('/sign-in');

@@ -6,6 +6,7 @@ import { Notice } from '@client/components/ui/card';
 import { ApiError } from '@client/lib/api-client';
 import { useConcernAction, useConcernHistory, type ConcernView } from '../api/care';
 import { SeverityBadge } from '@client/components/ui/severity-badge';
+import { Input } from '@client/components/ui/field';
 
 const when = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', hour: '2-digit', minute: '2-digit' });
 
@@ -28,25 +29,25 @@ function ConcernItem({ concern, clubId, ownerId }: { concern: ConcernView; clubI
     <li className="py-3">
       <div className="flex flex-wrap items-center gap-2">
         <SeverityBadge severity={concern.severity} />
-        {concern.status === 'acknowledged' ? <span className="text-xs font-bold text-tide-600">seen by a mentor</span> : null}
-        {concern.status === 'resolved' ? <span className="text-xs font-bold text-kelp-700">resolved {concern.resolved?.byTest ? 'by a later test' : ''}</span> : null}
-        <span className="text-xs text-tide-600">{when.format(new Date(concern.raisedAt))}</span>
+        {concern.status === 'acknowledged' ? <span className="text-xs font-bold text-ink-muted">seen by a mentor</span> : null}
+        {concern.status === 'resolved' ? <span className="text-xs font-bold text-ok">resolved {concern.resolved?.byTest ? 'by a later test' : ''}</span> : null}
+        <span className="text-xs text-ink-muted">{when.format(new Date(concern.raisedAt))}</span>
       </div>
-      <p className="mt-1 font-bold text-tide-900">{concern.reason}</p>
+      <p className="mt-1 font-bold text-ink">{concern.reason}</p>
       {live && concern.nextSteps.length ? (
-        <ul className="mt-1 list-disc pl-5 text-sm text-tide-800">
+        <ul className="mt-1 list-disc pl-5 text-sm text-ink-soft">
           {concern.nextSteps.map((s) => (
             <li key={s}>{s}</li>
           ))}
         </ul>
       ) : null}
-      {concern.acknowledged?.note ? <p className="mt-1 text-sm text-tide-700">Mentor’s note: {concern.acknowledged.note}</p> : null}
-      {concern.resolved?.note && !concern.resolved.byTest ? <p className="mt-1 text-sm text-tide-700">Note: {concern.resolved.note}</p> : null}
+      {concern.acknowledged?.note ? <p className="mt-1 text-sm text-ink-muted">Mentor’s note: {concern.acknowledged.note}</p> : null}
+      {concern.resolved?.note && !concern.resolved.byTest ? <p className="mt-1 text-sm text-ink-muted">Note: {concern.resolved.note}</p> : null}
       {live ? (
         <div className="mt-2 flex flex-wrap items-center gap-2">
           <Can<AppAbility> I="resolve" this={subject}>
             <label className="sr-only" htmlFor={`note-${concern.id}`}>Note</label>
-            <input id={`note-${concern.id}`} value={note} onChange={(e) => setNote(e.target.value)} placeholder="Add a note (optional)" className="min-h-touch flex-1 rounded-xl border border-tide-200 px-3 text-sm" />
+            <Input id={`note-${concern.id}`} value={note} onChange={(e) => setNote(e.target.value)} placeholder="Add a note (optional)" className="flex-1 text-sm" />
           </Can>
           {concern.status === 'open' ? (
             <Can<AppAbility> I="acknowledge" this={subject}>
@@ -70,22 +71,22 @@ export function ConcernList({ concerns, clubId, tankId, ownerId }: { concerns: C
   const resolved = (history.data?.concerns ?? []).filter((c) => c.status === 'resolved');
   return (
     <section aria-labelledby="concerns-heading">
-      <h3 id="concerns-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">What needs attention</h3>
+      <h3 id="concerns-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">What needs attention</h3>
       {concerns.length === 0 ? (
-        <p className="mt-2 text-tide-800">Nothing flagged from the latest tests. Keep watching how the animals feed and behave too.</p>
+        <p className="mt-2 text-ink-soft">Nothing flagged from the latest tests. Keep watching how the animals feed and behave too.</p>
       ) : (
-        <ul className="divide-y divide-tide-100">
+        <ul className="divide-y divide-line">
           {concerns.map((c) => (
             <ConcernItem key={c.id} concern={c} clubId={clubId} ownerId={ownerId} />
           ))}
         </ul>
       )}
-      <button type="button" className="mt-2 text-sm font-bold text-tide-700 underline" onClick={() => setShowHistory((v) => !v)}>
+      <button type="button" className="mt-2 text-sm font-bold text-link underline" onClick={() => setShowHistory((v) => !v)}>
         {showHistory ? 'Hide resolved concerns' : 'Show resolved concerns'}
       </button>
       {showHistory ? (
-        history.isPending ? <p className="text-sm text-tide-600">Loading…</p> : resolved.length === 0 ? <p className="text-sm text-tide-600">None resolved yet.</p> : (
-          <ul aria-label="Resolved concerns" className="divide-y divide-tide-100">
+        history.isPending ? <p className="text-sm text-ink-muted">Loading…</p> : resolved.length === 0 ? <p className="text-sm text-ink-muted">None resolved yet.</p> : (
+          <ul aria-label="Resolved concerns" className="divide-y divide-line">
             {resolved.map((c) => (
               <ConcernItem key={c.id} concern={c} clubId={clubId} ownerId={ownerId} />
             ))}

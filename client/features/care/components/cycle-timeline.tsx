@@ -17,8 +17,8 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
   if (phase === 'established' && !setback) {
     return (
       <section aria-labelledby="cycle-heading">
-        <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Nitrogen cycle</h3>
-        <p className="mt-2 text-sm text-tide-800">Established: the cycle is behind this tank. If ammonia or nitrite come back, it shows here as a setback.</p>
+        <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Nitrogen cycle</h3>
+        <p className="mt-2 text-sm text-ink-soft">Established: the cycle is behind this tank. If ammonia or nitrite come back, it shows here as a setback.</p>
       </section>
     );
   }
@@ -26,17 +26,17 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
   const current = STEPS[index];
   return (
     <section aria-labelledby="cycle-heading">
-      <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Nitrogen cycle</h3>
+      <h3 id="cycle-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Nitrogen cycle</h3>
       {setback ? (
-        <p className="mt-2 rounded-xl bg-ember-100 px-3 py-2 font-bold text-ember-700">
+        <p className="mt-2 rounded-xl bg-danger-soft px-3 py-2 font-bold text-danger">
           ▲ Setback: ammonia or nitrite is back on a tank that had cycled. Stop adding animals, feed lightly and test daily.
         </p>
       ) : (
         <ol className="mt-3 grid grid-cols-5 gap-1" aria-label="Cycle stages">
           {STEPS.map((s, i) => (
             <li key={s.stage} aria-current={i === index ? 'step' : undefined} className="text-center">
-              <div className={`h-2 rounded-full ${i < index ? 'bg-kelp-500' : i === index ? 'bg-tide-500' : 'bg-tide-100'}`} />
-              <p className={`mt-1 text-[11px] leading-tight sm:text-xs ${i === index ? 'font-extrabold text-tide-900' : 'text-tide-600'}`}>
+              <div className={`h-2 rounded-full ${i < index ? 'bg-ok' : i === index ? 'bg-accent' : 'bg-tint-strong'}`} />
+              <p className={`mt-1 text-[11px] leading-tight sm:text-xs ${i === index ? 'font-extrabold text-ink' : 'text-ink-muted'}`}>
                 {i === index ? '▼ ' : ''}
                 {s.label}
               </p>
@@ -44,9 +44,9 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
           ))}
         </ol>
       )}
-      {current ? <p className="mt-2 text-sm text-tide-800">{current.hint}</p> : null}
+      {current ? <p className="mt-2 text-sm text-ink-soft">{current.hint}</p> : null}
       {cycle.projectedDoneAt ? (
-        <p className="mt-1 text-sm text-tide-700">
+        <p className="mt-1 text-sm text-ink-muted">
           {Date.parse(cycle.projectedDoneAt.likely) <= openedAt ? (
             <>Could finish <strong>any day now</strong>, or as late as {formatDay(cycle.projectedDoneAt.latest)}.</>
           ) : (
@@ -59,7 +59,7 @@ export function CycleTimeline({ cycle, typical, phase }: { cycle: CareSummary['c
         </p>
       ) : null}
       {cycle.evidence.length ? (
-        <details className="mt-1 text-sm text-tide-700">
+        <details className="mt-1 text-sm text-ink-muted">
           <summary className="cursor-pointer font-bold">Why we think so</summary>
           <ul className="mt-1 list-disc pl-5">
             {cycle.evidence.map((e) => (

@@ -9,13 +9,13 @@ export function DueTests({ due }: { due: CareSummary['due'] }) {
   if (sorted.length === 0) return null;
   return (
     <section aria-labelledby="due-heading">
-      <h3 id="due-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Tests to do</h3>
+      <h3 id="due-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Tests to do</h3>
       <ul className="mt-2 flex flex-wrap gap-2">
         {sorted.map((d) => (
           <li
             key={d.parameter}
             className={`rounded-full px-3 py-1 text-sm font-bold ring-1 ${
-              d.status === 'overdue' ? 'bg-ember-100 text-ember-700 ring-ember-500/30' : d.status === 'due' ? 'bg-amber-100 text-amber-700 ring-amber-500/30' : 'bg-white text-tide-700 ring-tide-100'
+              d.status === 'overdue' ? 'bg-danger-soft text-danger ring-danger/30' : d.status === 'due' ? 'bg-watch-soft text-watch ring-watch/30' : 'bg-surface text-ink-muted ring-line'
             }`}
           >
             {parameterInfo(d.parameter).label}:{' '}

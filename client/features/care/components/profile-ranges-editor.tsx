@@ -2,6 +2,7 @@ import { useState } from 'react';
 import { parameterInfo, provenanceLabel, type AnyParameterKey, type CareProfile } from '@shared/care';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
+import { Input, TextField } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { useSaveProfile } from '@client/lib/care-profiles';
 
@@ -29,7 +30,7 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
   };
   const dirty = JSON.stringify(draft) !== JSON.stringify(profile);
   const cell = (key: AnyParameterKey, which: 'ideal' | 'caution', i: 0 | 1) => (
-    <input
+    <Input
       type="number"
       inputMode="decimal"
       step="any"
@@ -37,14 +38,14 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
       disabled={!editable}
       value={draft.ranges[key]![which][i]}
       onChange={(e) => setBand(key, which, i, e.target.value)}
-      className="w-20 rounded-lg border border-tide-200 px-2 py-1 text-right disabled:border-transparent disabled:bg-transparent"
+      className="w-20 px-2 text-right disabled:border-transparent disabled:bg-transparent disabled:text-ink"
     />
   );
   return (
     <div className="space-y-4">
       <div className="overflow-x-auto">
         <table className="w-full text-sm">
-          <thead className="text-left text-tide-600">
+          <thead className="text-left text-ink-muted">
             <tr>
               <th className="py-2 pr-3">Parameter</th>
               <th className="pr-3">Fine between</th>
@@ -52,15 +53,15 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
               <th>Where the numbers come from</th>
             </tr>
           </thead>
-          <tbody className="divide-y divide-tide-100">
+          <tbody className="divide-y divide-line">
             {keys.map((key) => {
               const r = draft.ranges[key]!;
               return (
                 <tr key={key}>
-                  <th scope="row" className="py-2 pr-3 text-left font-bold text-tide-900">{parameterInfo(key).label} <span className="font-normal text-tide-600">({r.unit})</span></th>
+                  <th scope="row" className="py-2 pr-3 text-left font-bold text-ink">{parameterInfo(key).label} <span className="font-normal text-ink-muted">({r.unit})</span></th>
                   <td className="pr-3 whitespace-nowrap">{cell(key, 'ideal', 0)} – {cell(key, 'ideal', 1)}</td>
                   <td className="pr-3 whitespace-nowrap">{cell(key, 'caution', 0)} – {cell(key, 'caution', 1)}</td>
-                  <td className="text-tide-700">{provenanceLabel(r.provenance)}</td>
+                  <td className="text-ink-muted">{provenanceLabel(r.provenance)}</td>
                 </tr>
               );
             })}
@@ -69,10 +70,9 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
       </div>
       {editable ? (
         <div className="flex flex-wrap items-end gap-2">
-          <label className="block grow text-sm font-bold text-tide-800">
-            Why the change (kept in the history)
-            <input value={note} onChange={(e) => setNote(e.target.value)} className="mt-1 block min-h-touch w-full rounded-xl border border-tide-200 px-3 font-normal" />
-          </label>
+          <div className="grow">
+            <TextField label="Why the change (kept in the history)" value={note} onChange={(e) => setNote(e.target.value)} />
+          </div>
           <Button
             disabled={!dirty}
             busy={save.isPending}

@@ -30,28 +30,28 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
   };
   return (
     <section aria-labelledby="ready-heading" className="space-y-3">
-      <h3 id="ready-heading" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Ready for animals?</h3>
-      <p className={`rounded-xl px-3 py-2 font-bold ${readiness.ready ? 'bg-kelp-100 text-kelp-700' : 'bg-tide-50 text-tide-800'}`}>
+      <h3 id="ready-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Ready for animals?</h3>
+      <p className={`rounded-xl px-3 py-2 font-bold ${readiness.ready ? 'bg-ok-soft text-ok' : 'bg-tint text-ink-soft'}`}>
         {readiness.ready ? '✔ Ready: your mentor has signed this tank off.' : 'Not ready yet. Every line below needs a tick first.'}
       </p>
       <ul className="space-y-2">
         {readiness.items.map((item) => (
           <li key={item.key} className="flex gap-2 text-sm">
-            <span aria-hidden className={`font-extrabold ${item.met ? 'text-kelp-700' : 'text-tide-400'}`}>{item.met ? '✔' : '○'}</span>
+            <span aria-hidden className={`font-extrabold ${item.met ? 'text-ok' : 'text-ink-muted'}`}>{item.met ? '✔' : '○'}</span>
             <span>
-              <strong className="text-tide-900">{item.label}</strong>
+              <strong className="text-ink">{item.label}</strong>
               <span className="sr-only">{item.met ? ' (done)' : ' (not yet)'}</span>
-              <span className="block text-tide-700">{item.detail}</span>
+              <span className="block text-ink-muted">{item.detail}</span>
             </span>
           </li>
         ))}
       </ul>
       <Can<AppAbility> I="update" this={tank}>
-        <fieldset className="space-y-2 rounded-xl bg-sand-50 p-3">
-          <legend className="text-sm font-bold text-tide-800">Your checklist</legend>
+        <fieldset className="space-y-2 rounded-xl bg-canvas p-3">
+          <legend className="text-sm font-bold text-ink-soft">Your checklist</legend>
           {CHECKS.map((c) => (
-            <label key={c.key} className="flex min-h-touch items-center gap-3 text-sm text-tide-900">
-              <input type="checkbox" className="size-5 accent-tide-700" checked={readiness.checklist[c.key]} disabled={save.isPending} onChange={(e) => void toggle(c.key, e.target.checked)} />
+            <label key={c.key} className="flex min-h-touch items-center gap-3 text-sm text-ink">
+              <input type="checkbox" className="size-5 accent-accent" checked={readiness.checklist[c.key]} disabled={save.isPending} onChange={(e) => void toggle(c.key, e.target.checked)} />
               {c.label}
             </label>
           ))}

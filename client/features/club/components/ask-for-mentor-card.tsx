@@ -3,7 +3,8 @@ import { useId, useState } from 'react';
 import { MENTOR_REQUEST_NOTE_MAX } from '@shared/constants/mentorship';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
+import { TextAreaField } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { relativeTime } from '@client/lib/relative-time';
 import { useSocketEvent } from '@client/lib/socket';
@@ -28,20 +29,15 @@ function AskForm({ clubId, userId }: { clubId: string; userId: string }) {
       }}
     >
       {ask.isError ? <Notice tone="error">{error?.message ?? 'Could not send your request. Check your connection and try again.'}</Notice> : null}
-      <div>
-        <label htmlFor={noteId} className="block text-sm font-bold text-tide-800">What would you like help with? (optional)</label>
-        <textarea
-          id={noteId}
-          value={note}
-          maxLength={MENTOR_REQUEST_NOTE_MAX}
-          onChange={(e) => setNote(e.target.value)}
-          rows={3}
-          placeholder="e.g. My first tropical tank, 60 litres, cycling since last week."
-          aria-invalid={error?.fieldMessage('note') ? true : undefined}
-          className="mt-1 block w-full rounded-xl border border-tide-200 bg-white px-3 py-2 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:ring-2 focus:ring-tide-200 focus:outline-none"
-        />
-        {error?.fieldMessage('note') ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error.fieldMessage('note')}</p> : null}
-      </div>
+      <TextAreaField
+        id={noteId}
+        label="What would you like help with? (optional)"
+        value={note}
+        maxLength={MENTOR_REQUEST_NOTE_MAX}
+        onChange={(e) => setNote(e.target.value)}
+        placeholder="e.g. My first tropical tank, 60 litres, cycling since last week."
+        error={error?.fieldMessage('note')}
+      />
       {options.length ? (
         <MentorSelect id={`${noteId}-mentor`} label="Someone in mind? (optional)" placeholder="Let the admins choose" value={preferred} onChange={setPreferred} options={options} />
       ) : null}
@@ -59,21 +55,21 @@ export function AskForMentorCard({ clubId, userId }: { clubId: string; userId: s
       void qc.invalidateQueries({ queryKey: mentorRequestKeys.mine(clubId) });
     }
   });
-  if (mine.isPending) return <Card><Spinner label="Checking your mentoring…" /></Card>;
+  if (mine.isPending) return <Card><Loading label="Checking your mentoring…" /></Card>;
   if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
   const { request, mentor } = mine.data;
   if (mentor) {
     return (
       <Card>
-        <p className="text-tide-800"><strong className="text-tide-950">{mentor.displayName}</strong> is your mentor. They see your tank’s tests and can answer your questions.</p>
+        <p className="text-ink-soft"><strong className="text-ink">{mentor.displayName}</strong> is your mentor. They see your tank’s tests and can answer your questions.</p>
       </Card>
     );
   }
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">{request?.state === 'open' ? 'Your mentor request' : 'Ask for a mentor'}</h2>
+      <h2 className="text-lg font-extrabold text-ink">{request?.state === 'open' ? 'Your mentor request' : 'Ask for a mentor'}</h2>
       {request?.state === 'open' ? (
-        <div className="mt-2 space-y-2 text-tide-800">
+        <div className="mt-2 space-y-2 text-ink-soft">
           <Notice tone="info">Sent {relativeTime(request.createdAt)}. A club admin will pair you with a mentor; you’ll get a notification.</Notice>
           {request.preferredMentor ? <p className="text-sm">You asked for {request.preferredMentor.displayName}.</p> : null}
           {request.note ? <p className="text-sm">“{request.note}”</p> : null}
@@ -85,7 +81,7 @@ export function AskForMentorCard({ clubId, userId }: { clubId: string; userId: s
               <Notice tone="warning">Your last request was declined{request.declineReason ? `: ${request.declineReason}` : '.'} You can ask again.</Notice>
             </div>
           ) : (
-            <p className="mt-1 text-tide-700">An experienced keeper from the club watches your tests with you and answers your questions.</p>
+            <p className="mt-1 text-ink-muted">An experienced keeper from the club watches your tests with you and answers your questions.</p>
           )}
           <AskForm clubId={clubId} userId={userId} />
         </>

@@ -6,8 +6,9 @@ import { ROLE_LABELS, ROLES } from '@shared/constants/roles';
 import { createInviteSchema } from '@shared/schemas/club.schema';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
-import { SelectField, TextField } from '@client/components/ui/field';
-import { Spinner } from '@client/components/ui/spinner';
+import { TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
+import { Loading } from '@client/components/ui/skeleton';
 import { formatDay } from '@client/lib/date-format';
 import { fieldsIn, placeServerErrors } from '@client/lib/form-errors';
 import { useInvites, useResendInvite, useRevokeInvite, useSendInvite } from '../api/club';
@@ -25,7 +26,7 @@ export function InvitePanel({ clubId }: { clubId: string }) {
 
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">Invite someone</h2>
+      <h2 className="text-lg font-extrabold text-ink">Invite someone</h2>
       <form noValidate className="mt-3 grid gap-3 sm:grid-cols-[1fr_12rem_auto] sm:items-end" onSubmit={handleSubmit(async (v) => {
         setNotice(undefined);
         try {
@@ -43,16 +44,16 @@ export function InvitePanel({ clubId }: { clubId: string }) {
       </form>
       {notice ? <div className="mt-3"><Notice tone={notice.tone}>{notice.text}</Notice></div> : null}
 
-      <h3 className="mt-6 text-sm font-extrabold uppercase tracking-wide text-tide-600">Waiting for an answer</h3>
-      {invites.isPending ? <Spinner /> : invites.isError ? <Notice tone="error">{invites.error.message}</Notice> : invites.data.invites.length === 0 ? (
-        <p className="mt-2 text-tide-700">No open invitations.</p>
+      <h3 className="mt-6 text-sm font-extrabold uppercase tracking-wide text-ink-muted">Waiting for an answer</h3>
+      {invites.isPending ? <Loading label="Loading…" /> : invites.isError ? <Notice tone="error">{invites.error.message}</Notice> : invites.data.invites.length === 0 ? (
+        <p className="mt-2 text-ink-muted">No open invitations.</p>
       ) : (
-        <ul className="mt-2 divide-y divide-tide-100">
+        <ul className="mt-2 divide-y divide-line">
           {invites.data.invites.map((i) => (
             <li key={i.id} className="flex flex-wrap items-center justify-between gap-2 py-3">
               <div>
-                <p className="font-bold text-tide-900">{i.email}</p>
-                <p className="text-sm text-tide-600">
+                <p className="font-bold text-ink">{i.email}</p>
+                <p className="text-sm text-ink-muted">
                   {ROLE_LABELS[i.role]} · {i.state === 'expired' ? 'expired' : `link works until ${formatDay(i.expiresAt)}`}
                 </p>
               </div>

@@ -2,7 +2,8 @@ import { useState } from 'react';
 import { ROLE_LABELS } from '@shared/constants/roles';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
+import { Select } from '@client/components/ui/select';
 import { ApiError } from '@client/lib/api-client';
 import { useAssignMentor, useAssignments, useEndAssignment, useMembers, type ClubMember } from '../api/club';
 
@@ -13,7 +14,7 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
   const assign = useAssignMentor(clubId);
   const end = useEndAssignment(clubId);
   const [error, setError] = useState<string>();
-  if (members.isPending || assignments.isPending) return <Card><Spinner /></Card>;
+  if (members.isPending || assignments.isPending) return <Card><Loading label="Loading…" /></Card>;
   if (members.isError) return <Notice tone="error">{members.error.message}</Notice>;
   const people = members.data.members;
   const byId = new Map(people.map((p) => [p.userId, p]));
@@ -32,18 +33,18 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
 
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">Members ({people.length})</h2>
+      <h2 className="text-lg font-extrabold text-ink">Members ({people.length})</h2>
       {error ? <div className="mt-3"><Notice tone="error">{error}</Notice></div> : null}
-      <ul className="mt-3 divide-y divide-tide-100">
+      <ul className="mt-3 divide-y divide-line">
         {people.map((p) => {
           const a = mentorOf(p.userId);
           return (
             <li key={p.membershipId} className="flex flex-wrap items-center justify-between gap-2 py-3">
               <div>
-                <p className="font-bold text-tide-900">
-                  {p.displayName} {p.status === 'suspended' ? <span className="ml-1 rounded-full bg-ember-100 px-2 text-xs text-ember-700">suspended</span> : null}
+                <p className="font-bold text-ink">
+                  {p.displayName} {p.status === 'suspended' ? <span className="ml-1 rounded-full bg-danger-soft px-2 text-xs text-danger">suspended</span> : null}
                 </p>
-                <p className="text-sm text-tide-600">
+                <p className="text-sm text-ink-muted">
                   {ROLE_LABELS[p.role]}
                   {p.email ? ` · ${p.email}` : ''}
                   {p.menteeCount !== undefined ? ` · mentoring ${p.menteeCount} of ${p.mentorCapacity}` : ''}
@@ -53,12 +54,12 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
               {isAdmin && p.role === 'member' && p.status === 'active' ? (
                 <div className="flex items-center gap-2">
                   <label className="sr-only" htmlFor={`mentor-${p.userId}`}>Mentor for {p.displayName}</label>
-                  <select id={`mentor-${p.userId}`} className="min-h-touch rounded-xl border border-tide-200 bg-white px-2" value={a?.mentorId ?? ''} onChange={(e) => e.target.value && void pair(p, e.target.value)}>
+                  <Select id={`mentor-${p.userId}`} className="" value={a?.mentorId ?? ''} onChange={(e) => e.target.value && void pair(p, e.target.value)}>
                     <option value="">{a ? 'Change mentor…' : 'Choose a mentor…'}</option>
                     {mentors.filter((m) => m.userId !== p.userId).map((m) => (
                       <option key={m.userId} value={m.userId}>{m.displayName} ({m.menteeCount ?? 0}/{m.mentorCapacity})</option>
                     ))}
-                  </select>
+                  </Select>
                   {a ? (
                     <Button variant="ghost" onClick={() => window.confirm(`End ${byId.get(a.mentorId)?.displayName ?? 'the mentor'}'s mentoring of ${p.displayName}? They keep read-only access for 30 days.`) && end.mutate(a.id)}>End</Button>
                   ) : null}

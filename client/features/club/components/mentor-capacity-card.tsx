@@ -2,6 +2,7 @@ import { useId, useState } from 'react';
 import { MAX_MENTOR_CAPACITY } from '@shared/constants/mentorship';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
+import { Input } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { useMembers } from '../api/club';
 import { useSetCapacity } from '../api/mentor-requests';
@@ -29,22 +30,11 @@ function CapacityForm(p: { clubId: string; userId: string; capacity: number; loa
         }}
       >
         <div>
-          <label htmlFor={id} className="block text-sm font-bold text-tide-800">Mentees I can take on</label>
-          <input
-            id={id}
-            type="number"
-            inputMode="numeric"
-            min={0}
-            max={MAX_MENTOR_CAPACITY}
-            step={1}
-            value={value}
-            onChange={(e) => setValue(e.target.value)}
-            aria-describedby={`${id}-hint`}
-            className="mt-1 block min-h-touch w-28 rounded-xl border border-tide-200 bg-white px-3 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:ring-2 focus:ring-tide-200 focus:outline-none"
-          />
+          <label htmlFor={id} className="block text-sm font-bold text-ink-soft">Mentees I can take on</label>
+          <Input id={id} type="number" inputMode="numeric" min={0} max={MAX_MENTOR_CAPACITY} step={1} value={value} onChange={(e) => setValue(e.target.value)} aria-describedby={`${id}-hint`} className="mt-1 w-28" />
         </div>
         <Button type="submit" variant="secondary" busy={save.isPending}>Save</Button>
-        <p id={`${id}-hint`} className="w-full text-sm text-tide-600">
+        <p id={`${id}-hint`} className="w-full text-sm text-ink-muted">
           You mentor {p.load} now. Lowering the number keeps your current mentees; it only stops new ones. 0 to {MAX_MENTOR_CAPACITY}.
         </p>
       </form>

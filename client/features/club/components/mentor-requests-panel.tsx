@@ -4,7 +4,8 @@ import { DECLINE_REASON_MAX } from '@shared/constants/mentorship';
 import type { MentorRequestView } from '@shared/schemas/notification-views';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
+import { TextAreaField } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { relativeTime } from '@client/lib/relative-time';
 import { useSocketEvent } from '@client/lib/socket';
@@ -28,12 +29,12 @@ function RequestRow({ clubId, request, members }: { clubId: string; request: Men
 
   return (
     <li className="py-4">
-      <p className="font-bold text-tide-900">{name}</p>
-      <p className="text-sm text-tide-600">
+      <p className="font-bold text-ink">{name}</p>
+      <p className="text-sm text-ink-muted">
         Asked {relativeTime(request.createdAt)}
         {request.preferredMentor ? ` · would like ${request.preferredMentor.displayName}` : ''}
       </p>
-      {request.note ? <p className="mt-1 text-tide-800">“{request.note}”</p> : null}
+      {request.note ? <p className="mt-1 text-ink-soft">“{request.note}”</p> : null}
       {error ? <div className="mt-2"><Notice tone="error">{messageOf(error)}</Notice></div> : null}
       {!declining ? (
         <div className="mt-3 grid gap-2 sm:grid-cols-[1fr_auto_auto] sm:items-end">
@@ -49,16 +50,15 @@ function RequestRow({ clubId, request, members }: { clubId: string; request: Men
             decline.mutate({ id: request.id, reason: reason.trim() });
           }}
         >
-          <label htmlFor={`${id}-reason`} className="block text-sm font-bold text-tide-800">Why? {name} will see this.</label>
-          <textarea
+          <TextAreaField
             id={`${id}-reason`}
+            label={`Why? ${name} will see this.`}
             required
             maxLength={DECLINE_REASON_MAX}
             rows={2}
             value={reason}
             onChange={(e) => setReason(e.target.value)}
             placeholder="e.g. Every mentor is full until March; please ask again then."
-            className="block w-full rounded-xl border border-tide-200 bg-white px-3 py-2 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:ring-2 focus:ring-tide-200 focus:outline-none"
           />
           <div className="flex flex-wrap gap-2">
             <Button type="submit" variant="danger" disabled={!reason.trim()} busy={decline.isPending}>Decline {name}’s request</Button>
@@ -81,15 +81,15 @@ export function MentorRequestsPanel({ clubId }: { clubId: string }) {
   const open = requests.data?.requests ?? [];
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">Open mentor requests{open.length ? ` (${open.length})` : ''}</h2>
+      <h2 className="text-lg font-extrabold text-ink">Open mentor requests{open.length ? ` (${open.length})` : ''}</h2>
       {requests.isPending || members.isPending ? (
-        <div className="mt-3"><Spinner /></div>
+        <div className="mt-3"><Loading label="Loading…" /></div>
       ) : requests.isError ? (
         <div className="mt-3"><Notice tone="error">{requests.error.message}</Notice></div>
       ) : open.length === 0 ? (
-        <p className="mt-2 text-tide-700">No one is waiting. When a member asks for a mentor, the request shows up here.</p>
+        <p className="mt-2 text-ink-muted">No one is waiting. When a member asks for a mentor, the request shows up here.</p>
       ) : (
-        <ul className="mt-1 divide-y divide-tide-100">
+        <ul className="mt-1 divide-y divide-line">
           {open.map((r) => (
             <RequestRow key={r.id} clubId={clubId} request={r} members={members.data?.members ?? []} />
           ))}

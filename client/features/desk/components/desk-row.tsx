@@ -2,8 +2,9 @@ import { useState } from 'react';
 import { Link } from 'react-router';
 import { parameterInfo, isParameterKey } from '@shared/care';
 import type { DeskRow as Row } from '@shared/schemas/desk.schema';
-import { Button } from '@client/components/ui/button';
+import { Button, ButtonLink } from '@client/components/ui/button';
 import { SeverityBadge } from '@client/components/ui/severity-badge';
+import { Input } from '@client/components/ui/field';
 import { Sparkline } from './sparkline';
 
 const STAGE_WORDS: Record<Row['cycleStage'], string> = {
@@ -45,20 +46,20 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
   return (
     <li
       data-tank-id={row.tankId}
-      className={`rounded-card bg-white p-4 shadow-card transition-shadow duration-700 ${highlighted ? 'ring-4 ring-amber-500/60' : 'ring-0'}`}
+      className={`rounded-card bg-surface p-4 shadow-card transition-shadow duration-700 ${highlighted ? 'ring-4 ring-watch/60' : 'ring-0'}`}
     >
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
-          <h2 className="text-lg font-extrabold text-tide-900">
+          <h2 className="text-lg font-extrabold text-ink">
             <Link to={`/tanks/${row.tankId}`} className="hover:underline">{row.name}</Link>
-            <span className="ml-2 text-sm font-semibold text-tide-600">{row.owner.displayName}</span>
+            <span className="ml-2 text-sm font-semibold text-ink-muted">{row.owner.displayName}</span>
           </h2>
-          <p className="mt-0.5 text-sm text-tide-700">
-            {row.phase === 'established' && row.cycleStage !== 'setback' ? 'established' : STAGE_WORDS[row.cycleStage]} · <span className={last.stale ? 'font-bold text-ember-700' : ''}>{last.text}</span>
+          <p className="mt-0.5 text-sm text-ink-muted">
+            {row.phase === 'established' && row.cycleStage !== 'setback' ? 'established' : STAGE_WORDS[row.cycleStage]} · <span className={last.stale ? 'font-bold text-danger' : ''}>{last.text}</span>
             {row.unansweredQuestions ? (
               <>
                 {' · '}
-                <Link to={`/questions?tankId=${row.tankId}`} className="font-bold text-tide-800 underline">
+                <Link to={`/questions?tankId=${row.tankId}`} className="font-bold text-ink-soft underline">
                   {row.unansweredQuestions} unanswered question{row.unansweredQuestions === 1 ? '' : 's'}
                 </Link>
               </>
@@ -68,7 +69,7 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
         {row.sparkline ? (
           <div className="text-right">
             <Sparkline points={row.sparkline.points} label={`${isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : row.sparkline.parameter} over two weeks`} />
-            <p className="text-[11px] text-tide-600">{isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : ''}, 14 days</p>
+            <p className="text-[11px] text-ink-muted">{isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : ''}, 14 days</p>
           </div>
         ) : null}
       </div>
@@ -76,22 +77,22 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
         <div className="mt-3 space-y-2">
           <p className="flex flex-wrap items-center gap-2">
             <SeverityBadge severity={worst.severity} />
-            {worst.status === 'acknowledged' ? <span className="text-xs font-bold text-tide-600">seen</span> : null}
-            <span className="font-bold text-tide-900">{worst.reason}</span>
+            {worst.status === 'acknowledged' ? <span className="text-xs font-bold text-ink-muted">seen</span> : null}
+            <span className="font-bold text-ink">{worst.reason}</span>
           </p>
           <div className="flex flex-wrap items-center gap-2">
             <label className="sr-only" htmlFor={`desk-note-${row.tankId}`}>Note for {row.owner.displayName}</label>
-            <input id={`desk-note-${row.tankId}`} value={note} onChange={(e) => setNote(e.target.value)} placeholder="Note for the keeper (optional)" className="min-h-touch min-w-40 flex-1 rounded-xl border border-tide-200 px-3 text-sm" />
+            <Input id={`desk-note-${row.tankId}`} value={note} onChange={(e) => setNote(e.target.value)} placeholder="Note for the keeper (optional)" className="min-w-40 flex-1 text-sm" />
             {worst.status === 'open' ? <Button variant="secondary" busy={actions.busy} onClick={() => void run('acknowledge')}>I’ve seen it</Button> : null}
             <Button variant="secondary" busy={actions.busy} onClick={() => void run('resolve')}>Resolve</Button>
-            <Link to={`/tanks/${row.tankId}`} className="inline-flex min-h-touch items-center rounded-full px-4 font-bold text-tide-700 hover:bg-tide-50">Open tank</Link>
+            <ButtonLink variant="ghost" to={`/tanks/${row.tankId}`}>Open tank</ButtonLink>
           </div>
-          {error ? <p role="alert" className="text-sm font-semibold text-ember-700">{error}</p> : null}
+          {error ? <p role="alert" className="text-sm font-semibold text-danger">{error}</p> : null}
         </div>
       ) : (
-        <p className="mt-3 text-sm text-kelp-700">✔ Nothing flagged.</p>
+        <p className="mt-3 text-sm text-ok">✔ Nothing flagged.</p>
       )}
-      <details className="mt-2 text-xs text-tide-600">
+      <details className="mt-2 text-xs text-ink-muted">
         <summary className="cursor-pointer">Why here (score {row.score})</summary>
         <ul className="mt-1 list-disc pl-5">
           {row.why.map((p) => (

@@ -1,6 +1,6 @@
 /** A tiny line of the recent values; drawn as SVG so a row stays light. */
 export function Sparkline({ points, label }: { points: { at: string; value: number }[]; label: string }) {
-  if (points.length < 2) return <span className="text-xs text-tide-600">{points.length === 1 ? '1 test' : 'no tests'}</span>;
+  if (points.length < 2) return <span className="text-xs text-ink-muted">{points.length === 1 ? '1 test' : 'no tests'}</span>;
   const w = 96;
   const h = 28;
   const values = points.map((p) => p.value);
@@ -13,9 +13,9 @@ export function Sparkline({ points, label }: { points: { at: string; value: numb
   const lastX = w - 2;
   const lastY = h - 2 - ((values.at(-1)! - min) / span) * (h - 4);
   return (
-    <svg width={w} height={h} viewBox={`0 0 ${w} ${h}`} role="img" aria-label={label} className="text-tide-600">
+    <svg width={w} height={h} viewBox={`0 0 ${w} ${h}`} role="img" aria-label={label} className="text-ink-muted">
       <path d={d} fill="none" stroke="currentColor" strokeWidth="2" strokeLinejoin="round" strokeLinecap="round" />
-      <circle cx={lastX} cy={lastY} r="3" className="fill-ember-500" />
+      <circle cx={lastX} cy={lastY} r="3" className="fill-danger" />
     </svg>
   );
 }

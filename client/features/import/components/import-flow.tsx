@@ -1,9 +1,8 @@
 import { useState } from 'react';
-import { Link } from 'react-router';
 import { guessTarget } from '@shared/readings/csv-columns';
 import { CSV_DELIMITERS, CSV_MAX_BYTES } from '@shared/schemas/csv-import.schema';
 import type { ImportCommitResult, ImportPreview } from '@shared/schemas/tank-views';
-import { Button } from '@client/components/ui/button';
+import { Button, ButtonLink } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ApiError } from '@client/lib/api-client';
 import { previewImport, useCommitImport } from '../api/csv-import';
@@ -114,8 +113,8 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
       return (
         <div className="space-y-4">
           {step.problem ? <Notice tone="error">{step.problem}</Notice> : null}
-          <p className="text-tide-700">A CSV file from a spreadsheet: one row per test, a column with the date, and a column per reading. Nothing is saved until you have seen every row that has a problem.</p>
-          <label className="inline-flex min-h-14 cursor-pointer items-center gap-2 rounded-full bg-tide-700 px-6 text-lg font-bold text-white">
+          <p className="text-ink-muted">A CSV file from a spreadsheet: one row per test, a column with the date, and a column per reading. Nothing is saved until you have seen every row that has a problem.</p>
+          <label className="inline-flex min-h-14 cursor-pointer items-center gap-2 rounded-full bg-accent px-6 text-lg font-bold text-on-accent">
             Choose a CSV file
             <input type="file" accept=".csv,text/csv,text/plain" className="sr-only" onChange={(e) => { const f = e.target.files?.[0]; e.target.value = ''; if (f) void choose(f); }} />
           </label>
@@ -124,7 +123,7 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
     case 'mapping':
       return (
         <div className="space-y-3">
-          <p className="text-sm font-bold text-tide-700">{file?.name}{checked ? ` · ${checked.preview.rows.toLocaleString()} rows` : ''}</p>
+          <p className="text-sm font-bold text-ink-muted">{file?.name}{checked ? ` · ${checked.preview.rows.toLocaleString()} rows` : ''}</p>
           <MappingStep columns={columns} glance={file!.glance} settings={settings} problem={step.problem} busy={false} timeZone={timeZone} onChange={setSettings} onCheck={() => void check()} onBack={restart} />
         </div>
       );
@@ -156,7 +155,7 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
             {step.result.duplicates || step.preview.duplicates ? ` ${Math.max(step.result.duplicates, step.preview.duplicates).toLocaleString()} were already on the tank.` : ''}
           </Notice>
           <div className="flex flex-wrap gap-2">
-            <Link to={`/tanks/${tankId}`} className="inline-flex min-h-touch items-center rounded-full bg-tide-700 px-5 font-bold text-white">See them on the charts</Link>
+            <ButtonLink to={`/tanks/${tankId}`}>See them on the charts</ButtonLink>
             <Button variant="secondary" onClick={restart}>Import another file</Button>
           </div>
         </div>

@@ -2,7 +2,7 @@ import { useQueryClient } from '@tanstack/react-query';
 import { useEffect, useId, useRef, useState } from 'react';
 import { useNavigate } from 'react-router';
 import { Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { useSocketEvent, useSocketReconnect } from '@client/lib/socket';
 import { notificationKeys, useMarkAllRead, useMarkRead, useNotifications } from '../api/notifications';
 import { NotificationList } from './notification-list';
@@ -56,32 +56,32 @@ export function NotificationBell() {
         aria-expanded={open}
         aria-controls={panelId}
         onClick={() => setOpen((o) => !o)}
-        className="relative flex size-touch items-center justify-center rounded-full text-white hover:bg-tide-700"
+        className="relative flex size-touch items-center justify-center rounded-full text-on-chrome hover:bg-chrome-active"
       >
         <BellIcon />
         {count > 0 ? (
-          <span data-testid="unread-count" className="absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-ember-500 px-1 text-center text-xs leading-5 font-extrabold text-white">
+          <span data-testid="unread-count" className="absolute -top-0.5 -right-0.5 min-w-5 rounded-full bg-danger-solid px-1 text-center text-xs leading-5 font-extrabold text-on-danger">
             {count > 99 ? '99+' : count}
           </span>
         ) : null}
       </button>
       {open ? (
-        <div id={panelId} role="dialog" aria-label="Notifications" className="z-30 mt-2 rounded-card bg-white shadow-card ring-1 ring-tide-100 max-sm:fixed max-sm:inset-x-3 max-sm:top-16 sm:absolute sm:right-0 sm:w-[22rem]">
-          <div className="flex items-center justify-between gap-2 border-b border-tide-100 px-4 py-2">
-            <h2 className="font-extrabold text-tide-900">Notifications</h2>
+        <div id={panelId} role="dialog" aria-label="Notifications" className="z-30 mt-2 rounded-card bg-surface shadow-card ring-1 ring-line max-sm:fixed max-sm:inset-x-3 max-sm:top-16 sm:absolute sm:right-0 sm:w-[22rem]">
+          <div className="flex items-center justify-between gap-2 border-b border-line px-4 py-2">
+            <h2 className="font-extrabold text-ink">Notifications</h2>
             {count > 0 ? (
-              <button type="button" onClick={() => markAll.mutate()} disabled={markAll.isPending} className="min-h-touch rounded-full px-3 text-sm font-bold text-tide-700 hover:bg-tide-50 disabled:opacity-50">
+              <button type="button" onClick={() => markAll.mutate()} disabled={markAll.isPending} className="min-h-touch rounded-full px-3 text-sm font-bold text-link hover:bg-tint disabled:opacity-50">
                 Mark all read
               </button>
             ) : null}
           </div>
           <div className="max-h-[60vh] overflow-y-auto p-1">
             {list.isPending ? (
-              <div className="p-4"><Spinner /></div>
+              <div className="p-4"><Loading label="Loading…" /></div>
             ) : list.isError ? (
               <div className="p-3"><Notice tone="error">Could not load your notifications. {list.error.message}</Notice></div>
             ) : items.length === 0 ? (
-              <p className="p-4 text-sm text-tide-700">Nothing yet. When a mentor answers, a test needs attention or someone asks for help, it shows up here.</p>
+              <p className="p-4 text-sm text-ink-muted">Nothing yet. When a mentor answers, a test needs attention or someone asks for help, it shows up here.</p>
             ) : (
               <NotificationList
                 items={items}

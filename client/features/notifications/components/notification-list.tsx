@@ -2,8 +2,8 @@ import type { NotificationView } from '@shared/schemas/notification-views';
 import { relativeTime } from '@client/lib/relative-time';
 
 const ACCENT: Partial<Record<NotificationView['kind'], string>> = {
-  'concern.urgent': 'bg-ember-500',
-  'concern.caution': 'bg-amber-500',
+  'concern.urgent': 'bg-danger-solid',
+  'concern.caution': 'bg-watch',
 };
 
 /** The bell's list: open an item (which marks it read), or just mark it read. */
@@ -14,16 +14,16 @@ export function NotificationList(p: {
   busyId?: string;
 }) {
   return (
-    <ul className="divide-y divide-tide-100">
+    <ul className="divide-y divide-line">
       {p.items.map((n) => {
         const unread = n.readAt === null;
         return (
-          <li key={n.id} className={`flex items-start gap-2 px-2 py-2 ${unread ? 'bg-tide-50/60' : ''}`}>
-            <span aria-hidden className={`mt-3 size-2.5 shrink-0 rounded-full ${unread ? (ACCENT[n.kind] ?? 'bg-tide-500') : 'bg-transparent'}`} />
-            <button type="button" onClick={() => p.onOpen(n)} className="min-h-touch flex-1 rounded-lg px-1 py-1 text-left hover:bg-tide-50">
-              <span className={`block text-sm ${unread ? 'font-extrabold text-tide-950' : 'font-semibold text-tide-800'}`}>{n.title}</span>
-              {n.body ? <span className="mt-0.5 line-clamp-2 block text-sm text-tide-700">{n.body}</span> : null}
-              <span className="mt-0.5 block text-xs text-tide-600">
+          <li key={n.id} className={`flex items-start gap-2 px-2 py-2 ${unread ? 'bg-tint/60' : ''}`}>
+            <span aria-hidden className={`mt-3 size-2.5 shrink-0 rounded-full ${unread ? (ACCENT[n.kind] ?? 'bg-accent') : 'bg-transparent'}`} />
+            <button type="button" onClick={() => p.onOpen(n)} className="min-h-touch flex-1 rounded-lg px-1 py-1 text-left hover:bg-tint">
+              <span className={`block text-sm ${unread ? 'font-extrabold text-ink' : 'font-semibold text-ink-soft'}`}>{n.title}</span>
+              {n.body ? <span className="mt-0.5 line-clamp-2 block text-sm text-ink-muted">{n.body}</span> : null}
+              <span className="mt-0.5 block text-xs text-ink-muted">
                 {n.clubName} · {relativeTime(n.createdAt)}
                 {unread ? <span className="sr-only"> · unread</span> : null}
               </span>
@@ -33,7 +33,7 @@ export function NotificationList(p: {
                 type="button"
                 onClick={() => p.onMarkRead(n)}
                 disabled={p.busyId === n.id}
-                className="min-h-touch shrink-0 rounded-full px-3 text-xs font-bold text-tide-700 hover:bg-tide-100 disabled:opacity-50"
+                className="min-h-touch shrink-0 rounded-full px-3 text-xs font-bold text-link hover:bg-tint-strong disabled:opacity-50"
                 aria-label={`Mark “${n.title}” as read`}
               >
                 Mark read

@@ -5,11 +5,11 @@ import { asSubject, type AppAbility } from '@shared/abilities';
 import { QUESTION_BODY_MAX, QUESTION_TITLE_MAX } from '@shared/schemas/question.schema';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
+import { TextAreaField, TextField } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { useAskQuestion } from '../api/questions';
 import { useDraft } from '../lib/use-draft';
 
-const fieldClass = 'mt-1 block w-full rounded-xl border border-tide-200 bg-white px-3 py-2 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200';
 
 interface Props {
   clubId: string;
@@ -56,23 +56,25 @@ export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId,
     <form
       id={id}
       aria-label="Ask your mentor about this reading"
-      className="w-full space-y-3 rounded-card bg-tide-50 p-4 ring-1 ring-tide-200"
+      className="w-full space-y-3 rounded-card bg-tint p-4 ring-1 ring-line"
       onSubmit={(e) => {
         e.preventDefault();
         void send();
       }}
     >
-      <div>
-        <label htmlFor={`${id}-title`} className="block text-sm font-bold text-tide-800">Your question</label>
-        <input id={`${id}-title`} value={title} maxLength={QUESTION_TITLE_MAX} required onChange={(e) => setTitle(e.target.value)} placeholder="Is this nitrate OK for my seahorses?" className={`${fieldClass} min-h-touch`} aria-invalid={error?.fieldMessage('title') ? true : undefined} />
-        {error?.fieldMessage('title') ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error.fieldMessage('title')}</p> : null}
-      </div>
-      <div>
-        <label htmlFor={`${id}-body`} className="block text-sm font-bold text-tide-800">Details</label>
-        <textarea id={`${id}-body`} value={body} rows={4} maxLength={QUESTION_BODY_MAX} required onChange={(e) => setBody(e.target.value)} placeholder="What you noticed, what you already tried…" className={fieldClass} aria-invalid={error?.fieldMessage('body') ? true : undefined} />
-        <p className="mt-1 text-sm text-tide-600">Your mentor sees the figures and concerns of this reading as they are now. **bold**, lists with “- ” and links work.</p>
-        {error?.fieldMessage('body') ? <p role="alert" className="mt-1 text-sm font-semibold text-ember-700">{error.fieldMessage('body')}</p> : null}
-      </div>
+      <TextField id={`${id}-title`} label="Your question" value={title} maxLength={QUESTION_TITLE_MAX} required onChange={(e) => setTitle(e.target.value)} placeholder="Is this nitrate OK for my seahorses?" error={error?.fieldMessage('title')} />
+      <TextAreaField
+        id={`${id}-body`}
+        label="Details"
+        value={body}
+        rows={4}
+        maxLength={QUESTION_BODY_MAX}
+        required
+        onChange={(e) => setBody(e.target.value)}
+        placeholder="What you noticed, what you already tried…"
+        hint="Your mentor sees the figures and concerns of this reading as they are now. **bold**, lists with “- ” and links work."
+        error={error?.fieldMessage('body')}
+      />
       {ask.isError && !error?.fieldMessage('title') && !error?.fieldMessage('body') ? (
         <Notice tone="error">{error ? error.message : 'Could not send: check your connection.'} Your text is kept: try again.</Notice>
       ) : null}

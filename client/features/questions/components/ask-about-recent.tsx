@@ -1,7 +1,7 @@
 import { useQueryClient } from '@tanstack/react-query';
 import { PARAMETER_KEYS } from '@shared/care/parameters';
 import { Notice } from '@client/components/ui/card';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { useSocketEvent } from '@client/lib/socket';
 import { questionKeys } from '../api/questions';
 import { recentReadingsQuery, useRecentReadings } from '../api/recent-readings';
@@ -15,8 +15,8 @@ function Row({ when, summary, children }: { when: string; summary: string; child
   return (
     <li className="flex flex-wrap items-center justify-between gap-2 py-3">
       <div className="min-w-0">
-        <p className="font-bold text-tide-900">{formatDayTime(when)}</p>
-        <p className="text-sm text-tide-700">{summary}</p>
+        <p className="font-bold text-ink">{formatDayTime(when)}</p>
+        <p className="text-sm text-ink-muted">{summary}</p>
       </div>
       {children}
     </li>
@@ -40,13 +40,13 @@ export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clu
     <div className="space-y-4">
       {canAsk ? (
         recent.isPending ? (
-          <Spinner label="Loading recent readings…" />
+          <Loading label="Loading recent readings…" />
         ) : recent.isError ? (
           <Notice tone="error">Could not load recent readings: {recent.error.message}</Notice>
         ) : recent.data.tests.length + recent.data.observations.length === 0 ? (
-          <p className="text-tide-700">Log a water test or an observation first, then ask your mentor about it here.</p>
+          <p className="text-ink-muted">Log a water test or an observation first, then ask your mentor about it here.</p>
         ) : (
-          <ul className="divide-y divide-tide-100" aria-label="Recent readings to ask about">
+          <ul className="divide-y divide-line" aria-label="Recent readings to ask about">
             {recent.data.tests.map((t) => (
               <Row key={t.id} when={t.takenAt} summary={PARAMETER_KEYS.filter((k) => t.values[k] !== undefined).map((k) => formatLabelled(k, t.values[k]!, prefs)).join(' · ')}>
                 <AskAboutReading clubId={clubId} tankId={tankId} waterTestId={t.id} ownerId={ownerId} />
@@ -61,7 +61,7 @@ export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clu
         )
       ) : null}
       <div>
-        <h3 className="mb-2 text-sm font-extrabold uppercase tracking-wide text-tide-600">Questions about this tank</h3>
+        <h3 className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">Questions about this tank</h3>
         <QuestionList clubId={clubId} status="all" tankId={tankId} showAsker={!canAsk} empty="No questions about this tank yet." />
       </div>
     </div>

@@ -14,10 +14,10 @@ function renderInline(nodes: Inline[]): ReactNode {
       case 'strong':
         return <strong key={i} className="font-extrabold">{renderInline(n.children)}</strong>;
       case 'mention':
-        return <span key={i} className="rounded bg-tide-100 px-1 font-bold text-tide-800">{n.text}</span>;
+        return <span key={i} className="rounded bg-tint-strong px-1 font-bold text-ink-soft">{n.text}</span>;
       case 'link':
         return (
-          <a key={i} href={n.href} rel={EXTERNAL_REL} target={n.external ? '_blank' : undefined} className="font-bold text-tide-700 underline break-words">
+          <a key={i} href={n.href} rel={EXTERNAL_REL} target={n.external ? '_blank' : undefined} className="font-bold text-link underline break-words">
             {renderInline(n.children)}
           </a>
         );
@@ -33,5 +33,5 @@ function renderBlock(b: Block, i: number): ReactNode {
 
 /** A message as written, with links, lists and bold; every character of it reaches the page as text. */
 export function MarkdownLite({ text, mentionNames = [] }: { text: string; mentionNames?: readonly string[] }) {
-  return <div className="space-y-2 break-words text-tide-900">{parseMarkdownLite(text, mentionNames).map(renderBlock)}</div>;
+  return <div className="space-y-2 break-words text-ink">{parseMarkdownLite(text, mentionNames).map(renderBlock)}</div>;
 }

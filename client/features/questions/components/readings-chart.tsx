@@ -24,7 +24,7 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
   const [chosen, setChosen] = useState<ParameterKey | undefined>(() => firstParameter(snapshot, available));
   const at = Date.parse(snapshot.subject.kind === 'water-test' ? snapshot.subject.takenAt : snapshot.subject.occurredAt);
   const key = chosen && available.includes(chosen) ? chosen : available[0];
-  if (!key) return <Card><p className="text-tide-700">No water tests in the two weeks either side of this date.</p></Card>;
+  if (!key) return <Card><p className="text-ink-muted">No water tests in the two weeks either side of this date.</p></Card>;
 
   const span = [at - WINDOW_DAYS * DAY_MS, at + WINDOW_DAYS * DAY_MS] as const;
   const points = seriesOf(readings, key, prefs);
@@ -35,10 +35,10 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
   return (
     <Card>
       <div className="flex flex-wrap items-center justify-between gap-2">
-        <h2 className="text-lg font-extrabold text-tide-900">Readings around that date</h2>
+        <h2 className="text-lg font-extrabold text-ink">Readings around that date</h2>
         <div role="group" aria-label="Parameter shown" className="flex flex-wrap gap-1">
           {available.map((k) => (
-            <button key={k} type="button" aria-pressed={k === key} onClick={() => setChosen(k)} className={`min-h-touch rounded-full px-3 text-sm font-bold ${k === key ? 'bg-tide-700 text-white' : 'bg-tide-50 text-tide-700 hover:bg-tide-100'}`}>
+            <button key={k} type="button" aria-pressed={k === key} onClick={() => setChosen(k)} className={`min-h-touch rounded-full px-3 text-sm font-bold ${k === key ? 'bg-accent text-on-accent' : 'bg-tint text-link hover:bg-tint-strong'}`}>
               {parameterInfo(k).label}
             </button>
           ))}
@@ -56,7 +56,7 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
           className="mt-3 h-56"
         />
       </div>
-      <p className="mt-2 text-sm text-tide-700">
+      <p className="mt-2 text-sm text-ink-muted">
         Dashed line: the reading asked about.{range ? ` Green ${range.ideal[0] === range.ideal[1] ? 'line' : 'band'}: the profile’s ideal range when asked.` : ''} The line shows the tank’s tests as they are today.
       </p>
     </Card>

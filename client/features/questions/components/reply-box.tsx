@@ -4,6 +4,7 @@ import type { PersonRef } from '@shared/schemas/notification-views';
 import { QUESTION_BODY_MAX } from '@shared/schemas/question.schema';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
+import { Textarea } from '@client/components/ui/field';
 import { ApiError } from '@client/lib/api-client';
 import { useReply } from '../api/questions';
 import { insertMention, mentionAtCaret } from '../lib/mention-query';
@@ -63,9 +64,9 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
         void send();
       }}
     >
-      <label htmlFor={`${id}-text`} className="block text-sm font-bold text-tide-800">Your reply</label>
+      <label htmlFor={`${id}-text`} className="block text-sm font-bold text-ink-soft">Your reply</label>
       <div className="relative">
-        <textarea
+        <Textarea
           ref={area}
           id={`${id}-text`}
           rows={4}
@@ -79,15 +80,15 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
             if (e.key === 'Escape') setAt(null);
           }}
           placeholder="Type @ to mention a mentor or admin"
-          className="block w-full rounded-xl border border-tide-200 bg-white px-3 py-2 text-base text-tide-950 shadow-sm focus:border-tide-500 focus:outline-none focus:ring-2 focus:ring-tide-200"
+          className="w-full"
         />
         {at ? (
-          <div role="listbox" aria-label="Mention someone" className="absolute inset-x-0 top-full z-10 mt-1 overflow-hidden rounded-xl bg-white shadow-card ring-1 ring-tide-200">
+          <div role="listbox" aria-label="Mention someone" className="absolute inset-x-0 top-full z-10 mt-1 overflow-hidden rounded-xl bg-surface shadow-card ring-1 ring-line">
             {matches.length === 0 ? (
-              <p className="px-4 py-3 text-sm text-tide-600">{mentionable.length ? 'Nobody by that name can see this question.' : 'No mentor or admin to mention here.'}</p>
+              <p className="px-4 py-3 text-sm text-ink-muted">{mentionable.length ? 'Nobody by that name can see this question.' : 'No mentor or admin to mention here.'}</p>
             ) : (
               matches.map((p) => (
-                <button key={p.userId} type="button" role="option" aria-selected={false} onClick={() => pick(p)} className="block min-h-touch w-full px-4 text-left font-bold text-tide-800 hover:bg-tide-50">
+                <button key={p.userId} type="button" role="option" aria-selected={false} onClick={() => pick(p)} className="block min-h-touch w-full px-4 text-left font-bold text-ink-soft hover:bg-tint">
                   @{p.displayName}
                 </button>
               ))
@@ -95,8 +96,8 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
           </div>
         ) : null}
       </div>
-      <p className="text-sm text-tide-600">**bold**, lists with “- ” or “1. ”, and links work. Only the people listed when you type @ can be mentioned.</p>
-      {error?.fieldMessage('body') ? <p role="alert" className="text-sm font-semibold text-ember-700">{error.fieldMessage('body')}</p> : null}
+      <p className="text-sm text-ink-muted">**bold**, lists with “- ” or “1. ”, and links work. Only the people listed when you type @ can be mentioned.</p>
+      {error?.fieldMessage('body') ? <p role="alert" className="text-sm font-semibold text-danger">{error.fieldMessage('body')}</p> : null}
       {reply.isError && !error?.fieldMessage('body') ? <Notice tone="error">{error ? error.message : 'Could not send: check your connection.'} Your reply is kept: try again.</Notice> : null}
       {sent ? <Notice tone="success">Sent.{sent.length ? ` ${sent.map((p) => p.displayName).join(', ')} will be told.` : ''}</Notice> : null}
       <div className="flex flex-wrap gap-2">

@@ -6,11 +6,11 @@ import { MarkdownLite } from './markdown-lite';
 
 function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: string; body: string; names: string[]; isAsker: boolean }) {
   return (
-    <li className={`rounded-card p-4 shadow-card ${isAsker ? 'bg-white' : 'bg-kelp-100/40 ring-1 ring-kelp-500/20'}`}>
+    <li className={`rounded-card p-4 shadow-card ${isAsker ? 'bg-surface' : 'bg-ok-soft/40 ring-1 ring-ok/20'}`}>
       <p className="mb-2 flex flex-wrap items-baseline gap-x-2 text-sm">
-        <span className="font-extrabold text-tide-900">{author.displayName}</span>
-        {isAsker ? <span className="text-xs font-bold text-tide-600">asked</span> : null}
-        <time dateTime={at} title={formatDayTime(at)} className="text-tide-600">{relativeTime(at)}</time>
+        <span className="font-extrabold text-ink">{author.displayName}</span>
+        {isAsker ? <span className="text-xs font-bold text-ink-muted">asked</span> : null}
+        <time dateTime={at} title={formatDayTime(at)} className="text-ink-muted">{relativeTime(at)}</time>
       </p>
       <MarkdownLite text={body} mentionNames={names} />
     </li>

@@ -33,10 +33,10 @@ export function NitrogenChart({ tests, frame }: { tests: readonly WaterTestView[
   if (rows.length === 0) return null;
   const label = (k: (typeof SERIES)[number]['key']) => `${parameterInfo(k).label} (${parameterInfo(k).unit})`;
   return (
-    <figure className="rounded-card bg-white p-4 shadow-card" data-chart="nitrogen-cycle">
+    <figure className="rounded-card bg-surface p-4 shadow-card" data-chart="nitrogen-cycle">
       <figcaption>
-        <h3 className="font-extrabold text-tide-900">The nitrogen cycle</h3>
-        <p className="text-sm text-tide-700">While a tank cycles, ammonia peaks first, then nitrite; the tank is cycled when both stay at 0 and only nitrate is left.</p>
+        <h3 className="font-extrabold text-ink">The nitrogen cycle</h3>
+        <p className="text-sm text-ink-muted">While a tank cycles, ammonia peaks first, then nitrite; the tank is cycled when both stay at 0 and only nitrate is left.</p>
       </figcaption>
       <div role="img" aria-label={`Ammonia, nitrite and nitrate over time: ${rows.length} tests.`} className="mt-2 h-64">
         <ResponsiveContainer width="100%" height="100%">

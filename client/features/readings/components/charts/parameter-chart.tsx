@@ -28,16 +28,16 @@ export function ParameterChart({ parameter, points, canonicalLatest, profile, pr
   const summary = `${info.label}: ${points.length} ${points.length === 1 ? 'reading' : 'readings'}, latest ${formatDisplay(parameter, canonicalLatest, prefs)} ${relativeTime(new Date(latest.t).toISOString())}.${range ? ` Ideal ${bandText(parameter, range.ideal, prefs)}.` : ''}`;
 
   return (
-    <figure className="rounded-card bg-white p-4 shadow-card" data-chart={parameter}>
+    <figure className="rounded-card bg-surface p-4 shadow-card" data-chart={parameter}>
       <figcaption className="flex flex-wrap items-baseline justify-between gap-x-3">
-        <h3 className="font-extrabold text-tide-900">
+        <h3 className="font-extrabold text-ink">
           {info.label}
-          {unit ? <span className="font-semibold text-tide-600"> · {unit}</span> : null}
+          {unit ? <span className="font-semibold text-ink-muted"> · {unit}</span> : null}
         </h3>
-        <p className="text-lg font-extrabold text-tide-900">{formatDisplay(parameter, canonicalLatest, prefs)}</p>
+        <p className="text-lg font-extrabold text-ink">{formatDisplay(parameter, canonicalLatest, prefs)}</p>
       </figcaption>
       <ParameterLineChart parameter={parameter} points={points} prefs={prefs} range={range} span={[frame.from, frame.to]} markers={waterChangeMarkers(frame)} summary={summary} className="mt-2 h-44" />
-      <div className="mt-2 space-y-1 text-sm text-tide-700">
+      <div className="mt-2 space-y-1 text-sm text-ink-muted">
         {verdict ? <VerdictLine verdict={verdict} /> : null}
         <p>
           {range ? <>{range.ideal[0] === range.ideal[1] ? 'Green line' : 'Green band'}: ideal {bandText(parameter, range.ideal, prefs)}. </> : null}

@@ -9,6 +9,7 @@ import { Notice } from '@client/components/ui/card';
 import { TextAreaField, TextField } from '@client/components/ui/field';
 import { PhotoPicker } from '@client/components/ui/photo-picker';
 import { PhotoRetry } from '@client/components/ui/photo-retry';
+import { Choice } from '@client/components/ui/choice';
 import type { UnitPrefs } from '@client/lib/display-units';
 import { useSaveErrors } from '@client/lib/form-errors';
 import type { SavedNotice } from '@client/lib/saved-notice';
@@ -45,10 +46,9 @@ export function EventForm({ clubId, tankId, prefs, tankLitres, livestock, initia
         <fieldset disabled={photoError !== undefined} className="space-y-5">
           <div role="radiogroup" aria-label="What to log" className="grid grid-cols-2 gap-2 sm:grid-cols-5">
             {POSTED_KINDS.map((k) => (
-              <label key={k} className="flex min-h-14 cursor-pointer items-center justify-center gap-2 rounded-xl bg-white px-2 text-center text-sm font-bold text-tide-800 ring-1 ring-tide-200 has-[:checked]:bg-tide-700 has-[:checked]:text-white">
-                <input type="radio" value={k} className="sr-only" {...form.register('kind', { onChange: (ev: { target: { value: PostedKind } }) => onKindChange(ev.target.value) })} />
+              <Choice key={k} shape="big-tile" value={k} {...form.register('kind', { onChange: (ev: { target: { value: PostedKind } }) => onKindChange(ev.target.value) })}>
                 <KindIcon kind={k} /> {TANK_EVENT_KIND_LABELS[k]}
-              </label>
+              </Choice>
             ))}
           </div>
           <div className="grid gap-3 sm:grid-cols-2">

@@ -5,11 +5,13 @@ import { convert } from '@shared/chemistry/units';
 import { NITRATE_ENTRY_UNITS, SALINITY_ENTRY_UNITS } from '@shared/readings/entry-units';
 import { SG_REFERENCE_TEMPS_C } from '@shared/readings/salinity';
 import { DOSE_UNITS, EQUIPMENT_CHANGES, SOURCE_WATER_TYPES } from '@shared/schemas/tank-event.schema';
-import { SelectField, TextField } from '@client/components/ui/field';
+import { TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
 import { formatVolume, volumeUnitOf, type UnitPrefs } from '@client/lib/display-units';
 import type { EventDraft } from '../../lib/event-draft';
 import { parseDecimal } from '@client/lib/form-values';
 import { CautionFor } from '@client/components/ui/cautions';
+import { Choice } from '@client/components/ui/choice';
 
 const opts = <T extends string>(values: readonly T[], labels: Record<T, string>) => values.map((v) => ({ value: v, label: labels[v] }));
 
@@ -29,16 +31,15 @@ export function WaterChangeFields({ prefs, tankLitres }: { prefs: UnitPrefs; tan
       <CautionFor kind="waterChange" title="Before the new water goes in" />
       <div role="radiogroup" aria-label="Give the amount as" className="grid grid-cols-2 gap-2">
         {(['percent', 'volume'] as const).map((b) => (
-          <label key={b} className="flex min-h-touch cursor-pointer items-center justify-center rounded-xl text-sm font-bold ring-1 ring-tide-200 has-[:checked]:bg-tide-700 has-[:checked]:text-white">
-            <input type="radio" value={b} className="sr-only" {...register('waterChange.by')} />
+          <Choice key={b} value={b} {...register('waterChange.by')}>
             {b === 'percent' ? 'Percent of the tank' : `Amount (${unit})`}
-          </label>
+          </Choice>
         ))}
       </div>
       <TextField label={w.by === 'percent' ? 'How much was changed, %' : `How much was changed, ${unit}`} inputMode="decimal" autoComplete="off" hint={preview} error={e?.amount?.message} {...register('waterChange.amount')} />
       <SelectField label="New water" options={opts(SOURCE_WATER_TYPES, SOURCE_WATER_LABELS)} error={e?.sourceWater?.message} {...register('waterChange.sourceWater')} />
       <details>
-        <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-tide-700">Did you test the new water? (optional)</summary>
+        <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">Did you test the new water? (optional)</summary>
         <div className="grid gap-3 sm:grid-cols-2">
           <div className="grid grid-cols-[1fr_auto] gap-2">
             <TextField label="Its nitrate" inputMode="decimal" autoComplete="off" error={e?.nitrate?.message} {...register('waterChange.nitrate')} />

@@ -6,6 +6,7 @@ import { TextField } from '@client/components/ui/field';
 import { SCALES, type EventDraft } from '../../lib/event-draft';
 import { CautionFor } from '@client/components/ui/cautions';
 import { TextAreaField } from '@client/components/ui/field';
+import { Choice } from '@client/components/ui/choice';
 
 /** The signs a keeper watches even when every figure looks right: one tap per sign, "as usual" first. */
 export function ObservationFields({ livestock }: { livestock: LivestockView[] }) {
@@ -18,25 +19,24 @@ export function ObservationFields({ livestock }: { livestock: LivestockView[] })
       <datalist id="observation-animals">{names.map((n) => <option key={n} value={n} />)}</datalist>
       {SCALES.map((s) => (
         <fieldset key={s}>
-          <legend className="text-sm font-bold text-tide-800">{OBSERVATION_SCALE_LABELS[s]}</legend>
+          <legend className="text-sm font-bold text-ink-soft">{OBSERVATION_SCALE_LABELS[s]}</legend>
           <div className="mt-1 flex flex-wrap gap-2">
             {(OBSERVATION_SCALES[s] as readonly (keyof typeof OBSERVATION_VALUE_LABELS)[]).map((v) => (
-              <label key={v} className="inline-flex min-h-touch cursor-pointer items-center rounded-full bg-white px-3 text-sm font-bold text-tide-800 ring-1 ring-tide-200 has-[:checked]:bg-tide-700 has-[:checked]:text-white">
-                <input type="radio" value={v} className="sr-only" {...register(`observation.${s}`)} />
+              <Choice key={v} shape="pill" value={v} {...register(`observation.${s}`)}>
                 {OBSERVATION_VALUE_LABELS[v]}
-              </label>
+              </Choice>
             ))}
           </div>
         </fieldset>
       ))}
       <TextField label="Breaths (gill beats) a minute (optional)" inputMode="numeric" autoComplete="off" hint="Count for 15 seconds and multiply by 4." error={e?.breathsPerMinute?.message} {...register('observation.breathsPerMinute')} />
       <fieldset>
-        <legend className="text-sm font-bold text-tide-800">Also seen</legend>
+        <legend className="text-sm font-bold text-ink-soft">Also seen</legend>
         <div className="mt-1 grid gap-1 sm:grid-cols-2">
           {OBSERVATION_CHECKS.map((c) => (
-            <label key={c} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-xl px-2 hover:bg-tide-50">
-              <input type="checkbox" className="size-5 accent-tide-700" {...register(`observation.checks.${c}`)} />
-              <span className="text-tide-900">{OBSERVATION_CHECK_LABELS[c]}</span>
+            <label key={c} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-xl px-2 hover:bg-tint">
+              <input type="checkbox" className="size-5 accent-accent" {...register(`observation.checks.${c}`)} />
+              <span className="text-ink">{OBSERVATION_CHECK_LABELS[c]}</span>
             </label>
           ))}
         </div>

@@ -2,7 +2,7 @@ import { lazy, Suspense, useMemo, useState } from 'react';
 import type { CareProfile } from '@shared/care/profiles';
 import { Card, Notice } from '@client/components/ui/card';
 import { Segmented } from '@client/components/ui/segmented';
-import { Spinner } from '@client/components/ui/spinner';
+import { Loading } from '@client/components/ui/skeleton';
 import { useWaterChanges } from '../../api/events';
 import { useTestsSince } from '../../api/water-tests';
 import type { UnitPrefs } from '@client/lib/display-units';
@@ -40,22 +40,22 @@ export function TankHistory({ clubId, tankId, profile, prefs, cycling, editable 
   return (
     <section aria-labelledby="readings-heading" className="space-y-4">
       <div className="flex flex-wrap items-center justify-between gap-3">
-        <h2 id="readings-heading" className="text-xl font-extrabold text-tide-900">Readings</h2>
+        <h2 id="readings-heading" className="text-xl font-extrabold text-ink">Readings</h2>
         <Segmented<Days> label="Period shown" options={RANGES} value={days} onChange={setDays} />
       </div>
       {tests.isPending ? (
-        <Card><Spinner label="Loading readings…" /></Card>
+        <Card><Loading label="Loading readings…" /></Card>
       ) : tests.isError ? (
         <Notice tone="error">{tests.error.message}</Notice>
       ) : list.length === 0 ? (
-        <Card><p className="text-tide-700">No tests in this period{days !== null ? ': try a longer one' : ' yet. Your first test will draw the first point on each chart'}.</p></Card>
+        <Card><p className="text-ink-muted">No tests in this period{days !== null ? ': try a longer one' : ' yet. Your first test will draw the first point on each chart'}.</p></Card>
       ) : (
         <>
-          <Suspense fallback={<Card><Spinner label="Drawing the charts…" /></Card>}>
+          <Suspense fallback={<Card><Loading label="Drawing the charts…" /></Card>}>
             <ChartsSection tests={list} waterChanges={waterChanges.data ?? []} profile={profile} prefs={prefs} from={from ? Date.parse(from) : null} now={now} cycling={cycling} />
           </Suspense>
           <Card>
-            <h3 className="mb-3 text-lg font-extrabold text-tide-900">Past tests</h3>
+            <h3 className="mb-3 text-lg font-extrabold text-ink">Past tests</h3>
             <TestsTable tests={list} prefs={prefs} editable={editable} tankId={tankId} />
           </Card>
         </>

@@ -17,13 +17,13 @@ import { TEST_METHOD_LABELS } from '@shared/constants/tank-labels';
 import { TEST_METHODS, type TestMethod } from '@shared/readings/entry-units';
 import type { WaterTestView } from '@shared/schemas/tank-views';
 import { Button } from '@client/components/ui/button';
+import { Select } from '@client/components/ui/select';
 import { formatDayTime } from '@client/lib/date-format';
 import { displayUnit, formatDisplayNumber, type UnitPrefs } from '@client/lib/display-units';
 
 const col = createColumnHelper<WaterTestView>();
 const methodsOf = (t: WaterTestView): TestMethod[] => [...new Set(Object.values(t.entries).flatMap((e) => (e?.method ? [e.method] : [])))];
 const hasValue: FilterFn<WaterTestView> = (row, id) => row.getValue(id) !== undefined;
-const select = 'min-h-touch rounded-xl border border-tide-200 bg-white px-2 text-base';
 
 /** Past tests: sortable by date or any parameter, filterable by parameter and method, in the member's units. */
 export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTestView[]; prefs: UnitPrefs; editable: boolean; tankId: string }) {
@@ -39,12 +39,12 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
           header: () => (
             <>
               {parameterInfo(k).label}
-              {displayUnit(k, prefs) ? <span className="block text-xs font-semibold text-tide-600">{displayUnit(k, prefs)}</span> : null}
+              {displayUnit(k, prefs) ? <span className="block text-xs font-semibold text-ink-muted">{displayUnit(k, prefs)}</span> : null}
             </>
           ),
           cell: (c) => {
             const v = c.getValue();
-            return v === undefined ? <span className="text-tide-600">–</span> : formatDisplayNumber(k, v, prefs);
+            return v === undefined ? <span className="text-ink-muted">–</span> : formatDisplayNumber(k, v, prefs);
           },
           sortUndefined: 'last',
           filterFn: hasValue,
@@ -60,7 +60,7 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
       }),
       col.accessor('note', { header: 'Note', enableSorting: false, cell: (c) => <span className="line-clamp-2 max-w-56">{c.getValue()}</span> }),
       ...(editable
-        ? [col.display({ id: 'edit', header: () => <span className="sr-only">Edit</span>, cell: (c) => <Link className="font-bold text-tide-700 underline" to={`/tanks/${tankId}/tests/${c.row.original.id}/edit`}>Edit</Link> })]
+        ? [col.display({ id: 'edit', header: () => <span className="sr-only">Edit</span>, cell: (c) => <Link className="font-bold text-link underline" to={`/tanks/${tankId}/tests/${c.row.original.id}/edit`}>Edit</Link> })]
         : []),
     ],
     [present, prefs, editable, tankId],
@@ -89,36 +89,36 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
   return (
     <div>
       <div className="flex flex-wrap gap-3">
-        <label className="flex flex-col text-sm font-bold text-tide-800">
+        <label className="flex flex-col text-sm font-bold text-ink-soft">
           Tests with
-          <select className={select} value={parameterFilter} onChange={(e) => setFilter(e.target.value, methodFilter)}>
+          <Select className="" value={parameterFilter} onChange={(e) => setFilter(e.target.value, methodFilter)}>
             <option value="">Any reading</option>
             {present.map((k: ParameterKey) => <option key={k} value={k}>{parameterInfo(k).label}</option>)}
-          </select>
+          </Select>
         </label>
-        <label className="flex flex-col text-sm font-bold text-tide-800">
+        <label className="flex flex-col text-sm font-bold text-ink-soft">
           Measured with
-          <select className={select} value={methodFilter} onChange={(e) => setFilter(parameterFilter, e.target.value)}>
+          <Select className="" value={methodFilter} onChange={(e) => setFilter(parameterFilter, e.target.value)}>
             <option value="">Any method</option>
             {TEST_METHODS.map((m) => <option key={m} value={m}>{TEST_METHOD_LABELS[m]}</option>)}
-          </select>
+          </Select>
         </label>
-        <p className="self-end pb-2 text-sm text-tide-700">{table.getFilteredRowModel().rows.length} of {tests.length} tests</p>
+        <p className="self-end pb-2 text-sm text-ink-muted">{table.getFilteredRowModel().rows.length} of {tests.length} tests</p>
       </div>
-      <div className="relative mt-3 overflow-x-auto rounded-xl ring-1 ring-tide-100">
+      <div className="relative mt-3 overflow-x-auto rounded-xl ring-1 ring-line">
         <table className="min-w-full text-sm">
-          <thead className="bg-tide-50 text-left text-tide-800">
+          <thead className="bg-tint text-left text-ink-soft">
             {table.getHeaderGroups().map((g) => (
               <tr key={g.id}>
                 {g.headers.map((h) => {
                   const sorted = h.column.getIsSorted();
                   const numeric = (h.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric;
                   return (
-                    <th key={h.id} scope="col" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined} className={`px-3 py-2 align-bottom font-bold whitespace-nowrap ${h.column.id === 'takenAt' ? 'sticky left-0 bg-tide-50' : ''} ${numeric ? 'text-right' : ''}`}>
+                    <th key={h.id} scope="col" aria-sort={sorted === 'asc' ? 'ascending' : sorted === 'desc' ? 'descending' : undefined} className={`px-3 py-2 align-bottom font-bold whitespace-nowrap ${h.column.id === 'takenAt' ? 'sticky left-0 bg-tint' : ''} ${numeric ? 'text-right' : ''}`}>
                       {h.column.getCanSort() ? (
                         <button type="button" className="inline-flex min-h-touch items-end gap-1 text-left" onClick={h.column.getToggleSortingHandler()}>
                           <span>{flexRender(h.column.columnDef.header, h.getContext())}</span>
-                          <span aria-hidden className="text-tide-500">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
+                          <span aria-hidden className="text-ink-muted">{sorted === 'asc' ? '▲' : sorted === 'desc' ? '▼' : '↕'}</span>
                         </button>
                       ) : (
                         flexRender(h.column.columnDef.header, h.getContext())
@@ -129,18 +129,18 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
               </tr>
             ))}
           </thead>
-          <tbody className="divide-y divide-tide-100 bg-white">
+          <tbody className="divide-y divide-line bg-surface">
             {rows.map((r) => (
               <tr key={r.id}>
                 {r.getVisibleCells().map((c) => (
-                  <td key={c.id} className={`px-3 py-2 ${c.column.id === 'note' ? 'min-w-56' : 'whitespace-nowrap'} ${c.column.id === 'takenAt' ? 'sticky left-0 bg-white font-semibold' : ''} ${(c.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'text-right tabular-nums' : ''}`}>
+                  <td key={c.id} className={`px-3 py-2 ${c.column.id === 'note' ? 'min-w-56' : 'whitespace-nowrap'} ${c.column.id === 'takenAt' ? 'sticky left-0 bg-surface font-semibold' : ''} ${(c.column.columnDef.meta as { numeric?: boolean } | undefined)?.numeric ? 'text-right tabular-nums' : ''}`}>
                     {flexRender(c.column.columnDef.cell, c.getContext())}
                   </td>
                 ))}
               </tr>
             ))}
             {rows.length === 0 ? (
-              <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-tide-700">No tests match.</td></tr>
+              <tr><td colSpan={columns.length} className="px-3 py-6 text-center text-ink-muted">No tests match.</td></tr>
             ) : null}
           </tbody>
         </table>
@@ -148,7 +148,7 @@ export function TestsTable({ tests, prefs, editable, tankId }: { tests: WaterTes
       {table.getPageCount() > 1 ? (
         <div className="mt-3 flex items-center justify-between gap-2">
           <Button variant="secondary" disabled={!table.getCanPreviousPage()} onClick={() => table.previousPage()} aria-label="Previous page">Previous</Button>
-          <p className="text-sm whitespace-nowrap text-tide-700">Page {pageIndex + 1} of {table.getPageCount()}</p>
+          <p className="text-sm whitespace-nowrap text-ink-muted">Page {pageIndex + 1} of {table.getPageCount()}</p>
           <Button variant="secondary" disabled={!table.getCanNextPage()} onClick={() => table.nextPage()} aria-label="Next page">Next</Button>
         </div>
       ) : null}

@@ -17,16 +17,16 @@ export function ConcernPreview({ tank, profile, normalized }: { tank: Pick<TankD
     now,
   }).filter((c) => c.severity !== 'info');
   return (
-    <section aria-live="polite" aria-labelledby="preview-concerns" className="rounded-card bg-sand-50 p-4 ring-1 ring-sand-200">
-      <h2 id="preview-concerns" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">If you save this</h2>
+    <section aria-live="polite" aria-labelledby="preview-concerns" className="rounded-card bg-canvas p-4 ring-1 ring-line">
+      <h2 id="preview-concerns" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">If you save this</h2>
       {concerns.length === 0 ? (
-        <p className="mt-1 text-sm text-kelp-700">✔ Nothing here would be flagged against the {profile.name} profile.</p>
+        <p className="mt-1 text-sm text-ok">✔ Nothing here would be flagged against the {profile.name} profile.</p>
       ) : (
         <ul className="mt-2 space-y-2">
           {concerns.map((c) => (
             <li key={c.rule} className="text-sm">
-              <SeverityBadge severity={c.severity} /> <span className="font-bold text-tide-900">{c.reason}</span>
-              {c.nextSteps[0] ? <span className="block text-tide-700">{c.nextSteps[0]}</span> : null}
+              <SeverityBadge severity={c.severity} /> <span className="font-bold text-ink">{c.reason}</span>
+              {c.nextSteps[0] ? <span className="block text-ink-muted">{c.nextSteps[0]}</span> : null}
             </li>
           ))}
         </ul>

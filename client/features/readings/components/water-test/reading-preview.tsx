@@ -29,7 +29,7 @@ function salinityWords(d: SalinityDerivation): string {
 
 function Warning({ text }: { text: string }) {
   return (
-    <p className="flex items-start gap-1.5 text-sm font-semibold text-amber-700">
+    <p className="flex items-start gap-1.5 text-sm font-semibold text-watch">
       <VerdictIcon level="caution" /> <span>{text}</span>
     </p>
   );
@@ -47,21 +47,21 @@ export function ReadingPreview({ parameter, normalized, profile, prefs, enteredU
   return (
     <div className="mt-2 space-y-1" aria-live="polite" data-testid={`preview-${parameter}`}>
       {salinity ? (
-        <p className="text-sm text-tide-800">
-          <strong>Practical salinity {formatNumber('salinity', value)}</strong> <span className="text-tide-600">({salinityWords(salinity)})</span>
+        <p className="text-sm text-ink-soft">
+          <strong>Practical salinity {formatNumber('salinity', value)}</strong> <span className="text-ink-muted">({salinityWords(salinity)})</span>
         </p>
       ) : null}
-      {converted ? <p className="text-sm text-tide-700">Saved as {formatReading(parameter, value)}.</p> : null}
+      {converted ? <p className="text-sm text-ink-muted">Saved as {formatReading(parameter, value)}.</p> : null}
       {verdict ? <VerdictLine verdict={verdict} /> : null}
       {free ? (
         free.value === null ? (
-          <p className="text-sm text-tide-700">Free ammonia could not be worked out: {free.reason}</p>
+          <p className="text-sm text-ink-muted">Free ammonia could not be worked out: {free.reason}</p>
         ) : (
-          <div className="rounded-lg bg-tide-50 px-3 py-2">
-            <p className="text-sm text-tide-800">
+          <div className="rounded-lg bg-tint px-3 py-2">
+            <p className="text-sm text-ink-soft">
               <strong>Free ammonia (the toxic part): {formatNumber('freeAmmonia', free.value)} mg/L NH3</strong>
             </p>
-            <p className="text-xs text-tide-600">
+            <p className="text-xs text-ink-muted">
               From {(['pH', 'temperature', 'salinity'] as const).map((k) => describeInput(k, free.inputs[k], prefs)).join('; ')}.
             </p>
             {(() => {

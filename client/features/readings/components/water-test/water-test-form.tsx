@@ -103,8 +103,8 @@ export function WaterTestForm({ clubId, tank, profile, prefs, initial, memory, e
         {photoError !== undefined ? (
           <PhotoRetry saved="Your readings are saved." error={photoError} busy={form.formState.isSubmitting} onSkip={submit(false)} />
         ) : (
-          <div className="sticky bottom-16 z-10 -mx-4 border-t border-tide-100 bg-white/95 px-4 py-3 backdrop-blur sm:bottom-0 sm:mx-0 sm:rounded-card sm:border-0 sm:shadow-card">
-            <p className="mb-2 text-sm text-tide-700" aria-live="polite">
+          <div className="sticky bottom-16 z-10 -mx-4 border-t border-line bg-surface/95 px-4 py-3 backdrop-blur sm:bottom-0 sm:mx-0 sm:rounded-card sm:border-0 sm:shadow-card">
+            <p className="mb-2 text-sm text-ink-muted" aria-live="polite">
               {liveProblems ? `Fix ${liveProblems === 1 ? 'the reading' : `${liveProblems} readings`} marked in red first.` : filledCount ? `${filledCount} ${filledCount === 1 ? 'reading' : 'readings'} ready to save.` : 'Enter at least one reading.'}
             </p>
             <Button type="submit" className="min-h-14 w-full text-lg" busy={form.formState.isSubmitting}>{submitLabel}</Button>

@@ -2,6 +2,7 @@ import { Link } from 'react-router';
 import { PARAMETER_KEYS, parameterInfo, type ParameterKey } from '@shared/care/parameters';
 import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
 import type { TankView } from '@shared/schemas/tank-views';
+import { Loading, Skeleton } from '@client/components/ui/skeleton';
 import { VerdictIcon, verdictTone } from '@client/components/ui/verdict-mark';
 import { verdictFor } from '@client/lib/bands';
 import { useTankProfile } from '@client/lib/care-profiles';
@@ -16,10 +17,10 @@ const CYCLE_FIRST: readonly ParameterKey[] = ['ammonia', 'nitrite', 'nitrate', '
 
 const FIGURES = 4;
 const FRESHNESS_TONE: Record<Freshness, string> = {
-  fresh: 'text-tide-700',
-  due: 'text-amber-700',
-  stale: 'text-ember-700',
-  never: 'text-tide-600',
+  fresh: 'text-ink-muted',
+  due: 'text-watch',
+  stale: 'text-danger',
+  never: 'text-ink-muted',
 };
 
 function LastTested({ at, level }: { at: string | null; level: Freshness }) {
@@ -48,15 +49,15 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
   const level = freshness(lastAt, shortestCadenceDays(profile, tank.phase));
 
   return (
-    <li className={`rounded-card shadow-card ring-tide-300 focus-within:ring-2 ${tank.archivedAt ? 'bg-sand-100' : 'bg-white'}`}>
+    <li className={`rounded-card shadow-card ring-focus focus-within:ring-2 ${tank.archivedAt ? 'bg-tint' : 'bg-surface'}`}>
       <Link to={`/tanks/${tank.id}`} className="block p-4 sm:p-5">
         <div className="flex flex-wrap items-start justify-between gap-2">
           <div>
-            <h2 className="text-lg font-extrabold text-tide-900">{tank.name}</h2>
-            <p className="text-sm text-tide-700">
+            <h2 className="text-lg font-extrabold text-ink">{tank.name}</h2>
+            <p className="text-sm text-ink-muted">
               {SYSTEM_TYPE_LABELS[tank.systemType]} · {formatVolume(tank.volumeL, prefs)}
             </p>
-            {showOwner ? <p className="text-sm font-semibold text-tide-600">Kept by {tank.owner.displayName}</p> : null}
+            {showOwner ? <p className="text-sm font-semibold text-ink-muted">Kept by {tank.owner.displayName}</p> : null}
           </div>
           <div className="flex gap-1">
             {tank.archivedAt ? <ArchivedBadge /> : null}
@@ -64,8 +65,8 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
           </div>
         </div>
         {recent.isPending ? (
-          <div className="mt-3 grid grid-cols-2 gap-2" aria-hidden>
-            {[0, 1, 2, 3].map((i) => <div key={i} className="h-11 animate-pulse rounded-lg bg-tide-50" />)}
+          <div className="mt-3 grid grid-cols-2 gap-2">
+            {[0, 1, 2, 3].map((i) => <Skeleton key={i} className="h-11" />)}
           </div>
         ) : figures.length ? (
           <dl className="mt-3 grid grid-cols-2 gap-2">
@@ -73,11 +74,11 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
               const v = latest[k]!.value;
               const verdict = verdictFor(k, v, profile, prefs);
               return (
-                <div key={k} className="rounded-lg bg-tide-50 px-3 py-1.5">
-                  <dt className="truncate text-xs font-bold text-tide-600">{parameterInfo(k).label}</dt>
-                  <dd className={`flex items-center gap-1 font-extrabold ${verdict ? verdictTone(verdict.level) : 'text-tide-900'}`}>
+                <div key={k} className="rounded-lg bg-tint px-3 py-1.5">
+                  <dt className="truncate text-xs font-bold text-ink-muted">{parameterInfo(k).label}</dt>
+                  <dd className={`flex items-center gap-1 font-extrabold ${verdict ? verdictTone(verdict.level) : 'text-ink'}`}>
                     {verdict ? <VerdictIcon level={verdict.level} direction={verdict.direction} /> : null}
-                    <span className="text-tide-900">{formatDisplay(k, v, prefs)}</span>
+                    <span className="text-ink">{formatDisplay(k, v, prefs)}</span>
                     {verdict ? <span className="sr-only">{verdict.text}</span> : null}
                   </dd>
                 </div>
@@ -85,7 +86,7 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
             })}
           </dl>
         ) : null}
-        <div className="mt-3">{recent.isError ? <p className="text-sm text-ember-700">Could not load the latest tests.</p> : recent.isPending ? null : <LastTested at={lastAt} level={level} />}</div>
+        <div className="mt-3">{recent.isError ? <p className="text-sm text-danger">Could not load the latest tests.</p> : recent.isPending ? null : <LastTested at={lastAt} level={level} />}</div>
       </Link>
     </li>
   );
@@ -93,16 +94,18 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
 
 export function TankListSkeleton() {
   return (
-    <ul className="grid gap-4 sm:grid-cols-2" aria-label="Loading tanks" aria-busy>
-      {[0, 1, 2].map((i) => (
-        <li key={i} className="rounded-card bg-white p-5 shadow-card">
-          <div className="h-5 w-2/3 animate-pulse rounded bg-tide-100" />
-          <div className="mt-2 h-4 w-1/2 animate-pulse rounded bg-tide-50" />
-          <div className="mt-4 grid grid-cols-2 gap-2">
-            {[0, 1, 2, 3].map((j) => <div key={j} className="h-11 animate-pulse rounded-lg bg-tide-50" />)}
+    <Loading label="Loading your tanks…">
+      <div className="grid gap-4 sm:grid-cols-2">
+        {[0, 1, 2].map((i) => (
+          <div key={i} className="rounded-card bg-surface p-5 shadow-card ring-1 ring-line">
+            <Skeleton className="h-5 w-2/3" />
+            <Skeleton className="mt-2 h-4 w-1/2" />
+            <div className="mt-4 grid grid-cols-2 gap-2">
+              {[0, 1, 2, 3].map((j) => <Skeleton key={j} className="h-11" />)}
+            </div>
           </div>
-        </li>
-      ))}
-    </ul>
+        ))}
+      </div>
+    </Loading>
   );
 }

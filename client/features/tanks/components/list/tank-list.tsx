@@ -1,17 +1,17 @@
-import { Link, useSearchParams } from 'react-router';
+import { useSearchParams } from 'react-router';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { useTankList } from '../../api/tanks';
 import type { UnitPrefs } from '@client/lib/display-units';
 import { FishIcon } from '@client/components/ui/icons';
+import { ButtonLink } from '@client/components/ui/button';
 import { TankCard, TankListSkeleton } from './tank-card';
 
-const linkButton = 'inline-flex min-h-touch items-center justify-center rounded-full px-5 font-bold';
 
 function Toggle({ label, checked, onChange }: { label: string; checked: boolean; onChange: (v: boolean) => void }) {
   return (
-    <label className="inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-white px-4 text-sm font-bold text-tide-800 ring-1 ring-tide-200">
-      <input type="checkbox" className="size-5 accent-tide-700" checked={checked} onChange={(e) => onChange(e.target.checked)} />
+    <label className="inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-surface px-4 text-sm font-bold text-ink-soft ring-1 ring-line-strong">
+      <input type="checkbox" className="size-5 accent-accent" checked={checked} onChange={(e) => onChange(e.target.checked)} />
       {label}
     </label>
   );
@@ -20,14 +20,14 @@ function Toggle({ label, checked, onChange }: { label: string; checked: boolean;
 function EmptyState({ canCreate, others }: { canCreate: boolean; others: boolean }) {
   return (
     <Card className="text-center">
-      <span className="inline-grid size-14 place-items-center rounded-full bg-tide-50 text-tide-700 [&>svg]:size-8"><FishIcon /></span>
-      <h2 className="mt-2 text-xl font-extrabold text-tide-900">No tanks yet</h2>
-      <p className="mx-auto mt-1 max-w-md text-tide-700">
+      <span className="inline-grid size-14 place-items-center rounded-full bg-tint text-ink-muted [&>svg]:size-8"><FishIcon /></span>
+      <h2 className="mt-2 text-xl font-extrabold text-ink">No tanks yet</h2>
+      <p className="mx-auto mt-1 max-w-md text-ink-muted">
         {others
           ? 'When the members you mentor add their tanks, they will show up here.'
           : 'Add your first tank: its size, what will live in it and whether it is still cycling. Then log your water tests here, and your mentor can follow along.'}
       </p>
-      {canCreate ? <Link to="/tanks/new" className={`${linkButton} mt-4 bg-tide-700 text-white`}>Add my first tank</Link> : null}
+      {canCreate ? <ButtonLink to="/tanks/new" className="mt-4">Add my first tank</ButtonLink> : null}
     </Card>
   );
 }
@@ -52,7 +52,7 @@ export function TankList({ clubId, clubName, userId, prefs, oversees, canCreate 
       <PageHeader
         title={oversees && !mine ? 'Tanks' : 'My tanks'}
         subtitle={oversees && !mine ? `Tanks in ${clubName} you can follow.` : 'Your tanks and how long since each was tested.'}
-        actions={canCreate && list.length ? <Link to="/tanks/new" className={`${linkButton} bg-tide-700 text-white`}>Add a tank</Link> : undefined}
+        actions={canCreate && list.length ? <ButtonLink to="/tanks/new">Add a tank</ButtonLink> : undefined}
       />
       <div className="mb-4 flex flex-wrap gap-2">
         {oversees ? <Toggle label="Only my own tanks" checked={mine} onChange={(v) => set('mine', v)} /> : null}

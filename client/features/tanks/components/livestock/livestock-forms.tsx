@@ -32,7 +32,7 @@ export function AddLivestockForm({ onSave, onCancel }: { onSave: (input: z.outpu
   const { formError, attempt } = useSaveErrors(ADD_FIELDS, setError);
   const e = formState.errors;
   return (
-    <form noValidate className="space-y-3 rounded-xl bg-tide-50 p-4" onSubmit={handleSubmit((v) => attempt(() => onSave(v)))}>
+    <form noValidate className="space-y-3 rounded-xl bg-tint p-4" onSubmit={handleSubmit((v) => attempt(() => onSave(v)))}>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       <CautionFor kind="buyingAnimals" title="Before you buy" />
       <div className="grid gap-3 sm:grid-cols-[1fr_7rem_11rem]">
@@ -66,7 +66,7 @@ export function LeaveLivestockForm({ name, onSave, onCancel }: { name: string; o
   const { register, handleSubmit, setError, formState } = useForm<LeaveDraft, unknown, z.output<typeof updateLivestockSchema>>({ resolver, defaultValues: { removedOn: todayIsoDate(), removalReason: '' } });
   const { formError, attempt } = useSaveErrors(LEAVE_FIELDS, setError);
   return (
-    <form noValidate className="mt-2 space-y-3 rounded-xl bg-sand-100 p-3" onSubmit={handleSubmit((v) => attempt(() => onSave(v)))}>
+    <form noValidate className="mt-2 space-y-3 rounded-xl bg-tint p-3" onSubmit={handleSubmit((v) => attempt(() => onSave(v)))}>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       <div className="grid gap-3 sm:grid-cols-[11rem_1fr]">
         <TextField label={`${name} left on`} type="date" max={todayIsoDate()} error={formState.errors.removedOn?.message} {...register('removedOn')} />

@@ -12,15 +12,15 @@ function Animal({ a, editable, onLeave }: { a: LivestockView; editable: boolean;
   return (
     <div className="flex flex-wrap items-start justify-between gap-2">
       <div>
-        <p className="font-bold text-tide-900">
+        <p className="font-bold text-ink">
           {a.count} × {a.speciesCommonName}
         </p>
-        <p className="text-sm text-tide-700">
+        <p className="text-sm text-ink-muted">
           Added {day(a.addedOn)}
           {a.source ? ` · from ${a.source}` : ''}
           {a.removedOn ? ` · left ${day(a.removedOn)}${a.removalReason ? `: ${a.removalReason}` : ''}` : ''}
         </p>
-        {a.quarantineNotes ? <p className="text-sm text-tide-700">Quarantine: {a.quarantineNotes}</p> : null}
+        {a.quarantineNotes ? <p className="text-sm text-ink-muted">Quarantine: {a.quarantineNotes}</p> : null}
       </div>
       {editable && onLeave ? <Button variant="ghost" onClick={onLeave}>They left…</Button> : null}
     </div>
@@ -37,8 +37,8 @@ export function LivestockPanel({ clubId, tankId, livestock, editable }: { clubId
   const past = livestock.filter((l) => l.removedOn);
   return (
     <div className="space-y-3">
-      {current.length === 0 ? <p className="text-tide-700">No animals recorded. Cycle the tank fully before the first ones go in.</p> : null}
-      <ul className="divide-y divide-tide-100">
+      {current.length === 0 ? <p className="text-ink-muted">No animals recorded. Cycle the tank fully before the first ones go in.</p> : null}
+      <ul className="divide-y divide-line">
         {current.map((a) => (
           <li key={a.id} className="py-3">
             <Animal a={a} editable={editable} onLeave={() => setLeaving(a.id)} />
@@ -70,8 +70,8 @@ export function LivestockPanel({ clubId, tankId, livestock, editable }: { clubId
       ) : null}
       {past.length ? (
         <details>
-          <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-tide-700">Animals that have left ({past.length})</summary>
-          <ul className="divide-y divide-tide-100">
+          <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">Animals that have left ({past.length})</summary>
+          <ul className="divide-y divide-line">
             {past.map((a) => <li key={a.id} className="py-2"><Animal a={a} editable={false} /></li>)}
           </ul>
         </details>

@@ -8,7 +8,8 @@ import { SYSTEM_TYPE_LABELS, TANK_PHASE_LABELS } from '@shared/constants/tank-la
 import { createTankSchema, TANK_PHASES } from '@shared/schemas/tank.schema';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
-import { SelectField, TextAreaField, TextField } from '@client/components/ui/field';
+import { TextAreaField, TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
 import { CautionFor } from '@client/components/ui/cautions';
 import { PhotoPicker } from '@client/components/ui/photo-picker';
 import { PhotoRetry } from '@client/components/ui/photo-retry';
@@ -71,17 +72,17 @@ export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved 
           </div>
           <VolumeFields prefs={prefs} />
           <fieldset className="space-y-3">
-            <legend className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Where it is at</legend>
+            <legend className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Where it is at</legend>
             <div className="grid gap-4 sm:grid-cols-2">
               <TextField label="Set up on (optional)" type="date" max={todayIsoDate()} error={e.setUpOn?.message} {...register('setUpOn')} />
             </div>
             <div role="radiogroup" aria-label="Cycling or established" className="grid gap-2 sm:grid-cols-2">
               {TANK_PHASES.map((p) => (
-                <label key={p} className="flex min-h-touch cursor-pointer gap-3 rounded-xl p-3 ring-1 ring-tide-200 has-[:checked]:bg-tide-50 has-[:checked]:ring-2 has-[:checked]:ring-tide-600">
-                  <input type="radio" value={p} className="mt-1 size-5 accent-tide-700" {...register('phase')} />
+                <label key={p} className="flex min-h-touch cursor-pointer gap-3 rounded-xl p-3 ring-1 ring-line-strong has-[:checked]:bg-tint has-[:checked]:ring-2 has-[:checked]:ring-focus">
+                  <input type="radio" value={p} className="mt-1 size-5 accent-accent" {...register('phase')} />
                   <span>
-                    <span className="block font-bold text-tide-900">{TANK_PHASE_LABELS[p].label}</span>
-                    <span className="block text-sm text-tide-700">{TANK_PHASE_LABELS[p].hint}</span>
+                    <span className="block font-bold text-ink">{TANK_PHASE_LABELS[p].label}</span>
+                    <span className="block text-sm text-ink-muted">{TANK_PHASE_LABELS[p].hint}</span>
                   </span>
                 </label>
               ))}

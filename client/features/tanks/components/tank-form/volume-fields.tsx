@@ -2,7 +2,9 @@ import { useFormContext, useWatch } from 'react-hook-form';
 import { TANK_SHAPES } from '@shared/chemistry/tank-volume';
 import { TANK_SHAPE_LABELS } from '@shared/constants/tank-labels';
 import { LENGTH_UNITS } from '@shared/schemas/tank.schema';
-import { SelectField, TextField } from '@client/components/ui/field';
+import { TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
+import { Choice } from '@client/components/ui/choice';
 import { formatVolume, type UnitPrefs } from '@client/lib/display-units';
 import { previewVolume, SHAPE_SIDES, type TankDraft } from '../../lib/tank-draft';
 
@@ -18,13 +20,12 @@ export function VolumeFields({ prefs }: { prefs: UnitPrefs }) {
   const preview = previewVolume(draft);
   return (
     <fieldset className="space-y-3">
-      <legend className="text-sm font-extrabold uppercase tracking-wide text-tide-600">Size</legend>
+      <legend className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Size</legend>
       <div role="radiogroup" aria-label="How to give the size" className="grid grid-cols-2 gap-2">
         {(['entered', 'dimensions'] as const).map((s) => (
-          <label key={s} className="flex min-h-touch cursor-pointer items-center justify-center rounded-xl px-3 text-center text-sm font-bold ring-1 ring-tide-200 has-[:checked]:bg-tide-700 has-[:checked]:text-white">
-            <input type="radio" value={s} className="sr-only" {...register('volume.source')} />
+          <Choice key={s} value={s} {...register('volume.source')}>
             {s === 'entered' ? 'I know the volume' : 'Work it out from the size'}
-          </label>
+          </Choice>
         ))}
       </div>
       {v.source === 'entered' ? (
@@ -38,14 +39,14 @@ export function VolumeFields({ prefs }: { prefs: UnitPrefs }) {
             <SelectField label="Shape" options={TANK_SHAPES.map((s) => ({ value: s, label: TANK_SHAPE_LABELS[s] }))} error={e?.shape?.message} {...register('volume.shape')} />
             <SelectField label="Measured in" options={LENGTH_UNITS.map((u) => ({ value: u, label: u === 'cm' ? 'Centimetres' : 'Inches' }))} {...register('volume.lengthUnit')} />
           </div>
-          <p className="text-sm text-tide-600">Measure inside the glass. Rock, sand and equipment take up room: say roughly how much below.</p>
+          <p className="text-sm text-ink-muted">Measure inside the glass. Rock, sand and equipment take up room: say roughly how much below.</p>
           <div className="grid grid-cols-2 gap-3">
             {SHAPE_SIDES[v.shape].map((side) => (
               <TextField key={side} label={`${SIDE_LABELS[side]}, ${v.lengthUnit}`} inputMode="decimal" autoComplete="off" error={e?.[side]?.message} {...register(`volume.${side}`)} />
             ))}
             <TextField label="Taken up by rock and sand, %" inputMode="decimal" autoComplete="off" hint="Often 10–20 %." error={e?.displacementPercent?.message} {...register('volume.displacementPercent')} />
           </div>
-          <div aria-live="polite" className="rounded-xl bg-tide-50 px-4 py-3 text-tide-800">
+          <div aria-live="polite" className="rounded-xl bg-tint px-4 py-3 text-ink-soft">
             {preview ? (
               <p>
                 Full to the brim: <strong>{formatVolume(preview.grossL, prefs)}</strong>
