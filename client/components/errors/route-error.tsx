@@ -1,5 +1,6 @@
 import { isRouteErrorResponse, useRouteError } from 'react-router';
 import { ButtonLink } from '@client/components/ui/button';
+import { PageTitle } from '@client/components/ui/page-title';
 import { ApiError } from '@client/lib/api-client';
 
 interface Words {
@@ -25,6 +26,7 @@ function describe(error: unknown, words: RouteErrorWords): Words {
 function ErrorMessage({ words, back, className }: { words: Words; back: { to: string; label: string }; className: string }) {
   return (
     <div className={className}>
+      <PageTitle title={words.title} />
       <h1 className="text-2xl font-extrabold text-ink">{words.title}</h1>
       <p className="mt-2 text-ink-muted">{words.detail}</p>
       <ButtonLink to={back.to} className="mt-6">

@@ -1,5 +1,7 @@
 import type { ReactNode } from 'react';
 import { NavLink, Outlet, useNavigation } from 'react-router';
+import { OfflineBanner } from './offline-banner';
+import { MAIN_ID, SkipLink } from './skip-link';
 
 export interface NavItem {
   to: string;
@@ -29,7 +31,8 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
   const navigation = useNavigation();
   return (
     <div className="min-h-dvh">
-      <header className="bg-chrome">
+      <SkipLink />
+      <header className="bg-chrome [--sw-focus:var(--sw-on-chrome)]">
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
@@ -39,7 +42,8 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         </div>
         {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-on-chrome-muted" aria-hidden /> : null}
       </header>
-      <main className="mx-auto max-w-5xl px-4 pt-6 pb-24 sm:pb-10">
+      <OfflineBanner />
+      <main id={MAIN_ID} tabIndex={-1} className="mx-auto max-w-5xl px-4 pt-6 pb-24 outline-none sm:pb-10">
         <Outlet />
       </main>
       <nav

@@ -1,5 +1,6 @@
 import type { ReactNode } from 'react';
 import { TONES, type Tone } from './badge';
+import { PageTitle } from './page-title';
 
 /** A white (in dark mode, deep) panel: the unit every screen is built from. `title` gives it a heading. */
 export function Card({ children, title, actions, className = '' }: { children: ReactNode; title?: ReactNode; actions?: ReactNode; className?: string }) {
@@ -39,6 +40,7 @@ export function AuthCard({ title, subtitle, children }: { title: string; subtitl
   return (
     <div className="mx-auto max-w-md">
       <Card>
+        <PageTitle title={title} />
         <h1 className="text-2xl font-extrabold text-ink">{title}</h1>
         {subtitle ? <p className="mt-1 text-ink-muted">{subtitle}</p> : null}
         <div className="mt-5">{children}</div>

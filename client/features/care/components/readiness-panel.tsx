@@ -6,6 +6,7 @@ import { Notice } from '@client/components/ui/card';
 import { ApiError } from '@client/lib/api-client';
 import { useSaveChecklist, useSignOff, useWithdrawSignOff, type CareSummary } from '../api/care';
 import { CautionFor } from '@client/components/ui/cautions';
+import { ConfirmButton } from '@client/components/ui/confirm-dialog';
 
 const CHECKS = [
   { key: 'equipmentRunning', label: 'Heater, pump and lights have run for a while without trouble' },
@@ -59,9 +60,9 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
       </Can>
       <Can<AppAbility> I="signOff" this={tank}>
         {readiness.signOff ? (
-          <Button variant="ghost" busy={withdraw.isPending} onClick={() => window.confirm('Withdraw your sign-off? The member will see the tank as not ready.') && withdraw.mutate()}>
+          <ConfirmButton title="Withdraw your sign-off?" question="The member will see the tank as not ready for animals until you sign it off again." confirmLabel="Withdraw it" busy={withdraw.isPending} onConfirm={() => withdraw.mutateAsync()}>
             Withdraw my sign-off
-          </Button>
+          </ConfirmButton>
         ) : (
           <Button
             busy={signOff.isPending}

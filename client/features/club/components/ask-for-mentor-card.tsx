@@ -5,8 +5,8 @@ import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { Loading } from '@client/components/ui/skeleton';
 import { TextAreaField } from '@client/components/ui/field';
+import { RelativeTime } from '@client/components/ui/relative-time';
 import { ApiError } from '@client/lib/api-client';
-import { relativeTime } from '@client/lib/relative-time';
 import { useSocketEvent } from '@client/lib/socket';
 import { useMembers } from '../api/club';
 import { mentorRequestKeys, useAskForMentor, useMyRequest } from '../api/mentor-requests';
@@ -70,7 +70,7 @@ export function AskForMentorCard({ clubId, userId }: { clubId: string; userId: s
       <h2 className="text-lg font-extrabold text-ink">{request?.state === 'open' ? 'Your mentor request' : 'Ask for a mentor'}</h2>
       {request?.state === 'open' ? (
         <div className="mt-2 space-y-2 text-ink-soft">
-          <Notice tone="info">Sent {relativeTime(request.createdAt)}. A club admin will pair you with a mentor; you’ll get a notification.</Notice>
+          <Notice tone="info">Sent <RelativeTime at={request.createdAt} />. A club admin will pair you with a mentor; you’ll get a notification.</Notice>
           {request.preferredMentor ? <p className="text-sm">You asked for {request.preferredMentor.displayName}.</p> : null}
           {request.note ? <p className="text-sm">“{request.note}”</p> : null}
         </div>

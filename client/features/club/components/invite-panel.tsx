@@ -9,6 +9,7 @@ import { Card, Notice } from '@client/components/ui/card';
 import { TextField } from '@client/components/ui/field';
 import { SelectField } from '@client/components/ui/select';
 import { Loading } from '@client/components/ui/skeleton';
+import { ConfirmButton } from '@client/components/ui/confirm-dialog';
 import { formatDay } from '@client/lib/date-format';
 import { fieldsIn, placeServerErrors } from '@client/lib/form-errors';
 import { useInvites, useResendInvite, useRevokeInvite, useSendInvite } from '../api/club';
@@ -59,9 +60,15 @@ export function InvitePanel({ clubId }: { clubId: string }) {
               </div>
               <div className="flex gap-2">
                 <Button variant="secondary" busy={resend.isPending && resend.variables === i.id} onClick={() => resend.mutate(i.id, { onSuccess: () => setNotice({ tone: 'success', text: `Sent a fresh link to ${i.email}. The old link no longer works.` }) })}>Resend</Button>
-                <Button variant="ghost" onClick={() => {
-                  if (window.confirm(`Withdraw the invitation to ${i.email}? The link in their e-mail will stop working.`)) revoke.mutate(i.id);
-                }}>Withdraw</Button>
+                <ConfirmButton
+                  title="Withdraw this invitation?"
+                  question={`The link in ${i.email}'s e-mail will stop working. You can invite them again later.`}
+                  confirmLabel="Withdraw it"
+                  busy={revoke.isPending && revoke.variables === i.id}
+                  onConfirm={() => revoke.mutateAsync(i.id)}
+                >
+                  Withdraw
+                </ConfirmButton>
               </div>
             </li>
           ))}

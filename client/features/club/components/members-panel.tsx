@@ -1,9 +1,9 @@
 import { useState } from 'react';
 import { ROLE_LABELS } from '@shared/constants/roles';
-import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { Loading } from '@client/components/ui/skeleton';
 import { Select } from '@client/components/ui/select';
+import { ConfirmButton } from '@client/components/ui/confirm-dialog';
 import { ApiError } from '@client/lib/api-client';
 import { useAssignMentor, useAssignments, useEndAssignment, useMembers, type ClubMember } from '../api/club';
 
@@ -61,7 +61,15 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
                     ))}
                   </Select>
                   {a ? (
-                    <Button variant="ghost" onClick={() => window.confirm(`End ${byId.get(a.mentorId)?.displayName ?? 'the mentor'}'s mentoring of ${p.displayName}? They keep read-only access for 30 days.`) && end.mutate(a.id)}>End</Button>
+                    <ConfirmButton
+                      title="End this mentoring?"
+                      question={`${byId.get(a.mentorId)?.displayName ?? 'The mentor'} stops mentoring ${p.displayName}. They keep read-only access for 30 days.`}
+                      confirmLabel="End mentoring"
+                      busy={end.isPending && end.variables === a.id}
+                      onConfirm={() => end.mutateAsync(a.id)}
+                    >
+                      End
+                    </ConfirmButton>
                   ) : null}
                 </div>
               ) : null}

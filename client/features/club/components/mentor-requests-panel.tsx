@@ -6,8 +6,8 @@ import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { Loading } from '@client/components/ui/skeleton';
 import { TextAreaField } from '@client/components/ui/field';
+import { RelativeTime } from '@client/components/ui/relative-time';
 import { ApiError } from '@client/lib/api-client';
-import { relativeTime } from '@client/lib/relative-time';
 import { useSocketEvent } from '@client/lib/socket';
 import { useMembers, type ClubMember } from '../api/club';
 import { mentorRequestKeys, useAcceptRequest, useDeclineRequest, useOpenRequests } from '../api/mentor-requests';
@@ -31,7 +31,7 @@ function RequestRow({ clubId, request, members }: { clubId: string; request: Men
     <li className="py-4">
       <p className="font-bold text-ink">{name}</p>
       <p className="text-sm text-ink-muted">
-        Asked {relativeTime(request.createdAt)}
+        Asked <RelativeTime at={request.createdAt} />
         {request.preferredMentor ? ` · would like ${request.preferredMentor.displayName}` : ''}
       </p>
       {request.note ? <p className="mt-1 text-ink-soft">“{request.note}”</p> : null}

@@ -1,5 +1,5 @@
 import type { NotificationView } from '@shared/schemas/notification-views';
-import { relativeTime } from '@client/lib/relative-time';
+import { RelativeTime } from '@client/components/ui/relative-time';
 
 const ACCENT: Partial<Record<NotificationView['kind'], string>> = {
   'concern.urgent': 'bg-danger-solid',
@@ -24,7 +24,7 @@ export function NotificationList(p: {
               <span className={`block text-sm ${unread ? 'font-extrabold text-ink' : 'font-semibold text-ink-soft'}`}>{n.title}</span>
               {n.body ? <span className="mt-0.5 line-clamp-2 block text-sm text-ink-muted">{n.body}</span> : null}
               <span className="mt-0.5 block text-xs text-ink-muted">
-                {n.clubName} · {relativeTime(n.createdAt)}
+                {n.clubName} · <RelativeTime at={n.createdAt} />
                 {unread ? <span className="sr-only"> · unread</span> : null}
               </span>
             </button>

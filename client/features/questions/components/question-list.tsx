@@ -2,7 +2,7 @@ import { Link } from 'react-router';
 import type { QuestionSummaryView } from '@shared/schemas/question-views';
 import { Card, Notice } from '@client/components/ui/card';
 import { Loading } from '@client/components/ui/skeleton';
-import { relativeTime } from '@client/lib/relative-time';
+import { RelativeTime } from '@client/components/ui/relative-time';
 import { useQuestions, type ListStatus } from '../api/questions';
 
 function StatusMark({ q }: { q: QuestionSummaryView }) {
@@ -22,7 +22,7 @@ export function QuestionRow({ q, showAsker }: { q: QuestionSummaryView; showAske
         <p className="mt-1 text-lg font-extrabold text-ink">{q.title}</p>
         <p className="text-sm text-ink-muted">
           {showAsker ? `${q.asker.displayName} · ` : ''}
-          {q.replyCount === 0 ? 'no replies yet' : `${q.replyCount} ${q.replyCount === 1 ? 'reply' : 'replies'}`} · {relativeTime(q.lastActivityAt)}
+          {q.replyCount === 0 ? 'no replies yet' : `${q.replyCount} ${q.replyCount === 1 ? 'reply' : 'replies'}`} · <RelativeTime at={q.lastActivityAt} />
         </p>
       </Link>
     </li>

@@ -1,8 +1,7 @@
 import type { PersonRef } from '@shared/schemas/notification-views';
 import type { QuestionDetailView } from '@shared/schemas/question-views';
-import { relativeTime } from '@client/lib/relative-time';
-import { formatDayTime } from '@client/lib/date-format';
 import { MarkdownLite } from './markdown-lite';
+import { RelativeTime } from '@client/components/ui/relative-time';
 
 function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: string; body: string; names: string[]; isAsker: boolean }) {
   return (
@@ -10,7 +9,7 @@ function Message({ author, at, body, names, isAsker }: { author: PersonRef; at: 
       <p className="mb-2 flex flex-wrap items-baseline gap-x-2 text-sm">
         <span className="font-extrabold text-ink">{author.displayName}</span>
         {isAsker ? <span className="text-xs font-bold text-ink-muted">asked</span> : null}
-        <time dateTime={at} title={formatDayTime(at)} className="text-ink-muted">{relativeTime(at)}</time>
+        <RelativeTime at={at} className="text-ink-muted" />
       </p>
       <MarkdownLite text={body} mentionNames={names} />
     </li>

@@ -2,10 +2,11 @@ import { Link } from 'react-router';
 import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
 import type { PhotoView, TankDetailView } from '@shared/schemas/tank-views';
 import { formatVolume, type UnitPrefs } from '@client/lib/display-units';
-import { relativeTime } from '@client/lib/relative-time';
 import { ArchivedBadge, PhaseBadge } from './badges';
 import { TestTubeIcon } from '@client/components/ui/icons';
+import { PageTitle } from '@client/components/ui/page-title';
 import { ButtonLink } from '@client/components/ui/button';
+import { RelativeTime } from '@client/components/ui/relative-time';
 
 const dateFormat = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'long', year: 'numeric' });
 
@@ -20,6 +21,7 @@ export function TankHeader({ tank, prefs, profileName, photo, isOwn, canLog, can
         {photo ? <img src={photo.thumbUrl} alt={`Photo of ${tank.name}`} className="size-24 rounded-card object-cover shadow-card" /> : null}
         <div className="min-w-0 flex-1">
           <div className="flex flex-wrap items-center gap-2">
+            <PageTitle title={tank.name} />
             <h1 className="text-2xl font-extrabold text-ink">{tank.name}</h1>
             <PhaseBadge phase={tank.phase} />
             {tank.archivedAt ? <ArchivedBadge /> : null}
@@ -27,7 +29,7 @@ export function TankHeader({ tank, prefs, profileName, photo, isOwn, canLog, can
           <dl className="mt-2 grid grid-cols-2 gap-x-6 gap-y-1 text-sm sm:flex sm:flex-wrap">
             <div><dt className="inline font-bold text-ink-muted">Kind: </dt><dd className="inline text-ink">{SYSTEM_TYPE_LABELS[tank.systemType]}</dd></div>
             <div><dt className="inline font-bold text-ink-muted">Water: </dt><dd className="inline text-ink">{formatVolume(tank.volumeL, prefs)}{tank.volume.source === 'dimensions' ? ` (tank ${formatVolume(tank.volume.grossL, prefs)})` : ''}</dd></div>
-            {setUp ? <div><dt className="inline font-bold text-ink-muted">Set up: </dt><dd className="inline text-ink">{dateFormat.format(setUp)} ({relativeTime(setUp.toISOString())})</dd></div> : null}
+            {setUp ? <div><dt className="inline font-bold text-ink-muted">Set up: </dt><dd className="inline text-ink">{dateFormat.format(setUp)} (<RelativeTime at={setUp} />)</dd></div> : null}
             <div><dt className="inline font-bold text-ink-muted">Animals: </dt><dd className="inline text-ink">{animals || 'none yet'}</dd></div>
             {profileName ? <div><dt className="inline font-bold text-ink-muted">Profile: </dt><dd className="inline text-ink">{profileName}</dd></div> : null}
             {!isOwn ? <div><dt className="inline font-bold text-ink-muted">Kept by: </dt><dd className="inline text-ink">{tank.owner.displayName}</dd></div> : null}

@@ -1,6 +1,7 @@
 import { ComposedChart, Legend, Line, ResponsiveContainer, Tooltip, YAxis } from 'recharts';
 import { parameterInfo } from '@shared/care/parameters';
 import type { WaterTestView } from '@shared/schemas/tank-views';
+import { ChartFigures } from '@client/components/charts/chart-figures';
 import { ChartTooltip } from '@client/components/charts/chart-tooltip';
 import { gridLines, markerLines, timeAxis } from '@client/components/charts/time-chart-parts';
 import { CHART_COLOURS } from '@client/lib/chart-data';
@@ -32,13 +33,16 @@ export function NitrogenChart({ tests, frame }: { tests: readonly WaterTestView[
     .sort((a, b) => a.t - b.t);
   if (rows.length === 0) return null;
   const label = (k: (typeof SERIES)[number]['key']) => `${parameterInfo(k).label} (${parameterInfo(k).unit})`;
+  const last = rows[rows.length - 1]!;
+  const lastWords = SERIES.filter((s) => last[s.key] !== undefined).map((s) => `${parameterInfo(s.key).label.toLowerCase()} ${Number(last[s.key]!.toFixed(2))}`);
+  const summary = `Ammonia, nitrite and nitrate over time: ${rows.length} ${rows.length === 1 ? 'test' : 'tests'}${lastWords.length ? `, the latest ${lastWords.join(', ')}` : ''}.`;
   return (
     <figure className="rounded-card bg-surface p-4 shadow-card" data-chart="nitrogen-cycle">
       <figcaption>
         <h3 className="font-extrabold text-ink">The nitrogen cycle</h3>
         <p className="text-sm text-ink-muted">While a tank cycles, ammonia peaks first, then nitrite; the tank is cycled when both stay at 0 and only nitrate is left.</p>
       </figcaption>
-      <div role="img" aria-label={`Ammonia, nitrite and nitrate over time: ${rows.length} tests.`} className="mt-2 h-64">
+      <div role="img" aria-label={summary} className="mt-2 h-64">
         <ResponsiveContainer width="100%" height="100%">
           <ComposedChart data={rows} margin={{ top: 10, right: 0, bottom: 0, left: 0 }}>
             {gridLines()}
@@ -66,6 +70,7 @@ export function NitrogenChart({ tests, frame }: { tests: readonly WaterTestView[
           </ComposedChart>
         </ResponsiveContainer>
       </div>
+      <ChartFigures summary={summary} columns={SERIES.map((s) => ({ label: label(s.key), format: (v: number) => String(Number(v.toFixed(2))) }))} rows={rows.map((r) => ({ t: r.t, values: SERIES.map((s) => r[s.key]) }))} />
     </figure>
   );
 }

@@ -4,11 +4,11 @@ import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
 import type { TankView } from '@shared/schemas/tank-views';
 import { Loading, Skeleton } from '@client/components/ui/skeleton';
 import { VerdictIcon, verdictTone } from '@client/components/ui/verdict-mark';
+import { RelativeTime } from '@client/components/ui/relative-time';
 import { verdictFor } from '@client/lib/bands';
 import { useTankProfile } from '@client/lib/care-profiles';
 import { formatDisplay, formatVolume, type UnitPrefs } from '@client/lib/display-units';
 import { latestValues } from '@client/lib/latest-values';
-import { relativeTime } from '@client/lib/relative-time';
 import { useRecentTests } from '../../api/recent-tests';
 import { freshness, shortestCadenceDays, type Freshness } from '../../lib/freshness';
 import { ArchivedBadge, PhaseBadge } from '../badges';
@@ -30,7 +30,7 @@ function LastTested({ at, level }: { at: string | null; level: Freshness }) {
     <p className={`flex items-center gap-1.5 text-sm font-bold ${FRESHNESS_TONE[level]}`}>
       {level !== 'fresh' ? <VerdictIcon level={level === 'stale' ? 'danger' : 'caution'} /> : null}
       <span>
-        Last test <time dateTime={at} title={new Date(at).toLocaleString()}>{relativeTime(at)}</time>
+        Last test <RelativeTime at={at} />
         {word}
       </span>
     </p>
