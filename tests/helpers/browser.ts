@@ -115,12 +115,15 @@ const describeViolation = (v: Result) =>
  */
 export async function expectAccessible(page: Page, what = new URL(page.url()).pathname): Promise<void> {
   const failures: string[] = [];
+  // Colours ease between schemes (transition-colors); judge the settled colours, not a frame half-way.
+  const still = await page.addStyleTag({ content: '*, *::before, *::after { transition: none !important; animation: none !important; }' });
   for (const colorScheme of ['light', 'dark'] as const) {
     await page.emulateMedia({ colorScheme });
     const { violations } = await new AxeBuilder({ page }).withTags(WCAG_21_AA).analyze();
     failures.push(...violations.map((v) => `[${colorScheme}] ${describeViolation(v)}`));
   }
   await page.emulateMedia({ colorScheme: null });
+  await still.evaluate((style) => (style as Element).remove());
   if (failures.length) throw new Error(`Accessibility violations on ${what}:\n${failures.join('\n')}`);
 }
 
