@@ -11,4 +11,5 @@ export { cycleStage } from './cycle-stage';
 export * from './due-tests';
 export * from './triage';
 export * from './stocking-readiness';
-export { sortByTakenAt } from './readings';
+export { sortByTakenAt, type KnownValue, type SeriesPoint } from './readings';
+export { indexTests, TestTimeline } from './test-timeline';

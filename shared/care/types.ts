@@ -1,5 +1,6 @@
 import type { AnyParameterKey, ParameterKey } from './parameters';
 import type { SystemType } from './system-types';
+import type { TestTimeline } from './test-timeline';
 
 /** One water test as the member entered it, already converted to canonical units. */
 export interface WaterTestInput {
@@ -41,8 +42,11 @@ export interface TankContext {
 
 export interface EvaluationContext {
   tank: TankContext;
-  /** Earlier tests of the same tank, any order. May include the reading itself; it is ignored. */
-  history: readonly WaterTestInput[];
+  /**
+   * Earlier tests of the same tank, any order. May include the reading itself; it is ignored. Pass a
+   * `TestTimeline` (`indexTests(tests)`) when judging the same history more than once: it is read once.
+   */
+  history: readonly WaterTestInput[] | TestTimeline;
   sourceWater?: { nitrate?: number };
   /** ISO timestamp; the engine never reads the clock. */
   now: string;

@@ -1,9 +1,9 @@
 import { freeAmmonia } from '@shared/chemistry';
 import { formatNumber, type ParameterKey } from '../parameters';
 import type { CareProfile } from '../profiles/types';
-import { lastKnownValue } from '../readings';
 import { isSaltwaterSystem, type SystemType } from '../system-types';
-import { isoDate } from '../time';
+import { indexTests, type TestTimeline } from '../test-timeline';
+import { isoDate, toMs } from '../time';
 import type { WaterTestInput } from '../types';
 
 export type InputSource = 'this-test' | 'last-known' | 'assumed';
@@ -29,22 +29,24 @@ export type FreeAmmoniaOutcome = { ok: true; result: FreeAmmoniaResult } | { ok:
 function fromTestOrHistory(
   parameter: ParameterKey,
   reading: WaterTestInput,
-  history: readonly WaterTestInput[],
+  history: TestTimeline,
+  readingMs: number,
 ): ResolvedInput | null {
   const own = reading.values[parameter];
   if (own !== undefined) return { value: own, source: 'this-test' };
-  const known = lastKnownValue(history, parameter, reading.takenAt, reading.id);
+  const known = history.lastKnown(parameter, readingMs, reading.id);
   return known ? { value: known.value, source: 'last-known', detail: isoDate(known.takenAt) } : null;
 }
 
 function resolveSalinity(
   reading: WaterTestInput,
-  history: readonly WaterTestInput[],
+  history: TestTimeline,
+  readingMs: number,
   systemType: SystemType,
   profile: CareProfile,
 ): ResolvedInput {
   if (!isSaltwaterSystem(systemType)) return { value: 0, source: 'assumed', detail: 'fresh water' };
-  const found = fromTestOrHistory('salinity', reading, history);
+  const found = fromTestOrHistory('salinity', reading, history, readingMs);
   if (found) return found;
   const band = profile.ranges.salinity?.ideal ?? [35, 35];
   return {
@@ -75,21 +77,26 @@ function describeInputs(items: readonly { text: string; input: ResolvedInput }[]
     .join('; ');
 }
 
-/** Free (un-ionized) NH3 for a reading, using the tank's last known pH/temperature/salinity where the test lacks them. */
+/**
+ * Free (un-ionized) NH3 for a reading, using the tank's last known pH/temperature/salinity where the test
+ * lacks them. Tests in `history` with the reading's id are never used.
+ */
 export function computeFreeAmmonia(
   reading: WaterTestInput,
   totalAmmonia: number,
-  history: readonly WaterTestInput[],
+  tests: readonly WaterTestInput[] | TestTimeline,
   systemType: SystemType,
   profile: CareProfile,
 ): FreeAmmoniaOutcome {
-  const tempC = fromTestOrHistory('temperature', reading, history);
-  const pH = fromTestOrHistory('pH', reading, history);
+  const history = indexTests(tests);
+  const readingMs = toMs(reading.takenAt);
+  const tempC = fromTestOrHistory('temperature', reading, history, readingMs);
+  const pH = fromTestOrHistory('pH', reading, history, readingMs);
   if (!tempC || !pH) {
     const missing = [!pH && 'pH', !tempC && 'temperature'].filter(Boolean).join(' and ');
     return { ok: false, why: `no ${missing} has been recorded for this tank` };
   }
-  const salinity = resolveSalinity(reading, history, systemType, profile);
+  const salinity = resolveSalinity(reading, history, readingMs, systemType, profile);
   try {
     const { nh3 } = freeAmmonia({
       total: totalAmmonia,
