@@ -225,7 +225,8 @@ export function cycleStage(
   const tests: WaterTestInput[] = [];
   const times: number[] = [];
   timeline.tests.forEach((t, i) => {
-    if (t.values.ammonia === undefined && t.values.nitrite === undefined && t.values.nitrate === undefined) return;
+    if (t.values.ammonia === undefined && t.values.nitrite === undefined && t.values.nitrate === undefined)
+      return;
     tests.push(t);
     times.push(timeline.times[i] as number);
   });
@@ -246,7 +247,11 @@ export function cycleStage(
   };
   tests.forEach((t, i) => step(s, o, t, times[i] as number));
   const lastMs = times[times.length - 1];
-  const result: CycleStageResult = { stage: s.stage, since: s.since, evidence: evidence(s, o, tests, lastMs ?? NaN) };
+  const result: CycleStageResult = {
+    stage: s.stage,
+    since: s.since,
+    evidence: evidence(s, o, tests, lastMs ?? NaN),
+  };
   const projection = lastMs === undefined ? undefined : project(s, o, lastMs);
   if (projection) result.projectedDoneAt = projection;
   return result;

@@ -26,9 +26,23 @@ export function engineOrder(tests: readonly WaterTestInput[]): { order: number[]
   const order = tests.map((_, i) => i);
   let sorted = true;
   for (let i = 1; i < tests.length && sorted; i++) {
-    sorted = compareTests(times[i - 1] as number, (tests[i - 1] as WaterTestInput).id, times[i] as number, (tests[i] as WaterTestInput).id) <= 0;
+    sorted =
+      compareTests(
+        times[i - 1] as number,
+        (tests[i - 1] as WaterTestInput).id,
+        times[i] as number,
+        (tests[i] as WaterTestInput).id,
+      ) <= 0;
   }
-  if (!sorted) order.sort((a, b) => compareTests(times[a] as number, (tests[a] as WaterTestInput).id, times[b] as number, (tests[b] as WaterTestInput).id));
+  if (!sorted)
+    order.sort((a, b) =>
+      compareTests(
+        times[a] as number,
+        (tests[a] as WaterTestInput).id,
+        times[b] as number,
+        (tests[b] as WaterTestInput).id,
+      ),
+    );
   return { order, times };
 }
 

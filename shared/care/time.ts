@@ -28,8 +28,15 @@ function daysFromCivil(year: number, month: number, day: number): number {
  * every test's time; other shapes go to Date.parse, so the answer is always Date.parse's.
  */
 function canonicalMs(iso: string): number | null {
-  if (iso.length !== 24 || iso.charCodeAt(4) !== 45 || iso.charCodeAt(7) !== 45 || iso.charCodeAt(10) !== 84) return null;
-  if (iso.charCodeAt(13) !== 58 || iso.charCodeAt(16) !== 58 || iso.charCodeAt(19) !== 46 || iso.charCodeAt(23) !== 90) return null;
+  if (iso.length !== 24 || iso.charCodeAt(4) !== 45 || iso.charCodeAt(7) !== 45 || iso.charCodeAt(10) !== 84)
+    return null;
+  if (
+    iso.charCodeAt(13) !== 58 ||
+    iso.charCodeAt(16) !== 58 ||
+    iso.charCodeAt(19) !== 46 ||
+    iso.charCodeAt(23) !== 90
+  )
+    return null;
   const year = digits(iso, 0, 4);
   const month = digits(iso, 5, 2);
   const day = digits(iso, 8, 2);
@@ -41,7 +48,9 @@ function canonicalMs(iso: string): number | null {
   if (minute < 0 || minute > 59 || second < 0 || second > 59 || milli < 0) return null;
   const leap = month === 2 && year % 4 === 0 && (year % 100 !== 0 || year % 400 === 0);
   if (day > (DAYS_IN_MONTH[month - 1] as number) + (leap ? 1 : 0)) return null;
-  return daysFromCivil(year, month, day) * DAY_MS + hour * 3_600_000 + minute * 60_000 + second * 1000 + milli;
+  return (
+    daysFromCivil(year, month, day) * DAY_MS + hour * 3_600_000 + minute * 60_000 + second * 1000 + milli
+  );
 }
 
 export function toMs(iso: string): number {

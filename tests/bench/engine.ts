@@ -5,7 +5,14 @@
  * noisy machine. Figures only: nothing here passes or fails a build.
  */
 import { Bench } from 'tinybench';
-import { cycleStage, evaluateReading, indexTests, SEAHORSE_LARGE_PROFILE, type EvaluationContext, type WaterTestInput } from '../../shared/care';
+import {
+  cycleStage,
+  evaluateReading,
+  indexTests,
+  SEAHORSE_LARGE_PROFILE,
+  type EvaluationContext,
+  type WaterTestInput,
+} from '../../shared/care';
 import { generateHistory } from '../unit/care/histories';
 
 export interface EngineFigure {
@@ -41,14 +48,20 @@ function contextFor(history: readonly WaterTestInput[]): EvaluationContext {
 function median(samples: readonly number[]): number {
   const sorted = [...samples].sort((a, b) => a - b);
   const mid = sorted.length >> 1;
-  return sorted.length % 2 ? (sorted[mid] as number) : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
+  return sorted.length % 2
+    ? (sorted[mid] as number)
+    : ((sorted[mid - 1] as number) + (sorted[mid] as number)) / 2;
 }
 
 export async function runEngineBench(time = 700): Promise<EngineFigure[]> {
   const tests365 = year();
   const tests120 = tests365.filter((t) => Date.parse(t.takenAt) > END - 120 * DAY);
   // The test being judged is the newest, with ammonia so free NH3 is worked out from history.
-  const latest: WaterTestInput = { id: 'latest', takenAt: new Date(END).toISOString(), values: { ammonia: 0.25, nitrate: 12 } };
+  const latest: WaterTestInput = {
+    id: 'latest',
+    takenAt: new Date(END).toISOString(),
+    values: { ammonia: 0.25, nitrate: 12 },
+  };
   const ctx365 = contextFor([...tests365, latest]);
   const ctx120 = contextFor([...tests120, latest]);
   const goals: Record<string, number> = {};
@@ -66,13 +79,33 @@ export async function runEngineBench(time = 700): Promise<EngineFigure[]> {
     });
   };
   // What a caller pays when it passes a plain array: the history is indexed inside each call.
-  add('evaluateReading, 120 days of tests as an array', 20, () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, ctx120).length);
-  add('evaluateReading, 365 days of tests as an array', 20, () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, ctx365).length);
+  add(
+    'evaluateReading, 120 days of tests as an array',
+    20,
+    () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, ctx120).length,
+  );
+  add(
+    'evaluateReading, 365 days of tests as an array',
+    20,
+    () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, ctx365).length,
+  );
   // Indexed once per tank (indexTests), then shared by every engine call on that history.
   add('indexTests (365 days of tests, once per tank)', undefined, () => indexTests(ctx365.history).length);
-  add('evaluateReading, 365 days already indexed', 20, () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, indexed365).length);
-  add('cycleStage, 365 days of tests as an array', 1000, () => cycleStage(tests365, { now: ctx365.now }).evidence.length);
-  add('cycleStage, 365 days already indexed', 1000, () => cycleStage(timeline365, { now: ctx365.now }).evidence.length);
+  add(
+    'evaluateReading, 365 days already indexed',
+    20,
+    () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, indexed365).length,
+  );
+  add(
+    'cycleStage, 365 days of tests as an array',
+    1000,
+    () => cycleStage(tests365, { now: ctx365.now }).evidence.length,
+  );
+  add(
+    'cycleStage, 365 days already indexed',
+    1000,
+    () => cycleStage(timeline365, { now: ctx365.now }).evidence.length,
+  );
   await bench.run();
   if (sink === -1) console.log('unreachable');
   const baseTask = bench.tasks.find((t) => t.name === BASELINE)?.result;
@@ -96,10 +129,18 @@ export async function runEngineBench(time = 700): Promise<EngineFigure[]> {
 
 export function printEngineFigures(figures: readonly EngineFigure[]): void {
   const cols = ['median µs', 'mean µs', 'p99 µs', '× base', 'goal µs'];
-  console.log(`${'engine (median judged against the goal)'.padEnd(52)} ${cols.map((c) => c.padStart(10)).join(' ')}  verdict`);
+  console.log(
+    `${'engine (median judged against the goal)'.padEnd(52)} ${cols.map((c) => c.padStart(10)).join(' ')}  verdict`,
+  );
   for (const f of figures) {
     const verdict = f.goalUs === undefined ? '' : f.medianUs <= f.goalUs ? 'meets goal' : 'MISSES goal';
-    const cells = [f.medianUs.toFixed(2), f.meanUs.toFixed(2), f.p99Us.toFixed(2), f.ratioToBaseline.toFixed(1), f.goalUs?.toString() ?? ''];
+    const cells = [
+      f.medianUs.toFixed(2),
+      f.meanUs.toFixed(2),
+      f.p99Us.toFixed(2),
+      f.ratioToBaseline.toFixed(1),
+      f.goalUs?.toString() ?? '',
+    ];
     console.log(`${f.name.padEnd(52)} ${cells.map((c) => c.padStart(10)).join(' ')}  ${verdict}`);
   }
 }

@@ -41,7 +41,7 @@ function readingAt(rand: () => number, id: string, ms: number): WaterTestInput {
   const values: Partial<Record<ParameterKey, number>> = {};
   const typical: Record<ParameterKey, () => number> = {
     temperature: () => 20 + rand() * 10,
-    salinity: () => rand() < 0.2 ? rand() * 5 : 28 + rand() * 10,
+    salinity: () => (rand() < 0.2 ? rand() * 5 : 28 + rand() * 10),
     pH: () => 7 + rand() * 1.6,
     ammonia: () => (rand() < 0.3 ? 0 : rand() * 3),
     nitrite: () => (rand() < 0.4 ? 0 : rand() * 2),
@@ -67,7 +67,12 @@ function casesFor(seed: number): Case[] {
   const profile = BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!;
   const phase: TankPhase = rand() < 0.5 ? 'cycling' : 'established';
   const hasLivestock = [true, false, undefined][Math.floor(rand() * 3)];
-  const tank = { volumeL: 20 + Math.round(rand() * 400), phase, systemType: profile.systemTypes[0]!, ...(hasLivestock === undefined ? {} : { hasLivestock }) };
+  const tank = {
+    volumeL: 20 + Math.round(rand() * 400),
+    phase,
+    systemType: profile.systemTypes[0]!,
+    ...(hasLivestock === undefined ? {} : { hasLivestock }),
+  };
   const context = {
     tank,
     history,
@@ -84,9 +89,17 @@ function casesFor(seed: number): Case[] {
     // A test in the middle: later tests must be ignored, the test itself left out by id.
     { label: 'middle, in history', reading: inside, context },
     // A new reading, same instant as an existing test (ties broken by id on both sides of it).
-    { label: 'new, same instant as a test', reading: readingAt(rand, `${inside.id}-m`, sameInstant), context },
+    {
+      label: 'new, same instant as a test',
+      reading: readingAt(rand, `${inside.id}-m`, sameInstant),
+      context,
+    },
     { label: 'new, before every test id', reading: readingAt(rand, '!', sameInstant), context },
-    { label: 'new, after the history', reading: readingAt(rand, 'new', END + Math.floor(rand() * 3 * DAY)), context },
+    {
+      label: 'new, after the history',
+      reading: readingAt(rand, 'new', END + Math.floor(rand() * 3 * DAY)),
+      context,
+    },
   ];
 }
 
@@ -94,10 +107,17 @@ describe('evaluateReading matches the reference implementation', () => {
   const seeds = Array.from({ length: HISTORIES }, (_, i) => i + 1);
   it.each(seeds)('history %i', (seed) => {
     for (const { label, reading, context } of casesFor(seed)) {
-      const expected = referenceEvaluateReading(reading, BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!, context);
+      const expected = referenceEvaluateReading(
+        reading,
+        BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!,
+        context,
+      );
       const profile = BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!;
       expect(evaluateReading(reading, profile, context), label).toEqual(expected);
-      expect(evaluateReading(reading, profile, { ...context, history: indexTests(context.history) }), `${label}, indexed`).toEqual(expected);
+      expect(
+        evaluateReading(reading, profile, { ...context, history: indexTests(context.history) }),
+        `${label}, indexed`,
+      ).toEqual(expected);
     }
   });
 
@@ -105,10 +125,22 @@ describe('evaluateReading matches the reference implementation', () => {
     const rules = new Set<string>();
     for (let seed = 1; seed <= HISTORIES; seed++) {
       for (const { reading, context } of casesFor(seed)) {
-        for (const c of evaluateReading(reading, BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!, context)) rules.add(c.rule.split('.').slice(0, 2).join('.'));
+        for (const c of evaluateReading(
+          reading,
+          BUILT_IN_PROFILES[seed % BUILT_IN_PROFILES.length]!,
+          context,
+        ))
+          rules.add(c.rule.split('.').slice(0, 2).join('.'));
       }
     }
-    for (const rule of ['trend.nitrate', 'trend.salinity', 'trend.temperature', 'derived.freeAmmonia', 'range.nitrate', 'cycle.ammonia']) {
+    for (const rule of [
+      'trend.nitrate',
+      'trend.salinity',
+      'trend.temperature',
+      'derived.freeAmmonia',
+      'range.nitrate',
+      'cycle.ammonia',
+    ]) {
       expect(rules, rule).toContain(rule);
     }
   });
@@ -119,7 +151,8 @@ describe('cycleStage matches the reference implementation', () => {
     const o: CycleStageOptions = {};
     if (rand() < 0.3) o.confirmTests = 1 + Math.floor(rand() * 3);
     if (rand() < 0.3) o.cycledAfterDays = Math.floor(rand() * 14);
-    if (rand() < 0.3) o.zeroAt = { ammonia: [0, 0.25][Math.floor(rand() * 2)], nitrite: [0, 0.1][Math.floor(rand() * 2)] };
+    if (rand() < 0.3)
+      o.zeroAt = { ammonia: [0, 0.25][Math.floor(rand() * 2)], nitrite: [0, 0.1][Math.floor(rand() * 2)] };
     if (rand() < 0.3) o.nitriteFallFraction = rand() * 0.5;
     if (rand() < 0.5) o.now = new Date(END + Math.floor(rand() * 30 * DAY)).toISOString();
     return o;
@@ -146,10 +179,20 @@ describe('cycleStage matches the reference implementation', () => {
     for (let seed = 1; seed <= HISTORIES; seed++) {
       const history = generateHistory(seed, optionsFor(seed), `c${seed}`);
       for (let d = 0; d <= optionsFor(seed).days; d += 3) {
-        stages.add(cycleStage(history.filter((t) => Date.parse(t.takenAt) <= END - (optionsFor(seed).days - d) * DAY)).stage);
+        stages.add(
+          cycleStage(history.filter((t) => Date.parse(t.takenAt) <= END - (optionsFor(seed).days - d) * DAY))
+            .stage,
+        );
       }
     }
-    expect([...stages].sort()).toEqual(['ammonia-rising', 'cycled', 'nitrite-falling', 'nitrite-rising', 'not-started', 'setback']);
+    expect([...stages].sort()).toEqual([
+      'ammonia-rising',
+      'cycled',
+      'nitrite-falling',
+      'nitrite-rising',
+      'not-started',
+      'setback',
+    ]);
   });
 });
 

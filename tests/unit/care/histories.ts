@@ -22,7 +22,10 @@ export interface HistoryOptions {
 
 const round = (value: number, step: number) => Math.round(value / step) * step;
 
-function cycleValues(dayIndex: number, rand: () => number): { ammonia: number; nitrite: number; nitrate: number } {
+function cycleValues(
+  dayIndex: number,
+  rand: () => number,
+): { ammonia: number; nitrite: number; nitrate: number } {
   const ammonia = Math.max(0, 4 - Math.abs(dayIndex - 8) / 2 + (rand() - 0.5));
   const nitrite = Math.max(0, 5 - Math.abs(dayIndex - 18) / 2 + (rand() - 0.5));
   const nitrate = Math.max(0, (dayIndex - 10) * 1.5);
@@ -43,7 +46,8 @@ export function generateHistory(seed: number, options: HistoryOptions, prefix = 
   let previousMs = startMs;
   for (let i = 0; i < count; i++) {
     // Mostly spread over the days; now and then two tests at the very same instant.
-    const ms = i > 0 && rand() < 0.03 ? previousMs : startMs + Math.floor(((i + rand()) / count) * options.days * DAY);
+    const ms =
+      i > 0 && rand() < 0.03 ? previousMs : startMs + Math.floor(((i + rand()) / count) * options.days * DAY);
     previousMs = ms;
     const dayIndex = (ms - startMs) / DAY;
     nitrate = Math.max(0, nitrate + (rand() - 0.35) * 2);
@@ -73,7 +77,11 @@ export function generateHistory(seed: number, options: HistoryOptions, prefix = 
       const value = values[key];
       if (value !== undefined && rand() >= gaps) kept[key] = value;
     }
-    tests.push({ id: `${prefix}-${String(i).padStart(4, '0')}`, takenAt: new Date(ms).toISOString(), values: kept });
+    tests.push({
+      id: `${prefix}-${String(i).padStart(4, '0')}`,
+      takenAt: new Date(ms).toISOString(),
+      values: kept,
+    });
   }
   return tests;
 }

@@ -19,11 +19,17 @@ function viaToMs(iso: string): number | 'throws' {
 describe('toMs', () => {
   it('equals Date.parse for every instant toISOString writes (years 0000–9999)', () => {
     fc.assert(
-      fc.property(fc.integer({ min: Date.parse('0000-01-01T00:00:00.000Z'), max: Date.parse('9999-12-31T23:59:59.999Z') }), (ms) => {
-        const iso = new Date(ms).toISOString();
-        expect(toMs(iso)).toBe(Date.parse(iso));
-        expect(toMs(iso)).toBe(ms);
-      }),
+      fc.property(
+        fc.integer({
+          min: Date.parse('0000-01-01T00:00:00.000Z'),
+          max: Date.parse('9999-12-31T23:59:59.999Z'),
+        }),
+        (ms) => {
+          const iso = new Date(ms).toISOString();
+          expect(toMs(iso)).toBe(Date.parse(iso));
+          expect(toMs(iso)).toBe(ms);
+        },
+      ),
       { seed: 20260601, numRuns: 5000 },
     );
   });
@@ -31,8 +37,19 @@ describe('toMs', () => {
   it('equals Date.parse (or refuses alike) for canonical-looking strings with any digits', () => {
     const two = (max: number) => fc.integer({ min: 0, max }).map((n) => String(n).padStart(2, '0'));
     const shaped = fc
-      .tuple(fc.integer({ min: 0, max: 9999 }), two(19), two(39), two(29), two(69), two(69), fc.integer({ min: 0, max: 999 }))
-      .map(([y, mo, d, h, mi, s, ms]) => `${String(y).padStart(4, '0')}-${mo}-${d}T${h}:${mi}:${s}.${String(ms).padStart(3, '0')}Z`);
+      .tuple(
+        fc.integer({ min: 0, max: 9999 }),
+        two(19),
+        two(39),
+        two(29),
+        two(69),
+        two(69),
+        fc.integer({ min: 0, max: 999 }),
+      )
+      .map(
+        ([y, mo, d, h, mi, s, ms]) =>
+          `${String(y).padStart(4, '0')}-${mo}-${d}T${h}:${mi}:${s}.${String(ms).padStart(3, '0')}Z`,
+      );
     fc.assert(
       fc.property(shaped, (iso) => {
         expect(viaToMs(iso)).toBe(viaDateParse(iso));

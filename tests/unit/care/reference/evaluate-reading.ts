@@ -2,17 +2,18 @@
  * Test-only reference: the straightforward implementation as it was before the engine was made fast,
  * kept unchanged so the oracle tests can prove the fast one gives the same answers. Do not optimise.
  */
-import { PARAMETER_KEYS, formatNumber, formatReading, parameterInfo, type ParameterKey } from '@shared/care/parameters';
+import {
+  PARAMETER_KEYS,
+  formatNumber,
+  formatReading,
+  parameterInfo,
+  type ParameterKey,
+} from '@shared/care/parameters';
 import type { CareProfile, ParameterRange } from '@shared/care/profiles/types';
 import { sortByTakenAt } from './readings';
 import { isSaltwaterSystem } from '@shared/care/system-types';
 import { dedupeConcerns } from '@shared/care/evaluation/evaluate-reading';
-import {
-  type Concern,
-  type EvaluationContext,
-  type Severity,
-  type WaterTestInput,
-} from '@shared/care/types';
+import { type Concern, type EvaluationContext, type Severity, type WaterTestInput } from '@shared/care/types';
 import { classify } from '@shared/care/evaluation/classify';
 import { computeFreeAmmonia } from './free-ammonia';
 import { stepsFor, type StepContext } from '@shared/care/evaluation/next-steps';
