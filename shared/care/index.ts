@@ -13,3 +13,5 @@ export * from './triage';
 export * from './stocking-readiness';
 export { sortByTakenAt, type KnownValue, type SeriesPoint } from './readings';
 export { indexTests, TestTimeline } from './test-timeline';
+export * from './observations';
+export * from './what-to-check';

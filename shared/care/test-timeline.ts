@@ -51,6 +51,17 @@ export class TestTimeline {
     return null;
   }
 
+  /** Finite values of one parameter inside [fromMs, untilMs], oldest first. */
+  series(parameter: ParameterKey, fromMs: number, untilMs: number): SeriesPoint[] {
+    const out: SeriesPoint[] = [];
+    const end = firstWhere(this.times, (ms) => ms > untilMs);
+    for (let i = firstWhere(this.times, (ms) => ms >= fromMs); i < end; i++) {
+      const value = (this.tests[i] as WaterTestInput).values[parameter];
+      if (finite(value)) out.push({ ms: this.times[i] as number, value });
+    }
+    return out;
+  }
+
   /**
    * Values of one parameter inside [fromMs, untilMs], oldest first, leaving out tests with id
    * `reading.id` and putting `reading`'s own value (if finite) where it sorts: what the tank's history

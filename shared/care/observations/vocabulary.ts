@@ -24,16 +24,16 @@ export type ObservationValue<S extends ObservationScale = ObservationScale> =
   (typeof OBSERVATION_SCALES)[S][number];
 export const OBSERVATION_SCALE_KEYS = Object.keys(OBSERVATION_SCALES) as ObservationScale[];
 
-/** The usual state of each scale: recording it says "looked, nothing unusual". */
-export const USUAL_VALUE: { readonly [S in ObservationScale]: ObservationValue<S> } = {
-  feedingResponse: 'normal',
-  breathing: 'normal',
-  buoyancy: 'normal',
-  colour: 'normal',
-  bodyCondition: 'normal',
-  spots: 'none',
-  fins: 'normal',
-  hiding: 'normal',
+/** The values of each scale that say "looked, nothing unusual". */
+export const USUAL_VALUES: { readonly [S in ObservationScale]: readonly ObservationValue<S>[] } = {
+  feedingResponse: ['eager', 'normal'],
+  breathing: ['normal'],
+  buoyancy: ['normal'],
+  colour: ['normal'],
+  bodyCondition: ['normal'],
+  spots: ['none'],
+  fins: ['normal'],
+  hiding: ['normal'],
 };
 
 /** Feeding values that mean the animal took its food. */

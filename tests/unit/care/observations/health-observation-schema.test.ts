@@ -2,7 +2,7 @@ import { describe, expect, it } from 'vitest';
 import {
   OBSERVATION_CHECKS,
   OBSERVATION_SCALES,
-  USUAL_VALUE,
+  USUAL_VALUES,
   OBSERVATION_SCALE_KEYS,
 } from '@shared/care/observations';
 import {
@@ -102,10 +102,11 @@ describe('healthObservationSchema', () => {
 });
 
 describe('observation vocabulary and its words', () => {
-  it('has a label for every scale, value, check and "affected" choice, and starts each scale at its usual state', () => {
+  it('has a label for every scale, value, check and "affected" choice, and starts each scale with its usual states', () => {
     for (const s of OBSERVATION_SCALE_KEYS) {
       expect(OBSERVATION_SCALE_LABELS[s]).toBeTruthy();
-      expect(OBSERVATION_SCALES[s][s === 'feedingResponse' ? 1 : 0]).toBe(USUAL_VALUE[s]);
+      // The usual states come first, so the form offers them first.
+      expect(OBSERVATION_SCALES[s].slice(0, USUAL_VALUES[s].length)).toEqual(USUAL_VALUES[s]);
       for (const v of OBSERVATION_SCALES[s]) expect(OBSERVATION_VALUE_LABELS[v], `${s}.${v}`).toBeTruthy();
     }
     for (const c of OBSERVATION_CHECKS) expect(OBSERVATION_CHECK_LABELS[c]).toBeTruthy();
