@@ -16,7 +16,7 @@ import { seededRandom, shuffled } from './helpers';
 import { generateHistory, type HistoryOptions } from './histories';
 import { referenceCycleStage } from './reference/cycle-stage';
 import { referenceEvaluateReading } from './reference/evaluate-reading';
-import { sortByTakenAt as referenceSort } from './reference/readings';
+import { seriesOf as referenceSeries, sortByTakenAt as referenceSort } from './reference/readings';
 
 // Oracle tests: the indexed engine must answer exactly as the straightforward one it replaced (kept in
 // ./reference), on many seeded histories. Same seeds on every run, so a failure names a reproducible case.
@@ -201,5 +201,19 @@ describe('sortByTakenAt matches the reference implementation', () => {
     const history = shuffled(generateHistory(seed, { days: 60, endMs: END, testsPerDay: 3 }), seed);
     expect(sortByTakenAt(history)).toEqual(referenceSort(history));
     expect(indexTests(history).tests).toEqual(referenceSort(history));
+  });
+});
+
+describe('TestTimeline.series matches the reference implementation', () => {
+  it.each([1, 2, 3, 4, 5])('history %i, every parameter, random windows', (seed) => {
+    const rand = seededRandom(seed * 101);
+    const history = shuffled(generateHistory(seed, { days: 90, endMs: END, testsPerDay: 2 }), seed);
+    const timeline = indexTests(history);
+    for (let k = 0; k < 20; k++) {
+      const from = END - Math.floor(rand() * 100 * DAY);
+      const until = from + Math.floor(rand() * 20 * DAY);
+      for (const key of PARAMETER_KEYS)
+        expect(timeline.series(key, from, until)).toEqual(referenceSeries(history, key, from, until));
+    }
   });
 });
