@@ -5,6 +5,7 @@ import { isSaltwaterSystem, type SystemType } from '../system-types';
 import { indexTests, type TestTimeline } from '../test-timeline';
 import { isoDate, toMs } from '../time';
 import type { WaterTestInput } from '../types';
+import { listOf } from './wording';
 
 export type InputSource = 'this-test' | 'last-known' | 'assumed';
 
@@ -68,13 +69,7 @@ function describeInputs(items: readonly { text: string; input: ResolvedInput }[]
           : `assumed (${input.detail})`;
     groups.set(where, [...(groups.get(where) ?? []), text]);
   }
-  return [...groups]
-    .map(([where, texts]) => {
-      const list =
-        texts.length > 1 ? `${texts.slice(0, -1).join(', ')} and ${texts[texts.length - 1]}` : texts.join('');
-      return `${list} ${where}`;
-    })
-    .join('; ');
+  return [...groups].map(([where, texts]) => `${listOf(texts)} ${where}`).join('; ');
 }
 
 /**

@@ -1,4 +1,4 @@
-import { mentorStep } from '../evaluation/wording';
+import { capitalised, listOf, mentorStep } from '../evaluation/wording';
 import type { Provenance } from '../provenance';
 import type { SystemType } from '../system-types';
 import { isoDate, toMs } from '../time';
@@ -157,16 +157,6 @@ function severalAnimalsHit(hits: readonly Hit[], subjects: readonly SubjectSigns
     subject: first,
     observationIds: [...new Set(worrying.flatMap((h) => h.observationIds))],
   };
-}
-
-function listOf(words: readonly string[]): string {
-  return words.length > 1
-    ? `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`
-    : (words[0] ?? '');
-}
-
-function capitalised(text: string): string {
-  return text.charAt(0).toUpperCase() + text.slice(1);
 }
 
 function toFinding(rule: string, hits: readonly Hit[], all: readonly Hit[]): ObservationFinding {

@@ -1,3 +1,4 @@
+import { listOf } from '../evaluation/wording';
 import { COMMON_PRACTICE, SOURCES, commonPractice } from '../provenance';
 import { DAY_MS, isoDate, toMs } from '../time';
 import type { SubjectSigns } from '../observations/signs';
@@ -16,10 +17,7 @@ export const ANIMAL_CHECK_RULES = {
 const some = (ctx: CheckContext, test: (s: SubjectSigns) => boolean) => ctx.subjects.filter(test);
 
 function names(subjects: readonly SubjectSigns[]): string {
-  const words = [...new Set(subjects.map((s) => s.label))];
-  return words.length > 1
-    ? `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`
-    : (words[0] ?? 'the animals');
+  return listOf([...new Set(subjects.map((s) => s.label))]) || 'the animals';
 }
 
 export function oxygenAndSurface(ctx: CheckContext): CheckItem | null {

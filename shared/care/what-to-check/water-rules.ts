@@ -1,6 +1,7 @@
 import { DOSED_PARAMETERS, MAX_SAFE_DAILY_RISE } from '@shared/chemistry';
 import { dueTests } from '../due-tests';
 import { classify } from '../evaluation/classify';
+import { capitalised, listOf } from '../evaluation/wording';
 import { TREND_RULES } from '../evaluation/trend-rules';
 import { formatNumber, formatReading, parameterInfo, PARAMETER_KEYS, type ParameterKey } from '../parameters';
 import { COMMON_PRACTICE, commonPractice } from '../provenance';
@@ -20,12 +21,6 @@ export const WATER_CHECK_RULES = {
   dosedSwingLookbackDays: 30,
   provenance: 'common practice, no source',
 } as const;
-
-function listOf(words: readonly string[]): string {
-  return words.length > 1
-    ? `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`
-    : (words[0] ?? '');
-}
 
 function label(key: ParameterKey): string {
   return key === 'pH' ? 'pH' : parameterInfo(key).label.toLowerCase();
@@ -151,7 +146,7 @@ export function swings(ctx: CheckContext): CheckItem | null {
   return {
     key: 'swings',
     title: 'Look at the swings, not only the levels',
-    why: `${found.map((f) => f.charAt(0).toUpperCase() + f.slice(1)).join('; ')}. Animals cope better with a steady value a little off than with one that keeps moving, and every single test can be in range while it moves. Find what drives it (heater, top-up water, dosing) before correcting anything.`,
+    why: `${found.map(capitalised).join('; ')}. Animals cope better with a steady value a little off than with one that keeps moving, and every single test can be in range while it moves. Find what drives it (heater, top-up water, dosing) before correcting anything.`,
     provenance: commonPractice(
       `Same limits as the trend rules (${TREND_RULES.temperatureSwing.maxRange} °C a day, ${TREND_RULES.salinityDrift.maxRange} a week) and the daily dosing limits (${DOSED_PARAMETERS.map((k) => `${MAX_SAFE_DAILY_RISE[k]} ${parameterInfo(k).unit}`).join(', ')} a day).`,
     ),
@@ -221,7 +216,7 @@ export function notTestedLately(ctx: CheckContext): CheckItem | null {
   return {
     key: 'not-tested-lately',
     title: `Test what has not been tested lately: ${listOf(parameters.map((k) => rows.get(k) as string))}`,
-    why: `A problem nobody tests for stays invisible.${rare.length ? ` ${listOf(rare.map(label)).replace(/^./, (c) => c.toUpperCase())} ${rare.length > 1 ? 'are' : 'is'} tested rarely, so ${rare.length > 1 ? 'they drift' : 'it drifts'} unnoticed.` : ''}`,
+    why: `A problem nobody tests for stays invisible.${rare.length ? ` ${capitalised(listOf(rare.map(label)))} ${rare.length > 1 ? 'are' : 'is'} tested rarely, so ${rare.length > 1 ? 'they drift' : 'it drifts'} unnoticed.` : ''}`,
     parameters,
     provenance: commonPractice(
       'Cadences are the care profile’s; a week without a test while animals show signs is common practice.',
