@@ -1,6 +1,6 @@
 import { PARAMETER_KEYS, formatNumber, formatReading, parameterInfo, type ParameterKey } from '../parameters';
 import type { CareProfile, ParameterRange } from '../profiles/types';
-import { sortByTakenAt } from '../readings';
+import { indexTests, type TestTimeline } from '../test-timeline';
 import { isSaltwaterSystem } from '../system-types';
 import {
   severityRank,
@@ -10,7 +10,7 @@ import {
   type WaterTestInput,
 } from '../types';
 import { classify } from './classify';
-import { computeFreeAmmonia } from './free-ammonia';
+import { computeFreeAmmonia, lastKnownInputs } from './free-ammonia';
 import { stepsFor, type StepContext } from './next-steps';
 import { trendConcerns } from './trend-rules';
 import { dilutionWaterChange } from './water-change';
@@ -84,14 +84,15 @@ function shortCitation(range: ParameterRange): string {
 
 function freeAmmoniaConcern(
   reading: WaterTestInput,
-  history: readonly WaterTestInput[],
+  history: TestTimeline,
   ctx: EvaluationContext,
   s: Situation,
 ): Concern | null {
   const total = reading.values.ammonia;
   const range = s.profile.ranges.freeAmmonia;
   if (total === undefined || total <= 0 || !range) return null;
-  const outcome = computeFreeAmmonia(reading, total, history, ctx.tank.systemType, s.profile);
+  const lastKnown = ctx.lastKnown ?? lastKnownInputs(history, reading);
+  const outcome = computeFreeAmmonia(reading, total, lastKnown, ctx.tank.systemType, s.profile);
   if (!outcome.ok) {
     return {
       parameter: 'freeAmmonia',
@@ -149,7 +150,8 @@ export function evaluateReading(
 ): Concern[] {
   const { tank } = context;
   const hasLivestock = tank.hasLivestock ?? tank.phase === 'established';
-  const history = context.history.filter((t) => t.id !== reading.id);
+  // Read once; tests with the reading's own id are left out by each lookup.
+  const history = indexTests(context.history);
   const nitrateRange = profile.ranges.nitrate;
   const s: Situation = {
     profile,
@@ -172,6 +174,6 @@ export function evaluateReading(
   }
   const free = freeAmmoniaConcern(reading, history, context, s);
   if (free) concerns.push(free);
-  concerns.push(...trendConcerns(sortByTakenAt([...history, reading]), reading, profile, tank.phase));
+  concerns.push(...trendConcerns(history, reading, profile, tank.phase));
   return dedupeConcerns(concerns);
 }
