@@ -8,6 +8,7 @@ import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { TextField } from '@client/components/ui/field';
 import { SelectField } from '@client/components/ui/select';
+import { useToast } from '@client/components/ui/toast';
 import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import type { MeUser } from '../api/me';
 import { useUpdateProfile } from '../api/mutations';
@@ -26,6 +27,7 @@ const options = <K extends keyof typeof LABELS>(key: K, values: readonly (keyof 
 
 export function ProfileForm({ user }: { user: MeUser }) {
   const update = useUpdateProfile();
+  const toast = useToast();
   const { register, handleSubmit, setError, formState } = useForm<Input>({
     resolver: zodResolver(schema),
     defaultValues: {
@@ -40,9 +42,8 @@ export function ProfileForm({ user }: { user: MeUser }) {
   const { formError, attempt } = useSaveErrors(fieldsIn(Object.keys(schema.shape)), setError);
   const e = formState.errors;
   return (
-    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => attempt(() => update.mutateAsync(v)))}>
+    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => attempt(async () => { await update.mutateAsync(v); toast.success('Profile and units saved.'); }))}>
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      {update.isSuccess && !formState.isDirty ? <Notice tone="success">Saved.</Notice> : null}
       <TextField label="Your name" error={e.displayName?.message} {...register('displayName')} />
       <SelectField label="Experience" options={options('experienceLevel', EXPERIENCE_LEVELS)} error={e.experienceLevel?.message} {...register('experienceLevel')} />
       <TextField label="Time zone" hint="Used for reminders and the dates on your tests, e.g. Europe/London." error={e.timeZone?.message} {...register('timeZone')} />

@@ -3,6 +3,7 @@ import { parameterInfo, provenanceLabel, type AnyParameterKey, type CareProfile 
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { Input, TextField } from '@client/components/ui/field';
+import { useToast } from '@client/components/ui/toast';
 import { ApiError } from '@client/lib/api-client';
 import { useSaveProfile } from '@client/lib/care-profiles';
 
@@ -14,6 +15,7 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
   const [draft, setDraft] = useState(() => structuredClone(profile));
   const [note, setNote] = useState('');
   const [message, setMessage] = useState<{ tone: 'success' | 'error'; text: string }>();
+  const toast = useToast();
   const keys = Object.keys(draft.ranges) as AnyParameterKey[];
   const setBand = (key: AnyParameterKey, which: 'ideal' | 'caution', i: 0 | 1, value: string) => {
     const n = Number(value);
@@ -80,7 +82,7 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
               setMessage(undefined);
               try {
                 const res = await save.mutateAsync({ id: id!, definition: draft, baseVersion: profile.version, note });
-                setMessage({ tone: 'success', text: `Saved as version ${res.profile.version}: ${res.changes.length} change(s).` });
+                toast.success(`Saved as version ${res.profile.version}: ${res.changes.length} ${res.changes.length === 1 ? 'change' : 'changes'}.`);
               } catch (e) {
                 const err = e instanceof ApiError ? e : undefined;
                 setMessage({ tone: 'error', text: err ? [err.message, ...err.issues.map((i) => `${i.path}: ${i.message}`)].join(' ') : 'Could not save.' });

@@ -3,6 +3,7 @@ import { MAX_MENTOR_CAPACITY } from '@shared/constants/mentorship';
 import { Button } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { Input } from '@client/components/ui/field';
+import { useToast } from '@client/components/ui/toast';
 import { ApiError } from '@client/lib/api-client';
 import { useMembers } from '../api/club';
 import { useSetCapacity } from '../api/mentor-requests';
@@ -17,6 +18,7 @@ export function MentorCapacityCard({ clubId, userId }: { clubId: string; userId:
 
 function CapacityForm(p: { clubId: string; userId: string; capacity: number; load: number }) {
   const save = useSetCapacity(p.clubId);
+  const toast = useToast();
   const [value, setValue] = useState(String(p.capacity));
   const id = useId();
   const error = save.error instanceof ApiError ? save.error.fieldMessage('capacity') ?? save.error.message : save.error ? 'Could not save.' : undefined;
@@ -26,7 +28,7 @@ function CapacityForm(p: { clubId: string; userId: string; capacity: number; loa
         className="flex flex-wrap items-end gap-3"
         onSubmit={(e) => {
           e.preventDefault();
-          save.mutate({ userId: p.userId, capacity: Number(value) });
+          save.mutate({ userId: p.userId, capacity: Number(value) }, { onSuccess: () => toast.success(`Saved: you can take on ${value} mentees.`) });
         }}
       >
         <div>
@@ -38,7 +40,7 @@ function CapacityForm(p: { clubId: string; userId: string; capacity: number; loa
           You mentor {p.load} now. Lowering the number keeps your current mentees; it only stops new ones. 0 to {MAX_MENTOR_CAPACITY}.
         </p>
       </form>
-      {error ? <div className="mt-2"><Notice tone="error">{error}</Notice></div> : save.isSuccess ? <div className="mt-2"><Notice tone="success">Saved.</Notice></div> : null}
+      {error ? <div className="mt-2"><Notice tone="error">{error}</Notice></div> : null}
     </Card>
   );
 }

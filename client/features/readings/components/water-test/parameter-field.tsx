@@ -12,6 +12,7 @@ import { Choice } from '@client/components/ui/choice';
 import { Select } from '@client/components/ui/select';
 import { Input } from '@client/components/ui/field';
 import type { UnitPrefs } from '@client/lib/display-units';
+import { PARAMETER_HELP } from '../../lib/parameter-help';
 import type { WaterTestDraft } from '../../lib/water-test-draft';
 import { ReadingPreview } from './reading-preview';
 
@@ -40,6 +41,7 @@ export function ParameterField({ parameter, prefs, profile, normalized, liveErro
     <fieldset className="rounded-card bg-surface p-4 shadow-card" data-parameter={parameter}>
       <legend className="sr-only">{info.label}</legend>
       <label htmlFor={`${id}-value`} className="block text-base font-extrabold text-ink">{info.label}</label>
+      <p id={`${id}-help`} className="text-sm text-ink-muted">{PARAMETER_HELP[parameter]}</p>
       <div className="mt-1 flex items-stretch gap-2">
         <input
           id={`${id}-value`}
@@ -48,7 +50,7 @@ export function ParameterField({ parameter, prefs, profile, normalized, liveErro
           enterKeyHint="next"
           placeholder="–"
           aria-invalid={valueError ? true : undefined}
-          aria-describedby={valueError ? `${id}-error` : undefined}
+          aria-describedby={valueError ? `${id}-help ${id}-error` : `${id}-help`}
           className={`min-h-14 w-full min-w-0 flex-1 rounded-xl border bg-surface px-3 text-2xl font-bold text-ink shadow-sm focus:border-focus focus:outline-none focus:ring-2 focus:ring-line ${valueError ? 'border-danger' : 'border-line-strong'}`}
           {...register(`${name}.value`)}
         />
