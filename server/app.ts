@@ -21,6 +21,7 @@ import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
 import { inviteRouter } from './modules/invites/invite.router';
 import { outboxRouter } from './modules/mail/outbox.router';
+import { calendarFeedRouter, meetupsRouter } from './modules/meetups';
 import { assignmentRouter } from './modules/mentorship/assignment.router';
 import { mentorCapacityRouter } from './modules/mentorship/mentor-capacity.router';
 import { mentorRequestRouter } from './modules/mentorship/mentor-request.router';
@@ -56,7 +57,8 @@ export interface CreatedApp {
   api: express.Router;
 }
 
-const redactTokens = (url: string) => url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
+const redactTokens = (url: string) =>
+  url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/\/calendar-feeds\/[^/?]+/, '/calendar-feeds/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -102,6 +104,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(healthRouter(dataSource));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
   api.use(unsubscribeRouter({ dataSource, config }));
+  api.use(calendarFeedRouter(deps));
   api.use(sessionMiddleware);
   api.use(csrfProtection);
   api.use(attachViewer(dataSource));
@@ -124,6 +127,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(questionRouter({ dataSource }));
   api.use(csvImportRouter({ dataSource }));
   api.use(csvExportRouter({ dataSource }));
+  api.use(meetupsRouter(deps));
   if (!config.isProduction) app.use(outboxRouter({ dataSource }));
   api.use(apiNotFound);
   app.use('/api', api);

@@ -9,6 +9,7 @@ import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
+import { startMeetupReminders } from './modules/meetups';
 import { startDigestScheduler } from './modules/notifications/digest-scheduler';
 import { RealtimeHub } from './realtime/hub';
 import { startRealtime } from './realtime/realtime';
@@ -32,6 +33,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   );
   const mail = await startMail(config, dataSource, logger);
   const digest = await startDigestScheduler({ config, dataSource, mailer: mail.mailer, logger });
+  const reminders = await startMeetupReminders({ config, dataSource, logger });
   const hub = new RealtimeHub();
   const { app, sessionMiddleware } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const server = createServer(app);
@@ -54,6 +56,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         setTimeout(() => server.closeAllConnections(), 5_000).unref();
       });
       await digest.stop().catch(() => undefined);
+      await reminders.stop().catch(() => undefined);
       await mail.close().catch(() => undefined);
       await adapterPool.end().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);

@@ -6,6 +6,7 @@ import { Club } from '../modules/clubs/club.entity';
 import { Membership } from '../modules/clubs/membership.entity';
 import { Invite } from '../modules/invites/invite.entity';
 import { CapturedMail } from '../modules/mail/captured-mail.entity';
+import { Meetup, MeetupRsvp } from '../modules/meetups/meetup.entity';
 import { MentorAssignment } from '../modules/mentorship/mentor-assignment.entity';
 import { MentorRequest } from '../modules/mentorship/mentor-request.entity';
 import { Notification } from '../modules/notifications/notification.entity';
@@ -20,4 +21,4 @@ import { WaterTest } from '../modules/tanks/water-test.entity';
 import { User } from '../modules/users/user.entity';
 
 /** Every TypeORM entity, listed explicitly. */
-export const entities: Function[] = [User, Club, Membership, Invite, PasswordReset, MentorAssignment, AuditEvent, CapturedMail, ClubCareProfile, ClubCareProfileVersion, Tank, Livestock, WaterTest, TankEvent, Photo, MentorRequest, Notification, NotificationPreference, NotificationDigest, ConcernRow, TankReadiness, Question, QuestionReply];
+export const entities: Function[] = [User, Club, Membership, Invite, PasswordReset, MentorAssignment, AuditEvent, CapturedMail, ClubCareProfile, ClubCareProfileVersion, Tank, Livestock, WaterTest, TankEvent, Photo, MentorRequest, Notification, NotificationPreference, NotificationDigest, ConcernRow, TankReadiness, Question, QuestionReply, Meetup, MeetupRsvp];
