@@ -41,7 +41,7 @@ export function utcToClubTime(at: Date | string, timeZone: string): string {
 }
 
 /**
- * "Thursday 2 April 2026, 19:00–21:00 (BST)": when a meetup happens, in the club's zone, as e-mails and calendars
+ * "Thursday, 2 April 2026, 19:00–21:00 (BST)": when a meetup happens, in the club's zone, as e-mails and calendars
  * say it. Days differ when it runs past midnight.
  */
 export function describeClubTime(startsAt: Date | string, endsAt: Date | string, timeZone: string, locale = 'en-GB'): string {

@@ -25,7 +25,7 @@ export interface MeetupSummaryView {
   /** The same in the club's zone as datetime-local values, for forms. */
   local: { startsAt: string; endsAt: string };
   timeZone: string;
-  /** "Thursday 2 April 2026, 19:00–21:00 (BST)", in the club's zone. */
+  /** "Thursday, 2 April 2026, 19:00–21:00 (BST)", in the club's zone. */
   when: string;
   placeText: string;
   mapUrl: string | null;
