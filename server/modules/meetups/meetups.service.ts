@@ -136,8 +136,10 @@ async function expectedRsvp(tx: EntityManager, meetup: Meetup, userId: string): 
 export async function setAttendance(tx: EntityManager, p: { meetup: Meetup; userId: string; present: boolean; actorId: string; now?: Date }): Promise<MeetupRsvp> {
   if (p.meetup.status === 'cancelled') throw errors.conflict('This meetup was cancelled.');
   const rsvp = await expectedRsvp(tx, p.meetup, p.userId);
-  if (p.present && !rsvp.checkedInAt) await tx.update(MeetupRsvp, { id: rsvp.id }, { checkedInAt: p.now ?? new Date(), checkedInById: p.actorId });
-  if (!p.present && rsvp.checkedInAt) await tx.update(MeetupRsvp, { id: rsvp.id }, { checkedInAt: null, checkedInById: null });
+  // In one statement, so two taps at once keep the first time rather than each writing its own.
+  if (p.present) {
+    await tx.query(`UPDATE meetup_rsvp SET checked_in_at = COALESCE(checked_in_at, $2), checked_in_by_id = COALESCE(checked_in_by_id, $3) WHERE id = $1`, [rsvp.id, p.now ?? new Date(), p.actorId]);
+  } else await tx.update(MeetupRsvp, { id: rsvp.id }, { checkedInAt: null, checkedInById: null });
   return tx.findOneByOrFail(MeetupRsvp, { id: rsvp.id });
 }
 
