@@ -1,9 +1,11 @@
 import type { EntityManager } from 'typeorm';
 import { describeClubTime } from '../../../shared/meetups/club-time';
-import { deliveryFor } from '../notifications/delivery';
-import { notify } from '../notifications/notify';
+import type { Deps } from '../../deps';
 import { icsAttachment, type CalendarEntry } from './meetup-calendar';
 import type { Meetup } from './meetup.entity';
+
+/** What telling people needs: notify() and the links' base. */
+export type NoticeDeps = Pick<Deps, 'notify' | 'config'>;
 
 const linkOf = (meetup: Pick<Meetup, 'id'>) => `/meetups/${meetup.id}`;
 
@@ -13,17 +15,17 @@ async function clubOf(tx: EntityManager, clubId: string): Promise<{ name: string
 }
 
 /** The meetup as calendars and e-mails describe it, with its link in the app. */
-export async function calendarEntryOf(tx: EntityManager, meetup: Meetup, baseUrl = deliveryFor(tx).config.baseUrl): Promise<CalendarEntry> {
+export async function calendarEntryOf(tx: EntityManager, meetup: Meetup, baseUrl: string): Promise<CalendarEntry> {
   const club = await clubOf(tx, meetup.clubId);
   return { meetup, timeZone: club.timeZone, clubName: club.name, url: `${baseUrl}${linkOf(meetup)}` };
 }
 
 const placeLine = (m: Meetup) => (m.kind === 'online' ? `Online: ${m.onlineUrl ?? ''}` : `Where: ${m.placeText}`);
 
-async function tell(tx: EntityManager, meetup: Meetup, userIds: string[], title: string, lines: string[]): Promise<void> {
+async function tell(tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userIds: string[], title: string, lines: string[]): Promise<void> {
   if (!userIds.length) return;
-  const entry = await calendarEntryOf(tx, meetup);
-  await notify(tx, {
+  const entry = await calendarEntryOf(tx, meetup, deps.config.baseUrl);
+  await deps.notify(tx, {
     userIds,
     clubId: meetup.clubId,
     kind: 'meetup',
@@ -35,21 +37,21 @@ async function tell(tx: EntityManager, meetup: Meetup, userIds: string[], title:
   });
 }
 
-export const tellPromoted = (tx: EntityManager, meetup: Meetup, userIds: string[]) =>
-  tell(tx, meetup, userIds, `A place freed up: you are going to ${meetup.title}`, ['You were on the waitlist and a place is now yours. Can’t make it after all? Say so in the app so the next person gets it.']);
+export const tellPromoted = (tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userIds: string[]) =>
+  tell(tx, deps, meetup, userIds, `A place freed up: you are going to ${meetup.title}`, ['You were on the waitlist and a place is now yours. Can’t make it after all? Say so in the app so the next person gets it.']);
 
-export const tellChanged = (tx: EntityManager, meetup: Meetup, userIds: string[], changes: string[]) =>
-  tell(tx, meetup, userIds, `Changed: ${meetup.title}`, ['What changed:', ...changes.map((c) => `- ${c}`)]);
+export const tellChanged = (tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userIds: string[], changes: string[]) =>
+  tell(tx, deps, meetup, userIds, `Changed: ${meetup.title}`, ['What changed:', ...changes.map((c) => `- ${c}`)]);
 
-export const tellCancelled = (tx: EntityManager, meetup: Meetup, userIds: string[]) =>
-  tell(tx, meetup, userIds, `Cancelled: ${meetup.title}`, [`Why: ${meetup.cancelReason ?? ''}`]);
+export const tellCancelled = (tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userIds: string[]) =>
+  tell(tx, deps, meetup, userIds, `Cancelled: ${meetup.title}`, [`Why: ${meetup.cancelReason ?? ''}`]);
 
-export const tellReminder = (tx: EntityManager, meetup: Meetup, userIds: string[]) =>
-  tell(tx, meetup, userIds, `Reminder: ${meetup.title}`, ['You said you are going. Can’t make it now? Say so in the app so someone on the waitlist gets your place.']);
+export const tellReminder = (tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userIds: string[]) =>
+  tell(tx, deps, meetup, userIds, `Reminder: ${meetup.title}`, ['You said you are going. Can’t make it now? Say so in the app so someone on the waitlist gets your place.']);
 
 /** The keeper hears that the clinic's results are on their tank. */
-export async function tellResultsRecorded(tx: EntityManager, meetup: Meetup, p: { keeperId: string; tankId: string; tankName: string; hostName: string }): Promise<void> {
-  await notify(tx, {
+export async function tellResultsRecorded(tx: EntityManager, deps: NoticeDeps, meetup: Meetup, p: { keeperId: string; tankId: string; tankName: string; hostName: string }): Promise<void> {
+  await deps.notify(tx, {
     userIds: [p.keeperId],
     clubId: meetup.clubId,
     kind: 'meetup',

@@ -1,8 +1,7 @@
 import PgBoss from 'pg-boss';
 import type { Logger } from 'pino';
-import type { DataSource } from 'typeorm';
 import { REMINDER_HOURS_BEFORE, REMINDER_LATEST_HOURS_BEFORE } from '../../../shared/constants/meetups';
-import type { Config } from '../../config/env';
+import type { Deps } from '../../deps';
 import { Meetup } from './meetup.entity';
 import { tellReminder } from './meetup-notices';
 import { dueReminders } from './meetups.queries';
@@ -15,7 +14,8 @@ export const REMINDER_CRON = '*/15 * * * *';
  * Sends every reminder due at `now`. Safe to run concurrently and as often as you like: the claim row (meetup,
  * person, start) and the e-mail job commit together or not at all, so each start is reminded of once per person.
  */
-export async function sendDueReminders(dataSource: DataSource, now = new Date()): Promise<{ sent: number }> {
+export async function sendDueReminders(deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>, now = new Date()): Promise<{ sent: number }> {
+  const { dataSource } = deps;
   const due = await dueReminders(dataSource.manager, now, REMINDER_HOURS_BEFORE, REMINDER_LATEST_HOURS_BEFORE);
   const byMeetup = new Map<string, string[]>();
   for (const d of due) byMeetup.set(d.meetupId, [...(byMeetup.get(d.meetupId) ?? []), d.userId]);
@@ -31,7 +31,7 @@ export async function sendDueReminders(dataSource: DataSource, now = new Date())
          ON CONFLICT DO NOTHING RETURNING user_id AS "userId"`,
         [meetup.id, userIds, meetup.startsAt],
       );
-      await tellReminder(tx, meetup, claimed.map((c) => c.userId));
+      await tellReminder(tx, deps, meetup, claimed.map((c) => c.userId));
       return claimed.length;
     });
   }
@@ -43,14 +43,14 @@ export interface ReminderScheduler {
 }
 
 /** The reminder job on pg-boss, scheduled like the daily digest: the schedule survives restarts, one worker per run. */
-export async function startMeetupReminders(p: { config: Config; dataSource: DataSource; logger: Logger }): Promise<ReminderScheduler> {
-  const boss = new PgBoss({ connectionString: p.config.databaseUrl, max: 2, application_name: 'shoalwise-meetup-reminders' });
+export async function startMeetupReminders(p: { deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>; logger: Logger }): Promise<ReminderScheduler> {
+  const boss = new PgBoss({ connectionString: p.deps.config.databaseUrl, max: 2, application_name: 'shoalwise-meetup-reminders' });
   boss.on('error', (err: Error) => p.logger.warn({ err: err.message }, 'meetup reminder scheduler error'));
   await boss.start();
   await boss.createQueue(REMINDER_QUEUE);
   await boss.schedule(REMINDER_QUEUE, REMINDER_CRON, {}, { tz: 'UTC', retryLimit: 2, retryDelay: 60 });
   await boss.work(REMINDER_QUEUE, { pollingIntervalSeconds: 30, batchSize: 1 }, async () => {
-    const { sent } = await sendDueReminders(p.dataSource, new Date());
+    const { sent } = await sendDueReminders(p.deps, new Date());
     if (sent) p.logger.info({ sent }, 'meetup reminders sent');
   });
   return {

@@ -1,6 +1,6 @@
 import { Router, type Request } from 'express';
 import type { DataSource } from 'typeorm';
-import type { Config } from '../../config/env';
+import type { Deps } from '../../deps';
 import { asSubject } from '../../../shared/abilities';
 import { clubIdParams } from '../../../shared/schemas/common';
 import {
@@ -30,10 +30,8 @@ import { presentDetail, presentHistory, presentSummary } from './meetups.present
 import { cancelMeetup, createMeetup, recordClinicResult, setAttendance, updateMeetup } from './meetups.service';
 import { bookSlot, clearSlot, respond } from './rsvp.service';
 
-export interface MeetupDeps {
-  dataSource: DataSource;
-  config: Pick<Config, 'baseUrl' | 'sessionSecret'>;
-}
+/** Routers take the app's one deps object. */
+export type MeetupDeps = Pick<Deps, 'dataSource' | 'config' | 'notify' | 'tankChanges'>;
 
 const subjectOf = (m: Pick<Meetup, 'clubId' | 'hostId'>) => ({ clubId: m.clubId, hostId: m.hostId });
 
@@ -82,7 +80,7 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const meetup = await dataSource.transaction(async (tx) => {
       const current = await loadMeetup(tx, params.clubId, params.meetupId, true);
       authorize(req, 'update', 'Meetup', subjectOf(current));
-      return updateMeetup(tx, { meetup: current, timeZone: await clubTimeZone(tx, params.clubId), patch: body, actorId: me(req).id });
+      return updateMeetup(tx, deps, { meetup: current, timeZone: await clubTimeZone(tx, params.clubId), patch: body, actorId: me(req).id });
     });
     res.json({ meetup: await detail(dataSource.manager, req, meetup) });
   });
@@ -93,7 +91,7 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const meetup = await dataSource.transaction(async (tx) => {
       const current = await loadMeetup(tx, params.clubId, params.meetupId, true);
       authorize(req, 'update', 'Meetup', subjectOf(current));
-      return cancelMeetup(tx, { meetup: current, reason: body.reason, actorId: me(req).id });
+      return cancelMeetup(tx, deps, { meetup: current, reason: body.reason, actorId: me(req).id });
     });
     res.json({ meetup: await detail(dataSource.manager, req, meetup) });
   });
@@ -104,7 +102,7 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const meetup = await dataSource.transaction(async (tx) => {
       const current = await loadMeetup(tx, params.clubId, params.meetupId, true);
       authorize(req, 'rsvp', 'Meetup', subjectOf(current));
-      await respond(tx, current, me(req).id, body.response);
+      await respond(tx, deps, current, me(req).id, body.response);
       return current;
     });
     res.json({ meetup: await detail(dataSource.manager, req, meetup) });
@@ -162,7 +160,7 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const saved = await dataSource.transaction(async (tx) => {
       const meetup = await loadMeetup(tx, params.clubId, params.meetupId, true);
       authorize(req, 'recordResults', 'Meetup', subjectOf(meetup));
-      return recordClinicResult(tx, { meetup, userId: params.userId, input: body, host: { id: me(req).id, displayName: me(req).displayName } });
+      return recordClinicResult(tx, deps, { meetup, userId: params.userId, input: body, host: { id: me(req).id, displayName: me(req).displayName } });
     });
     res.status(201).json({ waterTest: presentWaterTest(saved.test, () => []), warnings: saved.warnings });
   });

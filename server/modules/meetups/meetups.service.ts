@@ -6,9 +6,10 @@ import { meetupRuleIssues, type CreateMeetupValues, type updateMeetupSchema } fr
 import type { createWaterTestSchema } from '../../../shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { audit } from '../audit/audit';
+import type { Deps } from '../../deps';
 import { createWaterTest, loadTank, requireActive, type SavedWaterTest } from '../tanks';
 import { Meetup, MeetupRsvp } from './meetup.entity';
-import { tellCancelled, tellChanged, tellResultsRecorded } from './meetup-notices';
+import { tellCancelled, tellChanged, tellResultsRecorded, type NoticeDeps } from './meetup-notices';
 import { expectedUserIds, isHostable, rsvpOf } from './meetups.queries';
 import { promoteFromWaitlist, releaseStaleSlots } from './rsvp.service';
 
@@ -72,7 +73,7 @@ function describeChanges(before: Meetup, after: Meetup, timeZone: string): strin
  * An edit, merged onto the stored meetup and checked as a whole. More places go to the waitlist at once; fewer
  * than the people already going is refused. Everyone expected is told what changed, with a new .ics.
  */
-export async function updateMeetup(tx: EntityManager, p: { meetup: Meetup; timeZone: string; patch: UpdateValues; actorId: string; now?: Date }): Promise<Meetup> {
+export async function updateMeetup(tx: EntityManager, deps: NoticeDeps, p: { meetup: Meetup; timeZone: string; patch: UpdateValues; actorId: string; now?: Date }): Promise<Meetup> {
   const { meetup: before, timeZone, patch } = p;
   if (before.status === 'cancelled') throw errors.conflict('This meetup was cancelled; it can no longer be changed.');
   const merged = {
@@ -108,20 +109,20 @@ export async function updateMeetup(tx: EntityManager, p: { meetup: Meetup; timeZ
   await tx.update(Meetup, { id: before.id }, changes);
   const after = await tx.findOneByOrFail(Meetup, { id: before.id });
   const released = await releaseStaleSlots(tx, after);
-  if (after.capacity > before.capacity) await promoteFromWaitlist(tx, after);
+  if (after.capacity > before.capacity) await promoteFromWaitlist(tx, deps, after);
   const said = describeChanges(before, after, timeZone);
   if (released.length) said.push('Clinic slots changed: if you had booked one, book again.');
-  if (said.length) await tellChanged(tx, after, await expectedUserIds(tx, after.id), said);
+  if (said.length) await tellChanged(tx, deps, after, await expectedUserIds(tx, after.id), said);
   await audit(tx, { actorId: p.actorId, clubId: after.clubId, action: 'meetup.updated', targetType: 'Meetup', targetId: after.id, details: { fields: Object.keys(patch) } });
   return after;
 }
 
 /** Cancelled for everyone: answers are kept (for the record), everyone expected is told why. */
-export async function cancelMeetup(tx: EntityManager, p: { meetup: Meetup; reason: string; actorId: string; now?: Date }): Promise<Meetup> {
+export async function cancelMeetup(tx: EntityManager, deps: NoticeDeps, p: { meetup: Meetup; reason: string; actorId: string; now?: Date }): Promise<Meetup> {
   if (p.meetup.status === 'cancelled') return p.meetup;
   await tx.update(Meetup, { id: p.meetup.id }, { status: 'cancelled', cancelReason: p.reason, cancelledAt: p.now ?? new Date(), sequence: p.meetup.sequence + 1 });
   const after = await tx.findOneByOrFail(Meetup, { id: p.meetup.id });
-  await tellCancelled(tx, after, await expectedUserIds(tx, after.id));
+  await tellCancelled(tx, deps, after, await expectedUserIds(tx, after.id));
   await audit(tx, { actorId: p.actorId, clubId: after.clubId, action: 'meetup.cancelled', targetType: 'Meetup', targetId: after.id, details: { reason: p.reason } });
   return after;
 }
@@ -149,6 +150,7 @@ export async function setAttendance(tx: EntityManager, p: { meetup: Meetup; user
  */
 export async function recordClinicResult(
   tx: EntityManager,
+  deps: NoticeDeps & Pick<Deps, 'tankChanges'>,
   p: { meetup: Meetup; userId: string; input: z.output<typeof createWaterTestSchema>; host: { id: string; displayName: string }; now?: Date },
 ): Promise<SavedWaterTest> {
   if (p.meetup.kind !== 'clinic') throw errors.conflict('Results are recorded at a water-testing clinic only.');
@@ -158,9 +160,9 @@ export async function recordClinicResult(
   const tank = await loadTank(tx, p.meetup.clubId, rsvp.tankId);
   if (tank.ownerId !== p.userId) throw errors.conflict('That tank is no longer theirs.');
   requireActive(tank);
-  const saved = await createWaterTest(tx, tank, p.input, p.host.id, p.now);
+  const saved = await createWaterTest(tx, deps, tank, p.input, p.host.id, p.now);
   await tx.update(MeetupRsvp, { id: rsvp.id }, { waterTestId: saved.test.id, ...(rsvp.checkedInAt ? {} : { checkedInAt: p.now ?? new Date(), checkedInById: p.host.id }) });
-  await tellResultsRecorded(tx, p.meetup, { keeperId: p.userId, tankId: tank.id, tankName: tank.name, hostName: p.host.displayName });
+  await tellResultsRecorded(tx, deps, p.meetup, { keeperId: p.userId, tankId: tank.id, tankName: tank.name, hostName: p.host.displayName });
   await audit(tx, { actorId: p.host.id, clubId: p.meetup.clubId, action: 'meetup.clinic-result', targetType: 'WaterTest', targetId: saved.test.id, details: { meetupId: p.meetup.id, tankId: tank.id } });
   return saved;
 }

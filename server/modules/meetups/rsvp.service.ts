@@ -5,7 +5,7 @@ import { errors } from '../../lib/app-error';
 import type { Tank } from '../tanks';
 import type { Meetup } from './meetup.entity';
 import { MeetupRsvp } from './meetup.entity';
-import { tellPromoted } from './meetup-notices';
+import { tellPromoted, type NoticeDeps } from './meetup-notices';
 import { rsvpOf } from './meetups.queries';
 
 /** Answers change nothing once a meetup is cancelled or under way. */
@@ -19,7 +19,7 @@ export function requireOpen(meetup: Meetup, now: Date): void {
  * meetup's row lock, so two cancellations at once cannot both give the same place away: the second one counts
  * the places after the first has committed its promotions.
  */
-export async function promoteFromWaitlist(tx: EntityManager, meetup: Meetup): Promise<string[]> {
+export async function promoteFromWaitlist(tx: EntityManager, deps: NoticeDeps, meetup: Meetup): Promise<string[]> {
   // TypeORM answers an UPDATE … RETURNING with [rows, affected].
   const [rows]: [{ userId: string }[], number] = await tx.query(
     `WITH free AS (
@@ -35,7 +35,7 @@ export async function promoteFromWaitlist(tx: EntityManager, meetup: Meetup): Pr
     [meetup.id],
   );
   const promoted = rows.map((r) => r.userId);
-  if (promoted.length) await tellPromoted(tx, meetup, promoted);
+  if (promoted.length) await tellPromoted(tx, deps, meetup, promoted);
   return promoted;
 }
 
@@ -44,7 +44,7 @@ export async function promoteFromWaitlist(tx: EntityManager, meetup: Meetup): Pr
  * the decision is made in SQL under the meetup's row lock (taken by the caller), never from counts read earlier.
  * Saying "going" again keeps your place; saying "going" after "not going" queues you anew.
  */
-export async function respond(tx: EntityManager, meetup: Meetup, userId: string, response: RsvpResponse, now = new Date()): Promise<MeetupRsvp> {
+export async function respond(tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userId: string, response: RsvpResponse, now = new Date()): Promise<MeetupRsvp> {
   requireOpen(meetup, now);
   const existing = await rsvpOf(tx, meetup.id, userId);
   if (response === 'going') {
@@ -70,7 +70,7 @@ export async function respond(tx: EntityManager, meetup: Meetup, userId: string,
               checked_in_at = NULL, checked_in_by_id = NULL`,
       [meetup.id, userId],
     );
-    if (wasGoing) await promoteFromWaitlist(tx, meetup);
+    if (wasGoing) await promoteFromWaitlist(tx, deps, meetup);
   }
   return tx.findOneByOrFail(MeetupRsvp, { meetupId: meetup.id, userId });
 }

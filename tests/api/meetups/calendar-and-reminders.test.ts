@@ -80,9 +80,9 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
 
   it('when the reminder job runs 23 h before, then one e-mail says 19:00 (BST) and carries an .ics at 19:00 club time; running again sends nothing', async () => {
     const now = new Date(starts.after.getTime() - 23 * HOUR);
-    expect(await sendDueReminders(t.dataSource, now)).toEqual({ sent: 1 });
-    expect(await sendDueReminders(t.dataSource, now)).toEqual({ sent: 0 });
-    expect(await sendDueReminders(t.dataSource, new Date(now.getTime() + 15 * 60_000))).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, now)).toEqual({ sent: 1 });
+    expect(await sendDueReminders(t.deps, now)).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, new Date(now.getTime() + 15 * 60_000))).toEqual({ sent: 0 });
     const [mail, ...others] = await settledMailsTo(t.dataSource, memberEmail, 1);
     expect(others).toEqual([]);
     expect(mail!.subject).toBe('Tideline Keepers: Reminder: Spring talk after');
@@ -96,9 +96,9 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
   });
 
   it('when the earlier meetup’s reminder is due, then it says 19:00 (GMT); a reminder is not due 25 h before or after the start', async () => {
-    expect(await sendDueReminders(t.dataSource, new Date(starts.before.getTime() - 25 * HOUR))).toEqual({ sent: 0 });
-    expect(await sendDueReminders(t.dataSource, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 1 });
-    expect(await sendDueReminders(t.dataSource, new Date(starts.before.getTime() + HOUR))).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 25 * HOUR))).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 1 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() + HOUR))).toEqual({ sent: 0 });
     const mails = await settledMailsTo(t.dataSource, memberEmail, 2);
     const earlier = mails.find((m) => m.subject.endsWith('Spring talk before'))!;
     expect(earlier.text).toContain('19:00–21:00 (GMT)');
@@ -110,7 +110,7 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
     const moved = await admin.patch(`/api/clubs/${clubId}/meetups/${ids.after}`, { startsAt: `${after}T19:30`, endsAt: `${after}T21:30` });
     expect(moved.status).toBe(200);
     expect(moved.body.meetup.when).toContain('19:30–21:30 (BST)');
-    expect(await sendDueReminders(t.dataSource, new Date(starts.after.getTime() - 23 * HOUR))).toEqual({ sent: 1 });
+    expect(await sendDueReminders(t.deps, new Date(starts.after.getTime() - 23 * HOUR))).toEqual({ sent: 1 });
     const ics = (await member.get(`/api/clubs/${clubId}/meetups/${ids.after}/calendar.ics`)).text;
     expect(parseEvents(ics)[0]!.sequence).toBe(1);
     // The change e-mail and the new reminder, on top of the two reminders before.
@@ -154,7 +154,7 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
     expect(cancelled.sequence).toBe(1);
     const sentBefore = (await mailsTo(t.dataSource, memberEmail)).length;
     await t.dataSource.query(`DELETE FROM meetup_reminder`);
-    expect(await sendDueReminders(t.dataSource, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 0 });
     const mails = await settledMailsTo(t.dataSource, memberEmail, sentBefore + 1);
     expect(mails.at(-1)!.subject).toBe('Tideline Keepers: Cancelled: Spring talk before');
     expect(mails.at(-1)!.text).toContain('The hall flooded.');
