@@ -117,7 +117,7 @@ export function MeetupForm({
         onConfirm={() => confirming && void send(() => onUpdate!(confirming))}
         onCancel={() => setConfirming(null)}
       >
-        <p>{expected === 1 ? 'One person is' : `${expected} people are`} going or on the waitlist. Each of them gets an e-mail saying what changed, with the updated calendar entry.</p>
+        <p>{expected === 1 ? 'One person is going or on the waitlist. They get' : `${expected} people are going or on the waitlist. Each of them gets`} an e-mail saying what changed, with the updated calendar entry.</p>
       </ConfirmDialog>
     </form>
   );
