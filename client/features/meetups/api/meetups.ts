@@ -3,7 +3,7 @@ import type { BookingInput, CreateMeetupInput, MeetupListWhen, RsvpInput, Update
 import type { AttendanceHistoryView, AttendanceListView, AttendanceRowView, CalendarFeedView, MeetupDetailView, MeetupSummaryView } from '@shared/schemas/meetup-views';
 import type { CreateWaterTestInput } from '@shared/schemas/water-test.schema';
 import type { WaterTestSaved } from '@shared/schemas/tank-views';
-import { api } from '@client/lib/api-client';
+import { api, ApiError } from '@client/lib/api-client';
 import { useTankRecordsChanged } from '@client/lib/tank-keys';
 
 export const meetupKeys = {
@@ -101,7 +101,8 @@ export function useCheckIn(clubId: string, meetupId: string) {
   return useMutation({
     mutationKey,
     mutationFn: ({ userId, present }: Tick) => api.put<{ row: AttendanceRowView }>(`${base(clubId)}/${meetupId}/attendance/${userId}`, { present }),
-    retry: 3,
+    // A lost connection or a hiccup on the server is worth another try; a refusal (4xx) will not change.
+    retry: (failures, error) => failures < 3 && !(error instanceof ApiError && error.status < 500),
     retryDelay: (attempt) => Math.min(1_000 * 2 ** attempt, 8_000),
     onMutate: async ({ userId, present }: Tick) => {
       await qc.cancelQueries({ queryKey: key });
