@@ -1,16 +1,7 @@
-import type { Persona, World } from './world';
+import { adminsOnly, all, clubMembers, signedInOnly, type Expect, type MentorshipMatrixRow } from './matrix-mentorship-rows';
+import type { World } from './world';
 
-type Expect = Record<Persona, number>;
-export interface MeetupMatrixRow {
-  route: string;
-  request: (w: World) => { path: string; body?: unknown };
-  expect: Expect;
-}
-
-const all = (s: number): Expect => ({ anonymous: s, outsider: s, member: s, mentor: s, otherMentor: s, admin: s, suspended: s });
-const signedInOnly = (s: number): Expect => ({ ...all(s), anonymous: 401 });
-const clubMembers = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: s, mentor: s, otherMentor: s, admin: s, suspended: 403 });
-const adminsOnly = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: 403, otherMentor: 403, admin: s, suspended: 403 });
+export type MeetupMatrixRow = MentorshipMatrixRow;
 /** The clinic is run by `mentor`: they and the club's admins tick people in; other members and mentors may not. */
 const hostAndAdmins = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: s, otherMentor: 403, admin: s, suspended: 403 });
 const meetup = (w: World) => `/clubs/${w.club.id}/meetups/${w.meetups.clinic.id}`;

@@ -6,7 +6,7 @@ import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
 import { SelectField, TextAreaField, TextField } from '@client/components/ui/field';
-import { fieldsIn, placeServerErrors } from '@client/lib/form-errors';
+import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import { schemaResolver } from '@client/lib/schema-resolver';
 import { FORM_FIELDS, patchOf, toInput, type MeetupFormValues } from '../lib/meetup-form-values';
 
@@ -42,36 +42,32 @@ export function MeetupForm({
   const resolver = useMemo(() => schemaResolver<MeetupFormValues, typeof createMeetupSchema>(createMeetupSchema, toInput, fieldOf), []);
   const form = useForm<MeetupFormValues, unknown, unknown>({ defaultValues: initial, resolver });
   const kind = useWatch({ control: form.control, name: 'kind' });
-  const [formError, setFormError] = useState<string>();
+  const [notice, setNotice] = useState<string>();
   const [confirming, setConfirming] = useState<UpdateMeetupInput | null>(null);
   const [busy, setBusy] = useState(false);
+  const { formError, attempt } = useSaveErrors(fieldOf, form.setError);
   const { errors } = form.formState;
 
   const send = async (run: () => Promise<unknown>) => {
-    setFormError(undefined);
+    setNotice(undefined);
     setBusy(true);
-    try {
-      await run();
-    } catch (error) {
-      setFormError(placeServerErrors(error, fieldOf, form.setError));
-    } finally {
-      setBusy(false);
-      setConfirming(null);
-    }
+    await attempt(run);
+    setBusy(false);
+    setConfirming(null);
   };
 
   const submit = form.handleSubmit(() => {
     const values = form.getValues();
     if (onCreate) return send(() => onCreate(toInput(values)));
     const patch = patchOf(values, initial);
-    if (Object.keys(patch).length === 0) return setFormError('Nothing has changed yet.');
+    if (Object.keys(patch).length === 0) return setNotice('Nothing has changed yet.');
     if (expected > 0) return setConfirming(patch);
     return send(() => onUpdate!(patch));
   });
 
   return (
     <form onSubmit={submit} noValidate aria-label={submitLabel} className="space-y-4">
-      {formError ? <Notice tone="error">{formError}</Notice> : null}
+      {formError ?? notice ? <Notice tone="error">{formError ?? notice}</Notice> : null}
       <SelectField label="Kind of meetup" options={MEETUP_KINDS.map((k) => ({ value: k, label: MEETUP_KIND_LABELS[k] }))} error={errors.kind?.message} {...form.register('kind')} />
       <TextField label="Title" error={errors.title?.message} {...form.register('title')} />
       <TextAreaField label="What it is about" rows={4} error={errors.description?.message} {...form.register('description')} />
