@@ -7,12 +7,15 @@ import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { makeClub, makeMember } from '../helpers/factories';
 import { waitForMail } from '../helpers/mail';
+import { insertTank } from '../helpers/tank-rows';
 
 describe('meetups on a phone', () => {
   let browser: Browser;
   let ds: DataSource;
   let adminEmail: string;
   let memberEmail: string;
+  let mentorEmail: string;
+  let clubId: string;
 
   beforeAll(async () => {
     browser = await launchBrowser();
@@ -22,7 +25,8 @@ describe('meetups on a phone', () => {
     await ds.getRepository(Club).update({ id: club.id }, { timeZone: 'Europe/London' });
     adminEmail = (await makeMember(ds, club, 'Ada Admin', 'admin')).user.email;
     memberEmail = (await makeMember(ds, club, 'Bo Beginner')).user.email;
-    await makeMember(ds, club, 'Maya Mentor', 'mentor');
+    mentorEmail = (await makeMember(ds, club, 'Maya Mentor', 'mentor')).user.email;
+    clubId = club.id;
   });
   afterAll(async () => {
     await browser?.close();
@@ -109,5 +113,44 @@ describe('meetups on a phone', () => {
     expect(bo.errors).toEqual([]);
     await ada.context.close();
     await bo.context.close();
+  });
+  it('when a member books a clinic slot for her tank, then the mentor running it saves the results straight onto that tank', async () => {
+    const [bo] = await ds.query(`SELECT id FROM app_user WHERE email = $1`, [memberEmail]);
+    const [maya] = await ds.query(`SELECT id FROM app_user WHERE email = $1`, [mentorEmail]);
+    const tankId = await insertTank(ds, { clubId, ownerId: bo.id, systemType: 'tropical-freshwater', phase: 'cycling', volumeL: 60, name: 'Guppy starter' });
+    const [clinic] = await ds.query(
+      `INSERT INTO meetup (club_id, kind, title, starts_at, ends_at, place_text, capacity, host_id, slot_minutes)
+       VALUES ($1, 'clinic', 'Bring-a-sample clinic', date_trunc('hour', now()) + interval '2 days', date_trunc('hour', now()) + interval '2 days 1 hour', 'The back room', 6, $2, 20)
+       RETURNING id`,
+      [clubId, maya.id],
+    );
+    const member = await openSignedIn(browser, PHONE, memberEmail, `/meetups/${clinic.id}`);
+    await member.page.getByRole('button', { name: 'I’m going' }).click();
+    const booking = member.page.locator('section', { hasText: 'Bring a water sample' });
+    await booking.getByLabel('Water from').waitFor();
+    const slots = booking.getByRole('group', { name: 'Slot' }).getByRole('button');
+    expect(await slots.count()).toBe(3);
+    await slots.nth(1).click();
+    await booking.getByRole('button', { name: 'Book this slot' }).click();
+    await booking.getByText(/✓ Your slot: \d\d:\d\d, water from Guppy starter/).waitFor();
+    await screenshot(member.page, 'meetup-clinic-booked-phone');
+
+    const host = await openSignedIn(browser, PHONE, mentorEmail, `/meetups/${clinic.id}/check-in`);
+    await host.page.getByText(/water from Guppy starter/).waitFor();
+    await host.page.getByRole('button', { name: 'Record results for Guppy starter' }).click();
+    const results = host.page.getByRole('form', { name: 'Results for Bo Beginner' });
+    await results.getByLabel('Nitrite (mg/L NO2)').fill('0.5');
+    await results.getByLabel('pH', { exact: true }).fill('7.4');
+    await screenshot(host.page, 'meetup-clinic-results-phone');
+    await results.getByRole('button', { name: 'Save on their tank' }).click();
+    await host.page.getByRole('button', { name: '✓ Results saved · record again' }).waitFor();
+    await host.page.getByRole('button', { name: 'Bo Beginner: here' }).waitFor();
+
+    const saved = await ds.query(`SELECT w.created_by_id AS "by", w.ph FROM water_test w WHERE w.tank_id = $1`, [tankId]);
+    expect(saved).toEqual([{ by: maya.id, ph: 7.4 }]);
+    expect(member.errors).toEqual([]);
+    expect(host.errors).toEqual([]);
+    await member.context.close();
+    await host.context.close();
   });
 });

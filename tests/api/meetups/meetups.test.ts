@@ -158,6 +158,22 @@ describe('meetups: planning, answering, clinics and check-in', () => {
     expect((await maya.post(`${base()}/${m.id}/bookings/${admin.user.id}/water-tests`, { takenAt, entries: { pH: { value: 7 } } })).status).toBe(404);
   });
 
+  it('when two members book the same clinic slot at the same moment, then one gets it and the other is told to choose another', async () => {
+    const m = await create(talk({ kind: 'clinic', title: 'Bring a sample', hostId: mentor.user.id, slotMinutes: 30, capacity: 6 }));
+    const cy = await signedIn(t.app, other.user.email);
+    const tanks = [
+      await insertTank(t.dataSource, { clubId: club.id, ownerId: keeper.user.id, systemType: 'tropical-freshwater', name: 'Bo’s tank' }),
+      await insertTank(t.dataSource, { clubId: club.id, ownerId: other.user.id, systemType: 'tropical-freshwater', name: 'Cy’s tank' }),
+    ];
+    for (const c of [bo, cy]) await c.put(`${base()}/${m.id}/rsvp`, { response: 'going' });
+    const slot = m.slots[0]!.startsAt;
+    const answers = await Promise.all([bo, cy].map((c, i) => c.put(`${base()}/${m.id}/booking`, { slotStartsAt: slot, tankId: tanks[i] })));
+    expect(answers.map((a) => a.status).sort()).toEqual([200, 409]);
+    expect(answers.find((a) => a.status === 409)!.body.error.message).toBe('Someone has just booked that slot. Choose another.');
+    const held: { n: number }[] = await t.dataSource.query(`SELECT count(*)::int AS n FROM meetup_rsvp WHERE meetup_id = $1 AND slot_starts_at = $2`, [m.id, slot]);
+    expect(held[0]!.n).toBe(1);
+  });
+
   it('when people are ticked in twice or out again, then the list settles on the last answer and the history counts it', async () => {
     const m = await create(talk({ startsAt: clubTimeIn(1, '19:00'), endsAt: clubTimeIn(1, '21:00') }));
     await bo.put(`${base()}/${m.id}/rsvp`, { response: 'going' });
