@@ -7,7 +7,10 @@ export interface UserSubject { id: string }
 /** Tanks and everything logged on them carry the tank's club and owner. */
 export interface OwnedInClub { clubId: string; ownerId: string }
 export interface QuestionSubject { clubId: string; askerId: string }
-export interface MeetupSubject { clubId: string }
+/** hostId: who runs it (a clinic's mentor), or null. */
+export interface MeetupSubject { clubId: string; hostId?: string | null }
+/** One member's meetup attendance in one club. */
+export interface AttendanceSubject { clubId: string; userId: string }
 export interface CareProfileSubject { clubId: string | null }
 export interface AuditEventSubject { clubId: string | null }
 export interface MentorRequestSubject { id?: string; clubId: string; requesterId: string }
@@ -27,6 +30,7 @@ export interface SubjectMap {
   Concern: OwnedInClub;
   Question: QuestionSubject;
   Meetup: MeetupSubject;
+  Attendance: AttendanceSubject;
   CareProfile: CareProfileSubject;
   AuditEvent: AuditEventSubject;
   MentorRequest: MentorRequestSubject;
@@ -36,11 +40,13 @@ export interface SubjectMap {
 export type SubjectType = keyof SubjectMap;
 export const SUBJECT_TYPES = [
   'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
-  'Question', 'Meetup', 'CareProfile', 'AuditEvent', 'MentorRequest', 'MentorSettings',
+  'Question', 'Meetup', 'Attendance', 'CareProfile', 'AuditEvent', 'MentorRequest', 'MentorSettings',
 ] as const satisfies readonly SubjectType[];
 
 export const ACTIONS = [
   'manage', 'create', 'read', 'update', 'delete', 'answer', 'acknowledge', 'resolve', 'signOff', 'rsvp',
+  /** Tick people in at a meetup; record a clinic's results onto the tank of the member who brought the water. */
+  'checkIn', 'recordResults',
   /** Be told live when a tank changes: its keeper, their current mentor and the club's admins (not past mentors). */
   'watch',
 ] as const;
