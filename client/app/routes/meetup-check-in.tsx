@@ -1,8 +1,9 @@
-import { Link, useParams } from 'react-router';
+import { useParams } from 'react-router';
 import { asSubject } from '@shared/abilities';
+import { ButtonLink } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useMeetup } from '@client/features/meetups/api/meetups';
 import { AttendanceList } from '@client/features/meetups/components/attendance-list';
@@ -16,14 +17,14 @@ export function Component() {
   const meetup = useMeetup(clubId, meetupId);
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   if (meetup.isError) throw meetup.error;
-  if (meetup.isPending) return <Spinner label="Loading the meetup…" />;
+  if (meetup.isPending) return <PageSkeleton label="Loading the meetup…" />;
   const m = meetup.data;
   const subject = asSubject('Meetup', { clubId: m.clubId, hostId: m.host?.userId ?? null });
   if (!ability.can('checkIn', subject)) return <Notice tone="warning">Club admins and whoever runs the meetup tick people in.</Notice>;
   const records = m.kind === 'clinic' && ability.can('recordResults', subject);
   return (
     <>
-      <PageHeader title="Check-in" subtitle={`${m.title} · ${m.when}`} actions={<Link to={`/meetups/${m.id}`} className="inline-flex min-h-touch items-center rounded-full px-4 font-bold text-tide-700 hover:bg-tide-50">The meetup</Link>} />
+      <PageHeader title="Check-in" subtitle={`${m.title} · ${m.when}`} actions={<ButtonLink variant="ghost" to={`/meetups/${m.id}`}>The meetup</ButtonLink>} />
       <AttendanceList clubId={clubId} meetupId={m.id} renderExtra={records ? (row) => <ClinicResultForm clubId={clubId} meetupId={m.id} row={row} /> : undefined} />
     </>
   );

@@ -2,7 +2,7 @@ import { useMemo } from 'react';
 import { useNavigate, useParams } from 'react-router';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useMembers } from '@client/features/club/api/club';
 import { useMeetup, useUpdateMeetup } from '@client/features/meetups/api/meetups';
@@ -21,7 +21,7 @@ export function Component() {
   const initial = useMemo(() => (meetup.data ? valuesOf(meetup.data) : null), [meetup.data]);
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   if (meetup.isError) throw meetup.error;
-  if (!initial || !meetup.data || members.isPending) return <Spinner label="Loading the meetup…" />;
+  if (!initial || !meetup.data || members.isPending) return <PageSkeleton label="Loading the meetup…" />;
   const m = meetup.data;
   if (m.status === 'cancelled') return <Notice tone="warning">This meetup was cancelled; it can no longer be changed.</Notice>;
   return (

@@ -4,7 +4,7 @@ import { asSubject } from '@shared/abilities';
 import { utcToClubTime } from '@shared/meetups/club-time';
 import { Card, Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useClub, useMembers } from '@client/features/club/api/club';
 import { useCreateMeetup } from '@client/features/meetups/api/meetups';
@@ -26,7 +26,7 @@ export function Component() {
   const initial = useMemo(() => blankMeetup(utcToClubTime(new Date(openedAt + WEEK), timeZone)), [openedAt, timeZone]);
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   if (!ability.can('create', asSubject('Meetup', { clubId }))) return <Notice tone="warning">Club admins plan meetups.</Notice>;
-  if (club.isPending || members.isPending) return <Spinner label="Loading…" />;
+  if (club.isPending || members.isPending) return <PageSkeleton label="Loading…" />;
   return (
     <>
       <PageHeader title="Plan a meetup" subtitle={activeClub.clubName} />

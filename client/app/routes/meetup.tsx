@@ -1,10 +1,11 @@
-import { Link, useParams } from 'react-router';
+import { useParams } from 'react-router';
 import { asSubject } from '@shared/abilities';
 import { MEETUP_KIND_LABELS } from '@shared/constants/meetups';
+import { ButtonLink } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { CautionFor } from '@client/components/ui/cautions';
 import { PageHeader } from '@client/components/ui/page-header';
-import { Spinner } from '@client/components/ui/spinner';
+import { PageSkeleton } from '@client/components/ui/skeleton';
 import { useSession } from '@client/features/auth/components/session-provider';
 import { useMeetup } from '@client/features/meetups/api/meetups';
 import { CancelMeetup } from '@client/features/meetups/components/cancel-meetup';
@@ -13,7 +14,6 @@ import { MeetupRouteError } from '@client/features/meetups/components/meetup-rou
 import { RsvpPanel } from '@client/features/meetups/components/rsvp-panel';
 import { useTankList } from '@client/features/tanks/api/tanks';
 
-const linkButton = 'inline-flex min-h-touch items-center rounded-full px-4 font-bold';
 
 export function Component() {
   const { meetupId = '' } = useParams();
@@ -24,7 +24,7 @@ export function Component() {
   const tanks = useTankList(clubId, { mine: true, includeArchived: false });
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
   if (meetup.isError) throw meetup.error;
-  if (meetup.isPending) return <Spinner label="Loading the meetup…" />;
+  if (meetup.isPending) return <PageSkeleton label="Loading the meetup…" />;
   const m = meetup.data;
   const subject = asSubject('Meetup', { clubId: m.clubId, hostId: m.host?.userId ?? null });
   const manages = ability.can('update', subject);
@@ -39,8 +39,8 @@ export function Component() {
         actions={
           m.status === 'scheduled' && (manages || checksIn) ? (
             <>
-              {checksIn ? <Link to={`/meetups/${m.id}/check-in`} className={`${linkButton} bg-tide-700 text-white hover:bg-tide-800`}>Check people in</Link> : null}
-              {manages ? <Link to={`/meetups/${m.id}/edit`} className={`${linkButton} bg-white text-tide-800 ring-1 ring-tide-200`}>Edit</Link> : null}
+              {checksIn ? <ButtonLink to={`/meetups/${m.id}/check-in`}>Check people in</ButtonLink> : null}
+              {manages ? <ButtonLink variant="secondary" to={`/meetups/${m.id}/edit`}>Edit</ButtonLink> : null}
             </>
           ) : undefined
         }
@@ -50,17 +50,17 @@ export function Component() {
         <div className="space-y-4">
           <Card>
             <dl className="grid gap-3 sm:grid-cols-[8rem_1fr]">
-              <dt className="font-bold text-tide-800">When</dt>
-              <dd>{m.when}<span className="block text-sm text-tide-600">Club time ({m.timeZone})</span></dd>
-              <dt className="font-bold text-tide-800">{m.kind === 'online' ? 'Join' : 'Where'}</dt>
+              <dt className="font-bold text-ink-soft">When</dt>
+              <dd>{m.when}<span className="block text-sm text-ink-muted">Club time ({m.timeZone})</span></dd>
+              <dt className="font-bold text-ink-soft">{m.kind === 'online' ? 'Join' : 'Where'}</dt>
               <dd>
-                {m.kind === 'online' && m.onlineUrl ? <a href={m.onlineUrl} rel="noopener noreferrer nofollow" target="_blank" className="font-bold text-tide-700 underline">{m.onlineUrl}</a> : m.placeText}
-                {m.mapUrl ? <a href={m.mapUrl} rel="noopener noreferrer nofollow" target="_blank" className="ml-2 font-bold text-tide-700 underline">Map</a> : null}
+                {m.kind === 'online' && m.onlineUrl ? <a href={m.onlineUrl} rel="noopener noreferrer nofollow" target="_blank" className="font-bold text-link underline">{m.onlineUrl}</a> : m.placeText}
+                {m.mapUrl ? <a href={m.mapUrl} rel="noopener noreferrer nofollow" target="_blank" className="ml-2 font-bold text-link underline">Map</a> : null}
               </dd>
-              {m.host ? (<><dt className="font-bold text-tide-800">Run by</dt><dd>{m.host.displayName}</dd></>) : null}
+              {m.host ? (<><dt className="font-bold text-ink-soft">Run by</dt><dd>{m.host.displayName}</dd></>) : null}
             </dl>
-            {m.description ? <p className="mt-4 whitespace-pre-line text-tide-900">{m.description}</p> : null}
-            <a href={`/api/clubs/${m.clubId}/meetups/${m.id}/calendar.ics`} className="mt-4 inline-flex min-h-touch items-center font-bold text-tide-700 underline">Add to my calendar (.ics)</a>
+            {m.description ? <p className="mt-4 whitespace-pre-line text-ink">{m.description}</p> : null}
+            <a href={`/api/clubs/${m.clubId}/meetups/${m.id}/calendar.ics`} className="mt-4 inline-flex min-h-touch items-center font-bold text-link underline">Add to my calendar (.ics)</a>
           </Card>
           {m.kind === 'swap' ? <CautionFor kind="buyingAnimals" title="Swapping and buying animals" /> : null}
           {m.kind === 'tour' ? <CautionFor kind="electricity" title="Around other people’s tanks" /> : null}

@@ -1,7 +1,7 @@
 import { useState } from 'react';
-import { Link } from 'react-router';
 import { asSubject } from '@shared/abilities';
 import type { MeetupListWhen } from '@shared/schemas/meetup.schema';
+import { ButtonLink } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { PageHeader } from '@client/components/ui/page-header';
 import { Segmented } from '@client/components/ui/segmented';
@@ -15,7 +15,6 @@ const TABS: { value: MeetupListWhen; label: string }[] = [
   { value: 'past', label: 'Past' },
 ];
 
-const linkButton = 'inline-flex min-h-touch items-center rounded-full px-4 font-bold';
 
 export function Component() {
   const { me, activeClub, ability } = useSession();
@@ -28,11 +27,11 @@ export function Component() {
       <PageHeader
         title="Meetups"
         subtitle={`What ${activeClub.clubName} has planned. Times are the club’s local time.`}
-        actions={plans ? <Link to="/meetups/new" className={`${linkButton} bg-tide-700 text-white hover:bg-tide-800`}>Plan a meetup</Link> : undefined}
+        actions={plans ? <ButtonLink to="/meetups/new">Plan a meetup</ButtonLink> : undefined}
       />
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
         <Segmented label="Which meetups" options={TABS} value={when} onChange={setWhen} inline />
-        <Link to={`/meetups/attendance/${me.user.id}`} className={`${linkButton} text-tide-700 hover:bg-tide-50`}>My attendance</Link>
+        <ButtonLink variant="ghost" to={`/meetups/attendance/${me.user.id}`}>My attendance</ButtonLink>
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,22rem)]">
         <MeetupList clubId={clubId} when={when} />

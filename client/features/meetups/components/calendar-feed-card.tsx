@@ -1,7 +1,8 @@
 import { useState } from 'react';
-import { Button } from '@client/components/ui/button';
+import { Button, buttonClass } from '@client/components/ui/button';
 import { Card, Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
+import { Input } from '@client/components/ui/field';
 import { useCalendarFeed, useResetCalendarFeed } from '../api/meetups';
 
 /** The personal, read-only calendar link: meetups you are going to or waiting for show up in your calendar app. */
@@ -14,12 +15,12 @@ export function CalendarFeedCard() {
   const url = feed.data.url;
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">In your calendar</h2>
-      <p className="mt-1 text-sm text-tide-700">Subscribe to this link in your calendar app: meetups you are going to (or waiting for) appear there and follow every change. It is yours alone: anyone with it can see those meetups.</p>
-      <input readOnly value={url} aria-label="Your calendar link" onFocus={(e) => e.currentTarget.select()} className="mt-3 block w-full truncate rounded-xl border border-tide-200 bg-tide-50 px-3 py-2 text-sm text-tide-900" />
+      <h2 className="text-lg font-extrabold text-ink">In your calendar</h2>
+      <p className="mt-1 text-sm text-ink-muted">Subscribe to this link in your calendar app: meetups you are going to (or waiting for) appear there and follow every change. It is yours alone: anyone with it can see those meetups.</p>
+      <Input readOnly value={url} aria-label="Your calendar link" onFocus={(e) => e.currentTarget.select()} className="mt-3 w-full truncate text-sm" />
       <div className="mt-3 flex flex-wrap gap-2">
         <Button variant="secondary" onClick={() => void navigator.clipboard?.writeText(url).then(() => setCopied(true))}>{copied ? '✓ Copied' : 'Copy the link'}</Button>
-        <a href={url.replace(/^https?:/, 'webcal:')} className="inline-flex min-h-touch items-center rounded-full px-4 font-bold text-tide-700 hover:bg-tide-50">Open in calendar app</a>
+        <a href={url.replace(/^https?:/, 'webcal:')} className={buttonClass('ghost')}>Open in calendar app</a>
         <Button variant="ghost" onClick={() => setConfirm(true)}>Make a new link</Button>
       </div>
       {reset.isError ? <div className="mt-3"><Notice tone="error">{reset.error.message}</Notice></div> : null}

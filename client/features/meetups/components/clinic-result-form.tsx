@@ -40,13 +40,13 @@ export function ClinicResultForm({ clubId, meetupId, row }: { clubId: string; me
   return (
     <form
       aria-label={`Results for ${row.displayName}`}
-      className="my-2 w-full space-y-3 rounded-xl bg-tide-50 p-3"
+      className="my-2 w-full space-y-3 rounded-xl bg-tint p-3"
       onSubmit={(e) => {
         e.preventDefault();
         record.mutate({ userId: row.userId, tankId: row.tank!.id, input: toInput(values) }, { onSuccess: () => setOpen(false) });
       }}
     >
-      <p className="text-sm font-bold text-tide-800">Water from {row.tank.name}: fill in what you tested.</p>
+      <p className="text-sm font-bold text-ink-soft">Water from {row.tank.name}: fill in what you tested.</p>
       <div className="grid grid-cols-2 gap-3">
         {BENCH.map((b) => (
           <TextField key={b.key} label={b.label} type="number" inputMode="decimal" step="any" value={values[b.key]} error={issue(b.key)} onChange={(e) => setValues((v) => ({ ...v, [b.key]: e.target.value }))} />

@@ -5,7 +5,8 @@ import { createMeetupSchema, type CreateMeetupInput, type UpdateMeetupInput } fr
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
-import { SelectField, TextAreaField, TextField } from '@client/components/ui/field';
+import { TextAreaField, TextField } from '@client/components/ui/field';
+import { SelectField } from '@client/components/ui/select';
 import { fieldsIn, useSaveErrors } from '@client/lib/form-errors';
 import { schemaResolver } from '@client/lib/schema-resolver';
 import { FORM_FIELDS, patchOf, toInput, type MeetupFormValues } from '../lib/meetup-form-values';

@@ -14,10 +14,10 @@ export function RsvpPanel({ clubId, meetup }: { clubId: string; meetup: MeetupDe
   const full = meetup.goingCount >= meetup.capacity;
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-tide-900">Are you coming?</h2>
+      <h2 className="text-lg font-extrabold text-ink">Are you coming?</h2>
       <div className="mt-1 flex flex-wrap items-center gap-2"><Places meetup={meetup} /><MyAnswer mine={meetup.mine} /></div>
       {status === 'waitlisted' ? (
-        <p className="mt-2 text-sm text-tide-800">All places are taken. You are number {meetup.mine?.waitlistPosition} in line: when someone drops out, the place goes to the next person and we e-mail them.</p>
+        <p className="mt-2 text-sm text-ink-soft">All places are taken. You are number {meetup.mine?.waitlistPosition} in line: when someone drops out, the place goes to the next person and we e-mail them.</p>
       ) : null}
       {open ? (
         <div className="mt-4 flex flex-wrap gap-2">
@@ -29,7 +29,7 @@ export function RsvpPanel({ clubId, meetup }: { clubId: string; meetup: MeetupDe
           </Button>
         </div>
       ) : (
-        <p className="mt-3 text-sm text-tide-700">{meetup.status === 'cancelled' ? 'This meetup was cancelled.' : 'Answers are closed: it has started.'}</p>
+        <p className="mt-3 text-sm text-ink-muted">{meetup.status === 'cancelled' ? 'This meetup was cancelled.' : 'Answers are closed: it has started.'}</p>
       )}
       {rsvp.isError ? <div className="mt-3"><Notice tone="error">{rsvp.error.message}</Notice></div> : null}
     </Card>
