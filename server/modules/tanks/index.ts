@@ -27,4 +27,5 @@ export { createTank } from './tank.service';
 export { attachPhotos } from './tank-photo.service';
 export { createWaterTest, insertWaterTests, type NewWaterTest } from './water-test.service';
 export { chemistryOf, lastKnownBefore } from './water-test.context';
-export { takenAtsOf } from './water-test.queries';
+export { allWaterTests, takenAtsOf } from './water-test.queries';
+export { allTankEvents } from './tank-event.queries';

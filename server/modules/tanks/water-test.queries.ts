@@ -1,4 +1,5 @@
 import type { EntityManager } from 'typeorm';
+import { pageOf, type Position } from './cursor';
 import type { ParameterKey, WaterTestInput } from '@shared/care';
 import { VALUE_COLUMNS, WaterTest } from './water-test.entity';
 
@@ -25,4 +26,27 @@ export async function careHistory(m: EntityManager, tankId: string, now: Date, d
 export async function takenAtsOf(m: EntityManager, tankId: string): Promise<Set<number>> {
   const rows = await m.find(WaterTest, { where: { tankId }, select: { takenAt: true } });
   return new Set(rows.map((r) => r.takenAt.getTime()));
+}
+
+/** One page of the tank's tests, newest first, optionally between two times. */
+export async function waterTestPage(
+  m: EntityManager,
+  tankId: string,
+  q: { before?: Position; from?: string; to?: string; limit: number },
+): Promise<{ items: WaterTest[]; nextCursor: string | null }> {
+  const qb = m.createQueryBuilder(WaterTest, 'w').where('w.tank_id = :tankId', { tankId });
+  if (q.before) qb.andWhere('(w.taken_at, w.id) < (:at, :id)', { at: q.before.at, id: q.before.id });
+  if (q.from) qb.andWhere('w.taken_at >= :from', { from: new Date(q.from) });
+  if (q.to) qb.andWhere('w.taken_at <= :to', { to: new Date(q.to) });
+  const rows = await qb.orderBy('w.taken_at', 'DESC').addOrderBy('w.id', 'DESC').limit(q.limit + 1).getMany();
+  return pageOf(rows, q.limit, (t) => ({ at: t.takenAt, id: t.id }));
+}
+
+export async function findWaterTest(m: EntityManager, tankId: string, testId: string): Promise<WaterTest | null> {
+  return m.findOneBy(WaterTest, { id: testId, tankId });
+}
+
+/** All of the tank's tests, oldest first (the export). */
+export async function allWaterTests(m: EntityManager, tankId: string): Promise<WaterTest[]> {
+  return m.find(WaterTest, { where: { tankId }, order: { takenAt: 'ASC', id: 'ASC' } });
 }
