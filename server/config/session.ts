@@ -1,7 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import type { Pool } from 'pg';
-import { SESSION_ABSOLUTE_HOURS, SESSION_IDLE_MINUTES } from '../../shared/constants/security';
+import { SESSION_ABSOLUTE_HOURS, SESSION_IDLE_MINUTES } from '@shared/constants/security';
 import type { Config } from './env';
 
 declare module 'express-session' {

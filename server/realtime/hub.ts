@@ -1,5 +1,5 @@
 import type { Server } from 'socket.io';
-import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '../../shared/events/socket-events';
+import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '@shared/events/socket-events';
 
 export type IoServer = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, { userId: string }>;
 

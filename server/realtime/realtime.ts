@@ -5,7 +5,7 @@ import type { Pool } from 'pg';
 import type { Logger } from 'pino';
 import { Server } from 'socket.io';
 import type { DataSource } from 'typeorm';
-import { rooms } from '../../shared/events/socket-events';
+import { rooms } from '@shared/events/socket-events';
 import type { Config } from '../config/env';
 import type { IoServer, RealtimeHub } from './hub';
 

@@ -9,7 +9,6 @@ export interface OwnedInClub { clubId: string; ownerId: string }
 export interface QuestionSubject { clubId: string; askerId: string }
 export interface MeetupSubject { clubId: string }
 export interface CareProfileSubject { clubId: string | null }
-export interface AuditEventSubject { clubId: string | null }
 export interface MentorRequestSubject { id?: string; clubId: string; requesterId: string }
 /** A mentor's own settings in one club (e.g. how many mentees they take on). */
 export interface MentorSettingsSubject { clubId: string; mentorId: string }
@@ -28,7 +27,6 @@ export interface SubjectMap {
   Question: QuestionSubject;
   Meetup: MeetupSubject;
   CareProfile: CareProfileSubject;
-  AuditEvent: AuditEventSubject;
   MentorRequest: MentorRequestSubject;
   MentorSettings: MentorSettingsSubject;
 }
@@ -36,7 +34,7 @@ export interface SubjectMap {
 export type SubjectType = keyof SubjectMap;
 export const SUBJECT_TYPES = [
   'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
-  'Question', 'Meetup', 'CareProfile', 'AuditEvent', 'MentorRequest', 'MentorSettings',
+  'Question', 'Meetup', 'CareProfile', 'MentorRequest', 'MentorSettings',
 ] as const satisfies readonly SubjectType[];
 
 export const ACTIONS = [

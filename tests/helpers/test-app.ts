@@ -5,14 +5,14 @@ import pg from 'pg';
 import type { Express, Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { inject } from 'vitest';
-import { createApp } from '../../server/app';
-import type { Deps } from '../../server/deps';
-import { loadConfig, type Config } from '../../server/config/env';
-import { openDataSource } from '../../server/db/data-source';
-import { guardPool, POOL_DEFAULTS } from '../../server/db/pool-errors';
-import { createLogger } from '../../server/lib/logger';
-import { startMail, type MailInfrastructure } from '../../server/mail/start-mail';
-import { RealtimeHub } from '../../server/realtime/hub';
+import { createApp } from '@server/app';
+import type { Deps } from '@server/deps';
+import { loadConfig, type Config } from '@server/config/env';
+import { openDataSource } from '@server/db/data-source';
+import { guardPool, POOL_DEFAULTS } from '@server/db/pool-errors';
+import { createLogger } from '@server/lib/logger';
+import { startMail, type MailInfrastructure } from '@server/mail/start-mail';
+import { RealtimeHub } from '@server/realtime/hub';
 
 export interface TestApp {
   app: Express;

@@ -1,7 +1,7 @@
 import { IsNull, type EntityManager } from 'typeorm';
 import type { Deps } from '@server/deps';
-import type { Role } from '../../../shared/constants/roles';
-import { INVITE_VALID_DAYS } from '../../../shared/constants/security';
+import type { Role } from '@shared/constants/roles';
+import { INVITE_VALID_DAYS } from '@shared/constants/security';
 import { errors } from '../../lib/app-error';
 import { hashToken, newToken } from '../../lib/tokens';
 import { inviteMail } from '../../mail/templates';
@@ -10,8 +10,8 @@ import { audit } from '../audit';
 import { Club, Membership } from '../clubs';
 import { User, userByEmail } from '../users';
 import { Invite } from './invite.entity';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY_MS = 86_400_000;
 
 export interface IssuedInvite {
   invite: Invite;

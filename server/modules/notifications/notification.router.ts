@@ -1,8 +1,8 @@
 import { Router } from 'express';
 import type { Deps } from '@server/deps';
-import { DEFAULT_EMAIL_MODES } from '../../../shared/constants/notifications';
-import type { NotificationPage, NotificationPreferencesView } from '../../../shared/schemas/notification-views';
-import { listNotificationsQuery, notificationParams, updateNotificationPreferencesSchema } from '../../../shared/schemas/notification.schema';
+import { DEFAULT_EMAIL_MODES } from '@shared/constants/notifications';
+import type { NotificationPage, NotificationPreferencesView } from '@shared/schemas/notification-views';
+import { listNotificationsQuery, notificationParams, updateNotificationPreferencesSchema } from '@shared/schemas/notification.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';

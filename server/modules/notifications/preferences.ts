@@ -5,7 +5,7 @@ import {
   type EmailMode,
   type NotificationKind,
   type UnsubscribeScope,
-} from '../../../shared/constants/notifications';
+} from '@shared/constants/notifications';
 import { audit } from '../audit';
 import { NotificationPreference } from './notification-preference.entity';
 

@@ -1,7 +1,7 @@
 import { Router, type Request, type Response } from 'express';
 import type { Deps } from '@server/deps';
-import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '../../../shared/constants/notifications';
-import { unsubscribeQuery } from '../../../shared/schemas/notification.schema';
+import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '@shared/constants/notifications';
+import { unsubscribeQuery } from '@shared/schemas/notification.schema';
 import { findUser } from '../users';
 import { unsubscribe } from './preferences';
 import { unsubscribePage } from './unsubscribe-page';

@@ -1,5 +1,5 @@
 import type { EntityManager } from 'typeorm';
-import type { TankDetailView } from '../../../shared/schemas/tank-views';
+import type { TankDetailView } from '@shared/schemas/tank-views';
 import { User } from '../users';
 import { livestockPresentFirst } from './livestock.queries';
 import type { Tank } from './tank.entity';

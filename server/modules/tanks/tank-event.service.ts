@@ -1,8 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import { FUTURE_TOLERANCE_MS } from '../../../shared/readings/normalize-water-test';
-import { isLinearEntry, toCanonical } from '../../../shared/readings/convert-entry';
-import { salinityFromEntry } from '../../../shared/readings/salinity';
+import { FUTURE_TOLERANCE_MS } from '@shared/readings/normalize-water-test';
+import { isLinearEntry, toCanonical } from '@shared/readings/convert-entry';
+import { salinityFromEntry } from '@shared/readings/salinity';
 import {
   LIVESTOCK_EVENT_KINDS,
   TANK_EVENT_DETAILS_SCHEMAS,
@@ -10,7 +10,7 @@ import {
   type TankEventDetails,
   type TankEventKind,
   type updateTankEventSchema,
-} from '../../../shared/schemas/tank-event.schema';
+} from '@shared/schemas/tank-event.schema';
 import { errors } from '../../lib/app-error';
 import { parseInput } from '../../middleware/validate';
 import { audit } from '../audit';

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { SEAHORSE_LARGE_PROFILE } from '../../../shared/care';
-import { resetDatabase } from '../../helpers/db';
-import { Client, signedIn, type UploadFile } from '../../helpers/http';
-import { listRoutes } from '../../helpers/route-table';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { SEAHORSE_LARGE_PROFILE } from '@shared/care';
+import { resetDatabase } from '@tests/helpers/db';
+import { Client, signedIn, type UploadFile } from '@tests/helpers/http';
+import { listRoutes } from '@tests/helpers/route-table';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { CARE_ROWS } from './matrix-care-rows';
 import { TANK_ROWS } from './matrix-tank-rows';
 import { MENTORSHIP_ROWS } from './matrix-mentorship-rows';

@@ -1,6 +1,6 @@
 import { resolve } from 'node:path';
 import { describe, expect, it } from 'vitest';
-import { ConfigError, loadConfig } from '../../../server/config/env';
+import { ConfigError, loadConfig } from '@server/config/env';
 
 describe('loadConfig', () => {
   it('when PORT is not a number, then the message names PORT', () => {
