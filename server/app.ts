@@ -23,6 +23,7 @@ import { deskRouter } from './modules/desk';
 import { healthRouter } from './modules/health';
 import { inviteRouter } from './modules/invites';
 import { outboxRouter } from './modules/mail';
+import { calendarFeedRouter, meetupsRouter } from './modules/meetups';
 import { assignmentRouter, mentorCapacityRouter, mentorRequestRouter } from './modules/mentorship';
 import { createNotifier, notificationRouter, tellMentorsOfConcerns, unsubscribeRouter } from './modules/notifications';
 import { questionRouter } from './modules/questions';
@@ -62,7 +63,8 @@ export interface CreatedApp {
   deps: Deps;
 }
 
-const redactTokens = (url: string) => url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
+const redactTokens = (url: string) =>
+  url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/\/calendar-feeds\/[^/?]+/, '/calendar-feeds/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
@@ -108,13 +110,14 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   api.use(healthRouter(deps));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
   api.use(unsubscribeRouter(deps));
+  api.use(calendarFeedRouter(deps));
   api.use(sessionMiddleware);
   api.use(csrfProtection);
   api.use(attachViewer(deps.dataSource));
   for (const router of [
     authRouter, clubRouter, inviteRouter, assignmentRouter, mentorRequestRouter, mentorCapacityRouter, notificationRouter,
     careProfileRouter, concernRouter, deskRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
-    timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter,
+    timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter, meetupsRouter,
   ]) {
     api.use(router(deps));
   }

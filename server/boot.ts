@@ -10,6 +10,7 @@ import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
+import { startMeetupReminders } from './modules/meetups';
 import { startDigestScheduler } from './modules/notifications/digest-scheduler';
 import { RealtimeHub } from './realtime/hub';
 import { startRealtime } from './realtime/realtime';
@@ -36,6 +37,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const digest = await startDigestScheduler({ config, dataSource, mailer: mail.mailer, logger });
   const hub = new RealtimeHub();
   const { app, sessionMiddleware, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
+  const reminders = await startMeetupReminders({ deps, logger });
   const server = createServer(app);
   // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
   const adapterPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }), logger, 'socket-adapter');
@@ -56,6 +58,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
         setTimeout(() => server.closeAllConnections(), 5_000).unref();
       });
       await digest.stop().catch(() => undefined);
+      await reminders.stop().catch(() => undefined);
       await mail.close().catch(() => undefined);
       await adapterPool.end().catch(() => undefined);
       await sessionPool.end().catch(() => undefined);

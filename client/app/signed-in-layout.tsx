@@ -15,6 +15,7 @@ function ShellForSession() {
     { to: '/', label: 'Home', end: true },
     { to: '/tanks', label: 'My tanks' },
     ...(activeClub ? [{ to: '/questions', label: 'Questions' }] : []),
+    ...(activeClub ? [{ to: '/meetups', label: 'Meetups' }] : []),
     ...(activeClub && activeClub.role !== 'member' ? [{ to: '/desk', label: 'Mentor desk' }] : []),
     ...(activeClub && ability.can('read', asSubject('Club', { id: clubId })) ? [{ to: '/club', label: 'Club' }] : []),
   ];

@@ -4,10 +4,18 @@ import type { Logger } from 'pino';
 import type { EntityManager } from 'typeorm';
 import type { RenderedMail } from './templates';
 
+/** A small text attachment (it travels through the queue as JSON), e.g. a meetup's .ics. */
+export interface MailAttachment {
+  filename: string;
+  contentType: string;
+  content: string;
+}
+
 export interface OutgoingMail extends RenderedMail {
   to: string;
   /** Extra headers, e.g. List-Unsubscribe. */
   headers?: Record<string, string>;
+  attachments?: MailAttachment[];
 }
 
 export interface EnqueueOptions {
@@ -53,7 +61,7 @@ export async function startMailer(options: MailerOptions): Promise<Mailer> {
     async (jobs) => {
       for (const job of jobs) {
         const m = job.data;
-        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html, headers: m.headers });
+        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html, headers: m.headers, attachments: m.attachments });
       }
     },
   );

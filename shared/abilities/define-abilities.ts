@@ -54,6 +54,7 @@ function memberRules({ can }: Builder, clubId: string, userId: string): void {
   can('watch', 'Tank', { clubId, ownerId: userId });
   can(['create', 'read', 'update'], 'Question', { clubId, askerId: userId });
   can(['read', 'rsvp'], 'Meetup', { clubId });
+  can('read', 'Attendance', { clubId, userId });
   can('read', 'CareProfile', { clubId: null });
   can('read', 'CareProfile', { clubId });
 }
@@ -73,12 +74,15 @@ function mentorRules({ can }: Builder, clubId: string, currentMentees: string[],
   can(['create', 'update'], 'CareProfile', { clubId });
 }
 
-function adminRules({ can }: Builder, clubId: string): void {
+function adminRules({ can, cannot }: Builder, clubId: string, userId: string): void {
   can('manage', 'Club', { id: clubId });
   for (const s of ['Invite', 'Membership', 'MentorAssignment', 'MentorRequest', 'MentorSettings', 'Meetup', 'CareProfile'] as const) can('manage', s, { clubId });
   for (const s of LOGGED_ON_TANK) can('read', s, { clubId });
   can('watch', 'Tank', { clubId });
   can(['read', 'answer'], 'Question', { clubId });
+  can('manage', 'Attendance', { clubId });
+  // Writing onto a member's tank is the clinic host's alone: 'manage' must not let every admin do it.
+  cannot('recordResults', 'Meetup', { clubId, hostId: { $ne: userId } });
 }
 
 /**
@@ -101,8 +105,9 @@ export function defineRulesFor(viewer: Viewer): AppRule[] {
         .filter((id) => !current.includes(id));
       mentorRules(builder, m.clubId, [...new Set(current)], [...new Set(past)]);
       builder.can('update', 'MentorSettings', { clubId: m.clubId, mentorId: viewer.userId });
+      builder.can(['checkIn', 'recordResults'], 'Meetup', { clubId: m.clubId, hostId: viewer.userId });
     }
-    if (m.role === 'admin') adminRules(builder, m.clubId);
+    if (m.role === 'admin') adminRules(builder, m.clubId, viewer.userId);
   }
   return builder.rules;
 }

@@ -7,7 +7,10 @@ export interface UserSubject { id: string }
 /** Tanks and everything logged on them carry the tank's club and owner. */
 export interface OwnedInClub { clubId: string; ownerId: string }
 export interface QuestionSubject { clubId: string; askerId: string }
-export interface MeetupSubject { clubId: string }
+/** hostId: who runs it (a clinic's mentor), or null. */
+export interface MeetupSubject { clubId: string; hostId?: string | null }
+/** One member's meetup attendance in one club. */
+export interface AttendanceSubject { clubId: string; userId: string }
 export interface CareProfileSubject { clubId: string | null }
 export interface MentorRequestSubject { id?: string; clubId: string; requesterId: string }
 /** A mentor's own settings in one club (e.g. how many mentees they take on). */
@@ -26,6 +29,7 @@ export interface SubjectMap {
   Concern: OwnedInClub;
   Question: QuestionSubject;
   Meetup: MeetupSubject;
+  Attendance: AttendanceSubject;
   CareProfile: CareProfileSubject;
   MentorRequest: MentorRequestSubject;
   MentorSettings: MentorSettingsSubject;
@@ -34,11 +38,13 @@ export interface SubjectMap {
 export type SubjectType = keyof SubjectMap;
 export const SUBJECT_TYPES = [
   'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
-  'Question', 'Meetup', 'CareProfile', 'MentorRequest', 'MentorSettings',
+  'Question', 'Meetup', 'Attendance', 'CareProfile', 'MentorRequest', 'MentorSettings',
 ] as const satisfies readonly SubjectType[];
 
 export const ACTIONS = [
   'manage', 'create', 'read', 'update', 'delete', 'answer', 'acknowledge', 'resolve', 'signOff', 'rsvp',
+  /** Tick people in at a meetup; record a clinic's results onto the tank of the member who brought the water. */
+  'checkIn', 'recordResults',
   /** Be told live when a tank changes: its keeper, their current mentor and the club's admins (not past mentors). */
   'watch',
 ] as const;

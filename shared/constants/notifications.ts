@@ -7,6 +7,7 @@ export const NOTIFICATION_KINDS = [
   'mention',
   'mentor-request',
   'assignment',
+  'meetup',
 ] as const;
 export type NotificationKind = (typeof NOTIFICATION_KINDS)[number];
 
@@ -22,6 +23,8 @@ export const DEFAULT_EMAIL_MODES: Record<NotificationKind, EmailMode> = {
   mention: 'digest',
   'mentor-request': 'digest',
   assignment: 'digest',
+  // A changed time or a freed place is no use in tomorrow's digest.
+  meetup: 'immediate',
 };
 
 export const NOTIFICATION_KIND_LABELS: Record<NotificationKind, { label: string; hint: string }> = {
@@ -32,6 +35,7 @@ export const NOTIFICATION_KIND_LABELS: Record<NotificationKind, { label: string;
   mention: { label: 'Mentions', hint: 'Someone named you in a thread.' },
   'mentor-request': { label: 'Mentor requests', hint: 'Members asking for a mentor, and the answers.' },
   assignment: { label: 'Mentor pairings', hint: 'A new mentor or mentee.' },
+  meetup: { label: 'Meetups', hint: 'Reminders, changes and cancellations, and a place freeing up for you.' },
 };
 
 export const EMAIL_MODE_LABELS: Record<EmailMode, string> = {

@@ -5,6 +5,7 @@ import { Membership } from '../../modules/clubs/membership.entity';
 import { MentorAssignment } from '../../modules/mentorship/mentor-assignment.entity';
 import { User } from '../../modules/users/user.entity';
 import { DEMO_CLUBS, DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people';
+import { seedDemoMeetups } from './demo-meetups';
 import { seedDemoTanks } from './demo-tanks';
 
 /** Seeds the invented demo clubs once; running it again changes nothing. */
@@ -40,6 +41,7 @@ export async function seedDemoClub(dataSource: DataSource): Promise<{ created: b
     }
     const ids = Object.fromEntries([...users].map(([email, u]) => [email, u.id]));
     await seedDemoTanks(tx, clubs.get(DEMO_CLUBS[0].slug)!.id, ids);
+    await seedDemoMeetups(tx, { clubId: clubs.get(DEMO_CLUBS[0].slug)!.id, timeZone: DEMO_CLUBS[0].timeZone, people: ids, adminEmail: DEMO_PEOPLE[0]!.email });
     return { created: true };
   });
 }

@@ -11,5 +11,7 @@ export class CapturedMail {
   @Column({ type: 'text', default: '' }) html!: string;
   /** Raw header values by lower-case name (e.g. list-unsubscribe). */
   @Column({ type: 'jsonb', default: {} }) headers!: Record<string, string>;
+  /** Attachments as text (the test mail server only ever sees small text ones, such as .ics files). */
+  @Column({ type: 'jsonb', default: [] }) attachments!: { filename: string; contentType: string; content: string }[];
   @CreateDateColumn({ type: 'timestamptz' }) receivedAt!: Date;
 }

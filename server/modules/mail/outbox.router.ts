@@ -24,6 +24,7 @@ export function outboxRouter(deps: Pick<Deps, 'dataSource'>): Router {
 <p class="meta">To ${escapeHtml(m.toAddress)} · from ${escapeHtml(m.fromAddress)} · ${m.receivedAt.toISOString()}</p>
 <details open><summary>Text part</summary><pre>${linkify(escapeHtml(m.text))}</pre></details>
 <details><summary>HTML part</summary><iframe sandbox title="HTML part of ${escapeHtml(m.subject)}" srcdoc="${escapeHtml(m.html)}"></iframe></details>
+${m.attachments.map((a) => `<details><summary>Attachment ${escapeHtml(a.filename)} (${escapeHtml(a.contentType)})</summary><pre>${escapeHtml(a.content)}</pre></details>`).join('')}
 </article>`,
       )
       .join('');

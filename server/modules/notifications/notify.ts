@@ -1,6 +1,7 @@
 import type { EntityManager } from 'typeorm';
 import type { NotificationKind } from '@shared/constants/notifications';
 import { afterCommit } from '../../db/after-commit';
+import type { MailAttachment } from '../../mail/mailer';
 import type { NotificationDelivery } from './delivery';
 import { immediateMail, type Recipient } from './notification-mail';
 import { Notification } from './notification.entity';
@@ -18,6 +19,8 @@ export interface NotifyInput {
   link: string;
   /** What it is about, e.g. { type: 'Concern', id }. */
   subject?: { type: string; id: string };
+  /** Sent with the e-mail of those who get it right away (e.g. a meetup's .ics); the digest leaves them out. */
+  attachments?: MailAttachment[];
 }
 
 const TITLE_MAX = 200;
@@ -72,7 +75,8 @@ async function notifyThrough(delivery: NotificationDelivery, tx: EntityManager, 
   for (const row of rows) {
     if (modes.get(row.userId) !== 'immediate') continue;
     const to = recipients.find((r) => r.id === row.userId)!;
-    await delivery.mailer.enqueue(immediateMail({ to, clubName, notification: row, links: delivery.config }), { db: tx });
+    const mail = immediateMail({ to, clubName, notification: row, links: delivery.config });
+    await delivery.mailer.enqueue(input.attachments?.length ? { ...mail, attachments: input.attachments } : mail, { db: tx });
     await tx.update(Notification, { id: row.id }, { emailedAt: now });
     row.emailedAt = now;
   }

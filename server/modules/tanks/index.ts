@@ -19,13 +19,13 @@ export { findTank, loadTank, lockTank, ownedBy, requireActive } from './tank-acc
 export { listTanks, tankForCare, tankRef, type TankForCare, type TankRef } from './tank.queries';
 export { careHistory } from './water-test.queries';
 export { lastSourceNitrate } from './tank-event.queries';
-export { valuesOf } from './water-test.presenter';
+export { presentWaterTest, valuesOf } from './water-test.presenter';
 
 export { addLivestock } from './livestock.service';
 export { createTankEvent } from './tank-event.service';
 export { createTank } from './tank.service';
 export { attachPhotos } from './tank-photo.service';
-export { createWaterTest, insertWaterTests, type NewWaterTest } from './water-test.service';
+export { createWaterTest, insertWaterTests, type NewWaterTest, type SavedWaterTest } from './water-test.service';
 export { chemistryOf, lastKnownBefore } from './water-test.context';
 export { allWaterTests, takenAtsOf } from './water-test.queries';
 export { allTankEvents } from './tank-event.queries';

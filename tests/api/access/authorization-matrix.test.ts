@@ -8,6 +8,7 @@ import { CARE_ROWS } from './matrix-care-rows';
 import { TANK_ROWS } from './matrix-tank-rows';
 import { MENTORSHIP_ROWS } from './matrix-mentorship-rows';
 import { QUESTION_ROWS } from './matrix-question-rows';
+import { MEETUP_ROWS } from './matrix-meetup-rows';
 import { buildWorld, PERSONAS, type Persona, type World } from './world';
 
 /**
@@ -82,6 +83,7 @@ const ROWS: Row[] = [
   ...CARE_ROWS,
   ...MENTORSHIP_ROWS,
   ...QUESTION_ROWS,
+  ...MEETUP_ROWS,
 ];
 
 describe('authorization matrix', () => {
@@ -103,7 +105,7 @@ describe('authorization matrix', () => {
         const world = await buildWorld(t.deps);
         const client = persona === 'anonymous' ? new Client(t.app) : await signedIn(t.app, world.people[persona].user.email);
         const { path, body, files } = row.request(world);
-        const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';
+        const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
         const res = files ? await client.upload(`/api${path}`, files) : await client.send(method, `/api${path}`, body);
         outcome[persona] = res.status;
         // Another club's request never succeeds on this club's objects.

@@ -1,16 +1,16 @@
 import type { Persona, World } from './world';
 
-type Expect = Record<Persona, number>;
+export type Expect = Record<Persona, number>;
 export interface MentorshipMatrixRow {
   route: string;
   request: (w: World) => { path: string; body?: unknown };
   expect: Expect;
 }
 
-const all = (s: number): Expect => ({ anonymous: s, outsider: s, member: s, mentor: s, otherMentor: s, admin: s, suspended: s });
-const signedInOnly = (s: number): Expect => ({ ...all(s), anonymous: 401 });
-const clubMembers = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: s, mentor: s, otherMentor: s, admin: s, suspended: 403 });
-const adminsOnly = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: 403, otherMentor: 403, admin: s, suspended: 403 });
+export const all = (s: number): Expect => ({ anonymous: s, outsider: s, member: s, mentor: s, otherMentor: s, admin: s, suspended: s });
+export const signedInOnly = (s: number): Expect => ({ ...all(s), anonymous: 401 });
+export const clubMembers = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: s, mentor: s, otherMentor: s, admin: s, suspended: 403 });
+export const adminsOnly = (s: number): Expect => ({ anonymous: 401, outsider: 404, member: 403, mentor: 403, otherMentor: 403, admin: s, suspended: 403 });
 const requests = (w: World) => `/clubs/${w.club.id}/mentor-requests`;
 
 export const MENTORSHIP_ROWS: MentorshipMatrixRow[] = [

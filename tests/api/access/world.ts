@@ -6,6 +6,7 @@ import { tankWithHistory } from './world-tanks';
 import { mentorshipWorld } from './world-mentorship';
 import { questionWorld } from './world-questions';
 import { DAY_MS } from '@shared/care/time';
+import { meetupWorld } from './world-meetups';
 
 export const PERSONAS = ['anonymous', 'outsider', 'member', 'mentor', 'otherMentor', 'admin', 'suspended'] as const;
 export type Persona = (typeof PERSONAS)[number];
@@ -38,11 +39,12 @@ export async function buildWorld(deps: Deps) {
   const spareTank = await tankWithHistory(deps, club.id, spare.user.id, 'Spare reef');
   const mentorship = await mentorshipWorld(ds, club, { member: member.user, mentor: mentor.user });
   const questions = await questionWorld(deps, { member: member.user, tank: tank.tank, waterTest: tank.waterTest });
+  const meetups = await meetupWorld(deps, { clubId: club.id, admin: admin.user, mentor: mentor.user, member: member.user, tank: tank.tank });
   // Animals went in without a sign-off, so the member's tank has at least that concern open.
   const concerns: { id: string }[] = await ds.query(`SELECT id FROM concern WHERE tank_id = $1 AND status <> 'resolved' ORDER BY raised_at LIMIT 1`, [tank.tank.id]);
   const concernId = concerns[0]!.id;
   return {
-    club, elsewhere, invite, assignment, spareAssignment, spare, tank, spareTank, careProfile, mentorship, concernId, questions,
+    club, elsewhere, invite, assignment, spareAssignment, spare, tank, spareTank, careProfile, mentorship, concernId, questions, meetups,
     people: { outsider, member, mentor, otherMentor, admin, suspended } as Record<Exclude<Persona, 'anonymous'>, { user: { email: string; id: string }; membership: { id: string } }>,
   };
 }

@@ -129,12 +129,13 @@ describe('e-mail preferences', () => {
     c = await signedIn(t.app, (await makeMember(t.dataSource, await makeClub(t.dataSource), 'Pia Prefs')).user.email);
   });
 
-  it('when nothing was chosen, then urgent concerns are immediate and the rest go in the digest', async () => {
+  it('when nothing was chosen, then urgent concerns and meetups (reminders, changes, a freed place) are immediate and the rest go in the digest', async () => {
     const res = await c.get('/api/me/notification-preferences');
     expect(res.status).toBe(200);
     expect(res.body.preferences).toEqual(DEFAULT_EMAIL_MODES);
     expect(res.body.preferences['concern.urgent']).toBe('immediate');
-    expect(new Set(Object.entries(res.body.preferences).filter(([k]) => k !== 'concern.urgent').map(([, v]) => v))).toEqual(new Set(['digest']));
+    expect(res.body.preferences.meetup).toBe('immediate');
+    expect(new Set(Object.entries(res.body.preferences).filter(([k]) => k !== 'concern.urgent' && k !== 'meetup').map(([, v]) => v))).toEqual(new Set(['digest']));
   });
 
   it('when some kinds change, then only those change and it sticks', async () => {

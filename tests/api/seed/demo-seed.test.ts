@@ -34,6 +34,21 @@ describe('the demo club seed', () => {
     expect(fish.worstConcern.parameter).toBe('nitrate');
   });
 
+  it('when a demo member opens the meetups, then the club’s coming evenings are there: a clinic slot booked, a full swap with a waitlist', async () => {
+    const jonah = await signedIn(t.app, 'jonah@harbourlight.example', DEMO_PASSWORD);
+    const me = (await jonah.get('/api/me')).body;
+    const clubId = me.memberships.find((m: { clubSlug: string }) => m.clubSlug === 'harbourlight').clubId;
+    const meetups = (await jonah.get(`/api/clubs/${clubId}/meetups`)).body.meetups as { id: string; kind: string; title: string; goingCount: number; capacity: number; waitlistCount: number; mine: { status: string; slotStartsAt: string | null; tank: { name: string } | null } | null }[];
+    expect(meetups.map((m) => m.kind)).toEqual(['talk', 'clinic', 'online', 'swap']);
+    const clinic = meetups.find((m) => m.kind === 'clinic')!;
+    expect(clinic.mine).toMatchObject({ status: 'going', tank: { name: 'Seagrass corner' } });
+    expect(clinic.mine!.slotStartsAt).not.toBeNull();
+    const swap = meetups.find((m) => m.kind === 'swap')!;
+    expect(swap).toMatchObject({ goingCount: 3, capacity: 3, waitlistCount: 1 });
+    const wendell = await signedIn(t.app, 'wendell@harbourlight.example', DEMO_PASSWORD);
+    expect((await wendell.get(`/api/clubs/${clubId}/meetups/${swap.id}`)).body.meetup.mine).toMatchObject({ status: 'waitlisted', waitlistPosition: 1 });
+  });
+
   it('when the cycling seahorse tank is read, then it is past the ammonia peak with nitrite on the way down', async () => {
     const [row] = await t.dataSource.query(`SELECT id FROM tank WHERE name = 'Seagrass corner'`);
     const history = await careHistory(t.dataSource.manager, row.id, new Date());

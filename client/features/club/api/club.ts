@@ -30,13 +30,25 @@ export interface Assignment {
   endedAt: string | null;
 }
 
+export interface ClubView {
+  id: string;
+  name: string;
+  slug: string;
+  description: string;
+  locationText: string;
+  timeZone: string;
+}
+
 export const clubKeys = {
   all: (clubId: string) => ['club', clubId] as const,
+  detail: (clubId: string) => [...clubKeys.all(clubId), 'detail'] as const,
   members: (clubId: string) => [...clubKeys.all(clubId), 'members'] as const,
   invites: (clubId: string) => [...clubKeys.all(clubId), 'invites'] as const,
   assignments: (clubId: string) => [...clubKeys.all(clubId), 'assignments'] as const,
 };
 
+export const clubQuery = (clubId: string) =>
+  queryOptions({ queryKey: clubKeys.detail(clubId), queryFn: ({ signal }) => api.get<{ club: ClubView }>(`/clubs/${clubId}`, signal).then((r) => r.club), enabled: Boolean(clubId) });
 export const membersQuery = (clubId: string) =>
   queryOptions({ queryKey: clubKeys.members(clubId), queryFn: ({ signal }) => api.get<{ members: ClubMember[] }>(`/clubs/${clubId}/members`, signal) });
 export const invitesQuery = (clubId: string) =>
@@ -44,6 +56,7 @@ export const invitesQuery = (clubId: string) =>
 export const assignmentsQuery = (clubId: string) =>
   queryOptions({ queryKey: clubKeys.assignments(clubId), queryFn: ({ signal }) => api.get<{ assignments: Assignment[] }>(`/clubs/${clubId}/mentor-assignments`, signal) });
 
+export const useClub = (clubId: string) => useQuery(clubQuery(clubId));
 export const useMembers = (clubId: string) => useQuery(membersQuery(clubId));
 export const useInvites = (clubId: string, enabled: boolean) => useQuery({ ...invitesQuery(clubId), enabled });
 export const useAssignments = (clubId: string) => useQuery(assignmentsQuery(clubId));
