@@ -11,7 +11,7 @@ import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
 import { startMeetupReminders } from './modules/meetups';
-import { startDigestScheduler } from './modules/notifications/digest-scheduler';
+import { startDigestScheduler } from './modules/notifications';
 import { RealtimeHub } from './realtime/hub';
 import { startRealtime } from './realtime/realtime';
 

@@ -4,7 +4,7 @@ import type { DataSource } from 'typeorm';
 import { asSubject, type Action, type SubjectMap, type SubjectType } from '@shared/abilities';
 import { ABSOLUTE_MS } from '../config/session';
 import { errors } from '../lib/app-error';
-import { loadViewer, type ViewerContext } from '../modules/access/viewer.service';
+import { loadViewer, type ViewerContext } from '../modules/access';
 
 export type { ViewerContext };
 
