@@ -19,6 +19,7 @@ import { concernRouter } from './modules/concerns/concern.router';
 import { deskRouter } from './modules/desk/desk.router';
 import { clubRouter } from './modules/clubs/club.router';
 import { healthRouter } from './modules/health/health.router';
+import { homeRouter } from './modules/home/home.router';
 import { inviteRouter } from './modules/invites/invite.router';
 import { outboxRouter } from './modules/mail/outbox.router';
 import { assignmentRouter } from './modules/mentorship/assignment.router';
@@ -115,6 +116,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   api.use(careProfileRouter({ dataSource }));
   api.use(concernRouter({ dataSource }));
   api.use(deskRouter({ dataSource, unansweredCounts: unansweredCountsByTank }));
+  api.use(homeRouter({ dataSource }));
   api.use(tankRouter({ dataSource }));
   api.use(livestockRouter({ dataSource, uploadsDir: config.uploadsDir }));
   api.use(waterTestRouter({ dataSource, uploadsDir: config.uploadsDir }));
