@@ -81,7 +81,9 @@ export function Component() {
         {work}
         <section aria-labelledby="today-heading">
           <div className="mb-2 flex items-baseline justify-between gap-2">
-            <h2 id="today-heading" className="text-xl font-extrabold text-tide-900">{watchesOthers ? 'Your own tanks' : 'Your tanks today'}</h2>
+            <h2 id="today-heading" className={`text-xl font-extrabold text-tide-900 ${home.data && !tanks.length && !watchesOthers ? 'sr-only' : ''}`}>
+              {watchesOthers ? 'Your own tanks' : 'Your tanks today'}
+            </h2>
             {tanks.length ? <Link to="/tanks" className="text-sm font-bold text-tide-700 underline">All my tanks</Link> : null}
           </div>
           {home.isPending ? (

@@ -2,10 +2,14 @@ import { queryOptions, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { HomeView } from '@shared/schemas/home-views';
 import { api } from '@client/lib/api-client';
 import { useSocketEvent, useSocketReconnect } from '@client/lib/socket';
+import { tankKeys } from '@client/lib/tank-keys';
 
+/**
+ * Under the club's tank lists: the home is the member's tank list with today's work on it, so whatever refreshes
+ * the lists after a save (`useTankRecordsChanged`) refreshes the home too.
+ */
 export const homeKeys = {
-  all: ['home'] as const,
-  club: (clubId: string) => [...homeKeys.all, clubId] as const,
+  club: (clubId: string) => [...tankKeys.lists(clubId), 'home'] as const,
 };
 
 export const homeQuery = (clubId: string) =>

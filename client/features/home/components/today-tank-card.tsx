@@ -1,13 +1,12 @@
 import { Link } from 'react-router';
-import { parameterInfo } from '@shared/care/parameters';
+import { calendarDaysBetween } from '@shared/care';
 import { SYSTEM_TYPE_LABELS } from '@shared/constants/tank-labels';
 import type { HomeTank } from '@shared/schemas/home-views';
 import { SeverityBadge } from '@client/components/ui/severity-badge';
-import { formatDay } from '@client/lib/date-format';
 import { formatDisplay, type UnitPrefs } from '@client/lib/display-units';
 import { relativeTime } from '@client/lib/relative-time';
 import { logTestPath } from '@client/lib/test-links';
-import { stateInWords, tankToday, type StateTone } from '../lib/today';
+import { shortLabel as label, stateInWords, tankToday, type StateTone } from '../lib/today';
 import { LINK_BUTTON } from './link-button';
 
 const TONE: Record<StateTone, string> = {
@@ -16,7 +15,8 @@ const TONE: Record<StateTone, string> = {
   trouble: 'bg-ember-100 text-ember-700 ring-ember-500/30',
 };
 
-const label = (k: Parameters<typeof parameterInfo>[0]) => parameterInfo(k).label;
+/** Counted on the member's calendar, so it agrees with "today" above. */
+const inDays = (n: number) => (n === 1 ? 'tomorrow' : `in ${n} days`);
 const listOf = (items: string[]) => new Intl.ListFormat('en', { type: 'conjunction' }).format(items);
 
 function LastTest({ test, prefs }: { test: HomeTank['lastTest']; prefs: UnitPrefs }) {
@@ -26,7 +26,12 @@ function LastTest({ test, prefs }: { test: HomeTank['lastTest']; prefs: UnitPref
     <p className="text-sm text-tide-700" data-testid="last-test">
       Last test <time dateTime={test.takenAt} title={new Date(test.takenAt).toLocaleString()}>{relativeTime(test.takenAt)}</time>
       {figures.length ? ': ' : ''}
-      {figures.map(([k, v]) => `${label(k)} ${formatDisplay(k, v, prefs)}`).join(' · ')}
+      {figures
+        .map(([k, v]) => {
+          const shown = formatDisplay(k, v, prefs);
+          return shown.startsWith(label(k)) ? shown : `${label(k)} ${shown}`;
+        })
+        .join(' · ')}
     </p>
   );
 }
@@ -54,7 +59,7 @@ export function TodayTankCard({ tank, now, timeZone, prefs }: { tank: HomeTank; 
           <SeverityBadge severity={tank.worstConcern.severity} />
           <span>
             {tank.worstConcern.reason}
-            {tank.liveConcerns > 1 ? <span className="font-bold text-tide-700"> (+{tank.liveConcerns - 1} more)</span> : null}
+            {tank.liveConcerns > 1 ? <span className="font-bold text-tide-700"> +{tank.liveConcerns - 1} more on the tank page</span> : null}
           </span>
         </Link>
       ) : null}
@@ -85,7 +90,7 @@ export function TodayTankCard({ tank, now, timeZone, prefs }: { tank: HomeTank; 
           <>
             <p className="flex items-center gap-2 font-bold text-kelp-700">
               <span aria-hidden>✓</span> Nothing to test today.
-              {next ? <span className="font-normal text-tide-700">Next: {label(next.parameter)} on {formatDay(next.dueAt)}.</span> : null}
+              {next ? <span className="font-normal text-tide-700">Next: {label(next.parameter)} {inDays(calendarDaysBetween(groups.today, next.dueDay))}.</span> : null}
             </p>
             <Link to={logTestPath(tank.id)} className={`${LINK_BUTTON.secondary} mt-3 w-full`}>Log a test anyway</Link>
           </>

@@ -1,5 +1,5 @@
 import { useEffect, useState } from 'react';
-import { groupDueByDay, toTestToday, type DueByDay, type ParameterKey } from '@shared/care';
+import { groupDueByDay, parameterInfo, toTestToday, type DueByDay, type ParameterKey } from '@shared/care';
 import { CYCLE_STAGE_WORDS } from '@shared/constants/tank-labels';
 import type { HomeTank } from '@shared/schemas/home-views';
 
@@ -33,3 +33,6 @@ export function stateInWords(tank: Pick<HomeTank, 'phase' | 'cycleStage'>): { te
   const words = tank.cycleStage === 'cycled' ? 'cycle looks done: ask your mentor' : CYCLE_STAGE_WORDS[tank.cycleStage];
   return { text: words.charAt(0).toUpperCase() + words.slice(1), tone: 'cycling' };
 }
+
+/** A parameter's name without the qualifier the form needs ("Ammonia (total)" → "Ammonia"): for chips and buttons. */
+export const shortLabel = (k: ParameterKey) => parameterInfo(k).label.replace(/\s*\(.*\)$/, '');
