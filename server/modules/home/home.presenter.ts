@@ -1,7 +1,7 @@
-import { cycleStage, dueTests, severityRank } from '../../../shared/care';
-import { HOME_REPLY_EXCERPT_MAX } from '../../../shared/constants/home';
-import type { HomeGoodNews, HomeQuestion, HomeTank, HomeView } from '../../../shared/schemas/home-views';
-import type { ConcernRow } from '../concerns/concern.entity';
+import { cycleStage, dueTests, severityRank } from '@shared/care';
+import { HOME_REPLY_EXCERPT_MAX } from '@shared/constants/home';
+import type { HomeGoodNews, HomeQuestion, HomeTank, HomeView } from '@shared/schemas/home-views';
+import type { ConcernRow } from '../concerns';
 import type { GoodNewsRow, HomeData, QuestionRow } from './home.queries';
 
 const excerpt = (text: string) => (text.length > HOME_REPLY_EXCERPT_MAX ? `${text.slice(0, HOME_REPLY_EXCERPT_MAX - 1).trimEnd()}…` : text);

@@ -1,14 +1,13 @@
 import type { EntityManager } from 'typeorm';
-import type { AppAbility } from '../../../shared/abilities';
-import type { CareProfile, WaterTestInput } from '../../../shared/care';
-import { GOOD_NEWS_DAYS, HOME_QUESTIONS_MAX, HOME_REPLY_EXCERPT_MAX } from '../../../shared/constants/home';
-import type { QuestionStatus } from '../../../shared/schemas/question.schema';
-import { whereAllowed } from '../access/ability-sql';
-import { resolveProfiles } from '../care/care-profile.service';
-import { ConcernRow } from '../concerns/concern.entity';
-import { loadHistories } from '../concerns/tank-care-data';
-import { Question } from '../questions/question.entity';
-import { listTanks, type TankListRow } from '../tanks/tank.queries';
+import type { AppAbility } from '@shared/abilities';
+import type { CareProfile, WaterTestInput } from '@shared/care';
+import { GOOD_NEWS_DAYS, HOME_QUESTIONS_MAX, HOME_REPLY_EXCERPT_MAX } from '@shared/constants/home';
+import type { QuestionStatus } from '@shared/schemas/question.schema';
+import { whereAllowed } from '../access';
+import { resolveProfiles } from '../care';
+import { ConcernRow } from '../concerns';
+import { Question } from '../questions';
+import { careHistories, listTanks, type TankListRow } from '../tanks';
 
 const DAY_MS = 86_400_000;
 
@@ -106,7 +105,7 @@ export async function loadHome(m: EntityManager, p: { ability: AppAbility; clubI
   const ids = tanks.map((t) => t.tank.id);
   const questions = await myQuestions(m, p.ability, p.clubId, p.viewerId);
   if (!ids.length) return { tanks, histories: new Map(), profiles: new Map(), concerns: [], questions, goodNews: [] };
-  const histories = await loadHistories(m, ids, p.now);
+  const histories = await careHistories(m, ids, p.now);
   const profiles = await resolveProfiles(m, p.clubId, tanks.map((t) => t.tank.careProfileKey));
   const concerns = await liveConcerns(m, p.ability, ids);
   const goodNews = await goodNewsOf(m, ids, new Date(p.now.getTime() - GOOD_NEWS_DAYS * DAY_MS));
