@@ -21,6 +21,7 @@ import { concernRouter, judgeConcerns } from './modules/concerns';
 import { csvExportRouter, csvImportRouter, IMPORT_ROUTES_PREFIX } from './modules/csv';
 import { deskRouter } from './modules/desk';
 import { healthRouter } from './modules/health';
+import { homeRouter } from './modules/home';
 import { inviteRouter } from './modules/invites';
 import { outboxRouter } from './modules/mail';
 import { calendarFeedRouter, meetupsRouter } from './modules/meetups';
@@ -116,7 +117,7 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   api.use(attachViewer(deps.dataSource));
   for (const router of [
     authRouter, clubRouter, inviteRouter, assignmentRouter, mentorRequestRouter, mentorCapacityRouter, notificationRouter,
-    careProfileRouter, concernRouter, deskRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
+    careProfileRouter, concernRouter, deskRouter, homeRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
     timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter, meetupsRouter,
   ]) {
     api.use(router(deps));

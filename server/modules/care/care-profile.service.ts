@@ -43,14 +43,28 @@ export async function listProfiles(manager: EntityManager, clubId: string): Prom
 
 /** The profile a tank of this club follows: a built-in by key, or the club's copy at its newest version. */
 export async function resolveProfile(manager: EntityManager, clubId: string, key: string): Promise<CareProfile | undefined> {
-  const builtIn = builtInProfile(key);
-  if (builtIn) return builtIn;
-  const row = await manager
+  return (await resolveProfiles(manager, clubId, [key])).get(key);
+}
+
+/** `resolveProfile` for several keys in at most one query: built-in profiles need none; unknown keys are left out. */
+export async function resolveProfiles(manager: EntityManager, clubId: string, keys: readonly string[]): Promise<Map<string, CareProfile>> {
+  const found = new Map<string, CareProfile>();
+  const clubKeys: string[] = [];
+  for (const key of new Set(keys)) {
+    const builtIn = builtInProfile(key);
+    if (builtIn) found.set(key, builtIn);
+    else clubKeys.push(key);
+  }
+  if (!clubKeys.length) return found;
+  const rows: { key: string; definition: CareProfile }[] = await manager
     .createQueryBuilder(ClubCareProfileVersion, 'v')
     .innerJoin(ClubCareProfile, 'p', 'p.id = v.profile_id AND p.current_version = v.version')
-    .where('p.club_id = :clubId AND p.key = :key', { clubId, key })
-    .getOne();
-  return row?.definition;
+    .select('p.key', 'key')
+    .addSelect('v.definition', 'definition')
+    .where('p.club_id = :clubId AND p.key IN (:...clubKeys)', { clubId, clubKeys })
+    .getRawMany();
+  for (const row of rows) found.set(row.key, row.definition);
+  return found;
 }
 
 export async function loadClubProfile(manager: EntityManager, clubId: string, profileId: string) {

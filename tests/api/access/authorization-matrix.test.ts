@@ -79,6 +79,8 @@ const ROWS: Row[] = [
     }),
     expect: mentorsAndAdmins(200),
   },
+  // The viewer's own tanks and questions: every member has one (a mentor's or admin's lists only their own).
+  { route: 'GET /clubs/:clubId/home', request: (w) => ({ path: `/clubs/${w.club.id}/home` }), expect: clubMembers(200) },
   ...TANK_ROWS,
   ...CARE_ROWS,
   ...MENTORSHIP_ROWS,
