@@ -11,6 +11,7 @@ import { createSessionMiddleware } from './config/session';
 import type { Mailer } from './mail/mailer';
 import type { RealtimeHub } from './realtime/hub';
 import { csrfProtection } from './middleware/csrf';
+import { rejectUnstorableText } from './middleware/storable-text';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
 import { authRouter } from './modules/auth/auth.router';
@@ -99,6 +100,7 @@ export function createApp(deps: AppDeps): CreatedApp {
   // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
   api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }));
   api.use(express.json({ limit: '200kb' }));
+  api.use(rejectUnstorableText);
   api.use(healthRouter(dataSource));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
   api.use(unsubscribeRouter({ dataSource, config }));

@@ -7,6 +7,7 @@ import { createApp } from './app';
 import type { Config } from './config/env';
 import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
+import { answerUnreadableRequests } from './lib/client-error';
 import { createLogger } from './lib/logger';
 import { startMail } from './mail/start-mail';
 import { startDigestScheduler } from './modules/notifications/digest-scheduler';
@@ -35,6 +36,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const hub = new RealtimeHub();
   const { app, sessionMiddleware } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const server = createServer(app);
+  answerUnreadableRequests(server);
   // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
   const adapterPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }), logger, 'socket-adapter');
   const io = startRealtime({ httpServer: server, sessionMiddleware, hub, dataSource, adapterPool, config, logger });
