@@ -7,6 +7,7 @@ import { Server } from 'socket.io';
 import type { DataSource } from 'typeorm';
 import { rooms } from '../../shared/events/socket-events';
 import type { Config } from '../config/env';
+import { releaseDroppedListenClients } from './adapter-pool';
 import type { IoServer, RealtimeHub } from './hub';
 
 /** Browsers always send Origin on a WebSocket (ASVS 4.4.1); only our own origins may open one. */
@@ -50,7 +51,7 @@ export function startRealtime(p: {
     allowRequest: (req, callback) => {
       callback(null, originAllowed(req.headers.origin, req.headers.host, origins));
     },
-    adapter: createAdapter(p.adapterPool, { tableName: 'socket_io_attachments' }),
+    adapter: createAdapter(releaseDroppedListenClients(p.adapterPool) as Pool, { tableName: 'socket_io_attachments' }),
   });
   // The same express-session as the HTTP API: no second sign-in, no token in the URL.
   io.engine.use(p.sessionMiddleware);
