@@ -8,39 +8,32 @@ import type { DataSource } from 'typeorm';
 import type { Config } from './config/env';
 import { securityHeaders } from './config/security-headers';
 import { createSessionMiddleware } from './config/session';
+import { enableAfterCommit } from './db/after-commit';
+import type { Deps } from './deps';
 import type { Mailer } from './mail/mailer';
-import type { RealtimeHub } from './realtime/hub';
 import { csrfProtection } from './middleware/csrf';
 import { rejectUnstorableText } from './middleware/storable-text';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
-import { authRouter } from './modules/auth/auth.router';
-import { careProfileRouter } from './modules/care/care-profile.router';
-import { concernRouter } from './modules/concerns/concern.router';
-import { deskRouter } from './modules/desk/desk.router';
-import { clubRouter } from './modules/clubs/club.router';
-import { healthRouter } from './modules/health/health.router';
-import { inviteRouter } from './modules/invites/invite.router';
-import { outboxRouter } from './modules/mail/outbox.router';
-import { assignmentRouter } from './modules/mentorship/assignment.router';
-import { mentorCapacityRouter } from './modules/mentorship/mentor-capacity.router';
-import { mentorRequestRouter } from './modules/mentorship/mentor-request.router';
-import { attachNotificationDelivery } from './modules/notifications/delivery';
-import { notificationRouter } from './modules/notifications/notification.router';
-import { unsubscribeRouter } from './modules/notifications/unsubscribe.router';
-import { csvExportRouter } from './modules/csv/csv-export.router';
-import { csvImportRouter, IMPORT_ROUTES_PREFIX } from './modules/csv/csv-import.router';
-import { photoRouter } from './modules/photos/photo.router';
-import { unansweredCountsByTank } from './modules/questions/question.queries';
-import { questionRouter } from './modules/questions/question.router';
-import { livestockRouter } from './modules/tanks/livestock.router';
-import { tankEventRouter } from './modules/tanks/tank-event.router';
-import { tankRouter } from './modules/tanks/tank.router';
-import { timelineRouter } from './modules/tanks/timeline.router';
-import { waterTestRouter } from './modules/tanks/water-test.router';
-import { CSV_MAX_BYTES } from '../shared/schemas/csv-import.schema';
+import { authRouter } from './modules/auth';
+import { careProfileRouter } from './modules/care';
+import { clubRouter } from './modules/clubs';
+import { concernRouter, judgeConcerns } from './modules/concerns';
+import { csvExportRouter, csvImportRouter, IMPORT_ROUTES_PREFIX } from './modules/csv';
+import { deskRouter } from './modules/desk';
+import { healthRouter } from './modules/health';
+import { inviteRouter } from './modules/invites';
+import { outboxRouter } from './modules/mail';
+import { assignmentRouter, mentorCapacityRouter, mentorRequestRouter } from './modules/mentorship';
+import { createNotifier, notificationRouter, tellMentorsOfConcerns, unsubscribeRouter } from './modules/notifications';
+import { questionRouter } from './modules/questions';
+import { livestockRouter, photoRouter, TankChanges, tankEventRouter, tankRouter, timelineRouter, waterTestRouter } from './modules/tanks';
+import type { RealtimeHub } from './realtime/hub';
+import { announceTankChanges } from './realtime/tank-announcer';
+import { CSV_MAX_BYTES } from '@shared/schemas/csv-import.schema';
 
-export interface AppDeps {
+/** What the process hands the app: configuration and the connections it opened. */
+export interface AppInfrastructure {
   config: Config;
   dataSource: DataSource;
   sessionPool: Pool;
@@ -49,12 +42,25 @@ export interface AppDeps {
   hub: RealtimeHub;
 }
 
+/**
+ * The deps object every router and service gets, built once per app. Here, and only here, the tank-changed seam
+ * gets its judge (concerns re-judge the tank) and its listeners (mentors are notified, watchers hear it live).
+ */
+export function buildDeps(infra: Pick<AppInfrastructure, 'config' | 'dataSource' | 'mailer' | 'hub'>): Deps {
+  const { config, dataSource, mailer, hub } = infra;
+  enableAfterCommit(dataSource);
+  const notify = createNotifier({ hub, mailer, config });
+  const tankChanges = new TankChanges(judgeConcerns).listen(tellMentorsOfConcerns(notify)).listen(announceTankChanges(hub));
+  return { config, dataSource, mailer, hub, notify, tankChanges };
+}
+
 export interface CreatedApp {
   app: Express;
   /** The same session middleware, for socket.io's engine. */
   sessionMiddleware: RequestHandler;
   /** The API router; every module router is mounted on it at '/', so route paths are whole (the route table reads them). */
   api: express.Router;
+  deps: Deps;
 }
 
 const redactTokens = (url: string) => url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
@@ -76,9 +82,9 @@ function serveClient(app: Express): void {
 }
 
 /** Builds the Express app without listening, so tests can mount it directly. */
-export function createApp(deps: AppDeps): CreatedApp {
-  const { config, dataSource, logger, mailer, hub } = deps;
-  attachNotificationDelivery(dataSource, { hub, mailer, config });
+export function createApp(infra: AppInfrastructure): CreatedApp {
+  const { config, logger } = infra;
+  const deps = buildDeps(infra);
   const app = express();
   app.disable('x-powered-by');
   app.set('trust proxy', false);
@@ -95,42 +101,30 @@ export function createApp(deps: AppDeps): CreatedApp {
   );
   app.use(securityHeaders(config.isProduction));
 
-  const { middleware: sessionMiddleware } = createSessionMiddleware(config, deps.sessionPool);
+  const { middleware: sessionMiddleware } = createSessionMiddleware(config, infra.sessionPool);
   const api = express.Router();
   // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
   api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }));
   api.use(express.json({ limit: '200kb' }));
   api.use(rejectUnstorableText);
-  api.use(healthRouter(dataSource));
+  api.use(healthRouter(deps));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
-  api.use(unsubscribeRouter({ dataSource, config }));
+  api.use(unsubscribeRouter(deps));
   api.use(sessionMiddleware);
   api.use(csrfProtection);
-  api.use(attachViewer(dataSource));
-  api.use(authRouter({ dataSource, mailer, config, hub }));
-  api.use(clubRouter({ dataSource }));
-  api.use(inviteRouter({ dataSource, mailer, config }));
-  api.use(assignmentRouter({ dataSource }));
-  api.use(mentorRequestRouter({ dataSource }));
-  api.use(mentorCapacityRouter({ dataSource }));
-  api.use(notificationRouter({ dataSource }));
-  api.use(careProfileRouter({ dataSource }));
-  api.use(concernRouter({ dataSource }));
-  api.use(deskRouter({ dataSource, unansweredCounts: unansweredCountsByTank }));
-  api.use(tankRouter({ dataSource }));
-  api.use(livestockRouter({ dataSource, uploadsDir: config.uploadsDir }));
-  api.use(waterTestRouter({ dataSource, uploadsDir: config.uploadsDir }));
-  api.use(tankEventRouter({ dataSource, uploadsDir: config.uploadsDir }));
-  api.use(timelineRouter({ dataSource }));
-  api.use(photoRouter({ dataSource, uploadsDir: config.uploadsDir }));
-  api.use(questionRouter({ dataSource }));
-  api.use(csvImportRouter({ dataSource }));
-  api.use(csvExportRouter({ dataSource }));
-  if (!config.isProduction) app.use(outboxRouter({ dataSource }));
+  api.use(attachViewer(deps.dataSource));
+  for (const router of [
+    authRouter, clubRouter, inviteRouter, assignmentRouter, mentorRequestRouter, mentorCapacityRouter, notificationRouter,
+    careProfileRouter, concernRouter, deskRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
+    timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter,
+  ]) {
+    api.use(router(deps));
+  }
+  if (!config.isProduction) app.use(outboxRouter(deps));
   api.use(apiNotFound);
   app.use('/api', api);
 
   serveClient(app);
   app.use(errorHandler({ exposeStack: config.env === 'development' }));
-  return { app, sessionMiddleware, api };
+  return { app, sessionMiddleware, api, deps };
 }

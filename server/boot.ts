@@ -5,6 +5,7 @@ import type { Logger } from 'pino';
 import type { DataSource } from 'typeorm';
 import { createApp } from './app';
 import type { Config } from './config/env';
+import type { Deps } from './deps';
 import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { answerUnreadableRequests } from './lib/client-error';
@@ -18,6 +19,7 @@ export interface RunningServer {
   url: string;
   server: Server;
   dataSource: DataSource;
+  deps: Deps;
   logger: Logger;
   close(): Promise<void>;
 }
@@ -34,7 +36,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const mail = await startMail(config, dataSource, logger);
   const digest = await startDigestScheduler({ config, dataSource, mailer: mail.mailer, logger });
   const hub = new RealtimeHub();
-  const { app, sessionMiddleware } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
+  const { app, sessionMiddleware, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const server = createServer(app);
   answerUnreadableRequests(server);
   // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
@@ -62,5 +64,5 @@ export async function startServer(config: Config): Promise<RunningServer> {
       await dataSource.destroy().catch(() => undefined);
     })());
 
-  return { url: `http://${config.host}:${port}`, server, dataSource, logger, close };
+  return { url: `http://${config.host}:${port}`, server, dataSource, deps, logger, close };
 }

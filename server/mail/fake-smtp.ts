@@ -3,7 +3,7 @@ import { simpleParser } from 'mailparser';
 import type { Logger } from 'pino';
 import { SMTPServer } from 'smtp-server';
 import type { DataSource } from 'typeorm';
-import { CapturedMail } from '../modules/mail/captured-mail.entity';
+import { CapturedMail } from '../modules/mail';
 
 export interface FakeSmtp {
   port: number;

@@ -6,6 +6,7 @@ import type { Express, Router } from 'express';
 import type { DataSource } from 'typeorm';
 import { inject } from 'vitest';
 import { createApp } from '../../server/app';
+import type { Deps } from '../../server/deps';
 import { loadConfig, type Config } from '../../server/config/env';
 import { openDataSource } from '../../server/db/data-source';
 import { guardPool, POOL_DEFAULTS } from '../../server/db/pool-errors';
@@ -18,6 +19,8 @@ export interface TestApp {
   api: Router;
   dataSource: DataSource;
   config: Config;
+  /** The app's deps object, for tests that call services or notify() directly. */
+  deps: Deps;
   mail: MailInfrastructure;
   close(): Promise<void>;
 }
@@ -34,12 +37,13 @@ export async function createTestApp(overrides: Record<string, string> = {}): Pro
   const dataSource = await openDataSource(config.databaseUrl, logger);
   const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
   const mail = await startMail(config, dataSource, logger, { pollingIntervalSeconds: 0.5, retryDelaySeconds: 1 });
-  const { app, api } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub: new RealtimeHub() });
+  const { app, api, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub: new RealtimeHub() });
   return {
     app,
     api,
     dataSource,
     config,
+    deps,
     mail,
     async close() {
       await mail.close().catch(() => undefined);

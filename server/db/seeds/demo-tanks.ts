@@ -1,12 +1,9 @@
 import type { EntityManager } from 'typeorm';
-import { createTankEventSchema } from '../../../shared/schemas/tank-event.schema';
-import { createLivestockSchema, createTankSchema, type CreateTankInput } from '../../../shared/schemas/tank.schema';
-import { createWaterTestSchema } from '../../../shared/schemas/water-test.schema';
-import { addLivestock } from '../../modules/tanks/livestock.service';
-import { createTankEvent } from '../../modules/tanks/tank-event.service';
-import { createTank } from '../../modules/tanks/tank.service';
-import type { Tank } from '../../modules/tanks/tank.entity';
-import { createWaterTest } from '../../modules/tanks/water-test.service';
+import { createTankEventSchema } from '@shared/schemas/tank-event.schema';
+import { createLivestockSchema, createTankSchema, type CreateTankInput } from '@shared/schemas/tank.schema';
+import { createWaterTestSchema } from '@shared/schemas/water-test.schema';
+import { judgeConcerns } from '../../modules/concerns';
+import { addLivestock, createTank, createTankEvent, createWaterTest, TankChanges, type Tank } from '../../modules/tanks';
 
 /**
  * Invented histories for the demo club, written through the same services the API uses, so derived values and
@@ -21,11 +18,14 @@ const bump = (day: number, start: number, peak: number, end: number, height: num
 
 type Entries = Record<string, unknown>;
 
+/** The demo tanks are judged like any tank, so their concerns are real; nobody is notified of a seed. */
+const deps = { tankChanges: new TankChanges(judgeConcerns) };
+
 async function tank(tx: EntityManager, clubId: string, ownerId: string, input: CreateTankInput): Promise<Tank> {
   return createTank(tx, clubId, ownerId, createTankSchema.parse(input));
 }
 async function test(tx: EntityManager, t: Tank, ownerId: string, takenAt: string, entries: Entries, note = ''): Promise<void> {
-  await createWaterTest(tx, t, createWaterTestSchema.parse({ takenAt, entries, note }), ownerId);
+  await createWaterTest(tx, deps, t, createWaterTestSchema.parse({ takenAt, entries, note }), ownerId);
 }
 
 /** A seahorse tank four weeks into a fishless cycle: ammonia came and went, nitrite is falling, nitrate is building. */
@@ -54,7 +54,7 @@ async function nitrateCreepTank(tx: EntityManager, clubId: string, ownerId: stri
     name: 'Reef-edge fish room', systemType: 'marine-fish-only', phase: 'established', setUpOn: at(120).slice(0, 10),
     volume: { source: 'entered', value: 300, unit: 'L' }, equipmentNotes: 'Sump with return pump, two heaters, protein skimmer.',
   });
-  await addLivestock(tx, t, createLivestockSchema.parse({ speciesCommonName: 'Common clownfish (captive-bred)', count: 2, addedOn: at(90).slice(0, 10), source: 'Club swap night', quarantineNotes: '4 weeks in the quarantine tub, ate well.' }), ownerId);
+  await addLivestock(tx, deps, t, createLivestockSchema.parse({ speciesCommonName: 'Common clownfish (captive-bred)', count: 2, addedOn: at(90).slice(0, 10), source: 'Club swap night', quarantineNotes: '4 weeks in the quarantine tub, ate well.' }), ownerId);
   for (let week = 8; week >= 0; week--) {
     await test(tx, t, ownerId, at(week * 7 + 1), {
       temperature: { value: 25.2, unit: '°C', method: 'digital-meter' },

@@ -1,28 +1,24 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { packAbilityRules } from '../../../shared/abilities';
 import { PASSWORD_RESET_VALID_MINUTES } from '../../../shared/constants/security';
 import { requestPasswordResetSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '../../../shared/schemas/auth.schema';
-import type { Config } from '../../config/env';
 import { errors } from '../../lib/app-error';
 import { hashPassword, verifyPassword } from '../../lib/passwords';
 import { hashToken, newToken } from '../../lib/tokens';
-import type { Mailer } from '../../mail/mailer';
-import type { RealtimeHub } from '../../realtime/hub';
 import { passwordResetMail } from '../../mail/templates';
 import { csrfTokenFor } from '../../middleware/csrf';
 import { resetRequestLimiters, signInLimiters, tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { User } from '../users/user.entity';
-import { presentUser } from '../users/user.presenter';
+import { audit } from '../audit';
+import { presentUser, User } from '../users';
 import { PasswordReset } from './password-reset.entity';
 import { destroySession, endSessionsOfUser, startSignedInSession } from './sessions';
 
 const BAD_CREDENTIALS = 'That e-mail and password do not match an account.';
 
-export function authRouter(deps: { dataSource: DataSource; mailer: Mailer; config: Config; hub: RealtimeHub }): Router {
+export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub'>): Router {
   const { dataSource, mailer, config, hub } = deps;
   const users = dataSource.getRepository(User);
   const router = Router();

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import type { CareProfile } from '../../../shared/care';
+import type { CareProfile } from '@shared/care';
 
 /** A club's own copy of a care profile. Its definition lives in versions; `currentVersion` points at the newest. */
 @Entity({ name: 'club_care_profile' })

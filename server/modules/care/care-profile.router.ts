@@ -1,16 +1,15 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { careProfileKeyParams, careProfileParams, copyCareProfileSchema, updateCareProfileSchema } from '../../../shared/schemas/care-profile.schema';
-import { clubIdParams } from '../../../shared/schemas/common';
+import type { Deps } from '@server/deps';
+import { careProfileKeyParams, careProfileParams, copyCareProfileSchema, updateCareProfileSchema } from '@shared/schemas/care-profile.schema';
+import { clubIdParams } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { tankChanged } from '../concerns/tank-changed';
 import { ClubCareProfile } from './care-profile.entity';
 import { copyProfile, listProfiles, loadClubProfile, resolveProfile, updateProfile } from './care-profile.service';
 
-export function careProfileRouter(deps: { dataSource: DataSource }): Router {
-  const { dataSource } = deps;
+export function careProfileRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
+  const { dataSource, tankChanges } = deps;
   const router = Router();
 
   router.get('/clubs/:clubId/care-profiles', requireSignIn, validate({ params: clubIdParams }), requireClubMember, async (req, res) => {
@@ -51,8 +50,7 @@ export function careProfileRouter(deps: { dataSource: DataSource }): Router {
     const result = await dataSource.transaction(async (tx) => {
       const updated = await updateProfile(tx, { clubId: params.clubId, profileId: params.profileId, definition: body.definition, note: body.note, actorId: viewerOf(req).user.id, expectedVersion: body.baseVersion });
       // Every tank that follows the profile is judged again by the new version, in the same transaction.
-      const tanks: { id: string }[] = await tx.query(`SELECT id FROM tank WHERE club_id = $1 AND care_profile_key = $2 AND archived_at IS NULL`, [params.clubId, updated.profile.key]);
-      for (const tank of tanks) await tankChanged(tx, tank.id);
+      await tankChanges.publishForProfile(tx, params.clubId, updated.profile.key);
       return updated;
     });
     res.json({ profile: result.definition, changes: result.changes });

@@ -1,8 +1,8 @@
 import { randomBytes } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { BUILT_IN_PROFILES, builtInProfile, careProfileSchema, type CareProfile } from '../../../shared/care';
+import { BUILT_IN_PROFILES, builtInProfile, careProfileSchema, type CareProfile } from '@shared/care';
 import { errors } from '../../lib/app-error';
-import { audit } from '../audit/audit';
+import { audit } from '../audit';
 import { ClubCareProfile, ClubCareProfileVersion } from './care-profile.entity';
 import { describeChanges } from './profile-diff';
 

@@ -1,19 +1,18 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { membershipParams, updateMembershipSchema } from '../../../shared/schemas/club.schema';
-import { clubIdParams } from '../../../shared/schemas/common';
-import { asSubject } from '../../../shared/abilities';
+import type { Deps } from '@server/deps';
+import { asSubject } from '@shared/abilities';
+import { DEFAULT_MENTOR_CAPACITY } from '@shared/constants/mentorship';
+import { membershipParams, updateMembershipSchema } from '@shared/schemas/club.schema';
+import { clubIdParams } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access/ability-sql';
-import { audit } from '../audit/audit';
+import { whereAllowed } from '../access';
+import { audit } from '../audit';
 import { Club } from './club.entity';
 import { Membership } from './membership.entity';
 
-export const DEFAULT_MENTOR_CAPACITY = 5;
-
-export function clubRouter(deps: { dataSource: DataSource }): Router {
+export function clubRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const { dataSource } = deps;
   const router = Router();
   const inClub = [requireSignIn, validate({ params: clubIdParams }), requireClubMember];

@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { MembershipStatus, Role } from '../../../shared/constants/roles';
-import { User } from '../users/user.entity';
+import { User } from '../users';
 import { Club } from './club.entity';
 
 @Entity({ name: 'membership' })

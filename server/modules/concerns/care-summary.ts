@@ -1,16 +1,16 @@
 import type { EntityManager } from 'typeorm';
-import { CYCLE_DURATION_WEEKS, cycleStage, dueTests, stockingReadiness } from '../../../shared/care';
+import { CYCLE_DURATION_WEEKS, cycleStage, dueTests, stockingReadiness } from '@shared/care';
 import { errors } from '../../lib/app-error';
-import { resolveProfile } from '../care/care-profile.service';
+import { resolveProfile } from '../care';
+import { careHistory, type TankForCare } from '../tanks';
 import { ConcernRow, TankReadiness } from './concern.entity';
 import { presentConcern } from './concern.presenter';
-import { loadHistory, type TankForCare } from './tank-care-data';
 
 /** Everything the tank page's care section shows: cycle stage, due tests, stocking checklist, live concerns. */
 export async function careSummary(m: EntityManager, tank: TankForCare, now = new Date()) {
   const profile = await resolveProfile(m, tank.clubId, tank.careProfileKey);
   if (!profile) throw errors.conflict('This tank follows a care profile that no longer exists. Choose another on the tank settings.');
-  const history = await loadHistory(m, tank.id, now);
+  const history = await careHistory(m, tank.id, now);
   const iso = now.toISOString();
   const cycle = cycleStage(history, { now: iso });
   const readinessRow = await m.findOneBy(TankReadiness, { tankId: tank.id });

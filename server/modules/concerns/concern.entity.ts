@@ -1,5 +1,5 @@
 import { Column, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import type { AnyParameterKey, Severity } from '../../../shared/care';
+import type { AnyParameterKey, Severity } from '@shared/care';
 
 export type ConcernStatus = 'open' | 'acknowledged' | 'resolved';
 

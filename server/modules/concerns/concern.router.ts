@@ -1,29 +1,29 @@
 import { Router, type Request } from 'express';
-import type { DataSource, EntityManager } from 'typeorm';
-import { concernActionSchema, concernListQuery, concernParams, readinessChecklistSchema, signOffSchema } from '../../../shared/schemas/concern.schema';
-import { clubIdParams, uuid } from '../../../shared/schemas/common';
+import type { EntityManager } from 'typeorm';
+import type { Deps } from '@server/deps';
+import { concernActionSchema, concernListQuery, concernParams, readinessChecklistSchema, signOffSchema } from '@shared/schemas/concern.schema';
+import { clubIdParams, uuid } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access/ability-sql';
-import { audit } from '../audit/audit';
+import { whereAllowed } from '../access';
+import { audit } from '../audit';
+import { tankForCare } from '../tanks';
 import { careSummary } from './care-summary';
 import { ConcernRow, TankReadiness } from './concern.entity';
 import { presentConcern } from './concern.presenter';
-import { announceTankChange, tankChanged } from './tank-changed';
-import { loadTankForCare } from './tank-care-data';
 
 const tankParams = clubIdParams.extend({ tankId: uuid });
 
 /** Loads a tank of this club or answers 404 (a tank of another club does not exist for the caller). */
 async function tankInClub(m: EntityManager, clubId: string, tankId: string) {
-  const tank = await loadTankForCare(m, tankId);
+  const tank = await tankForCare(m, tankId);
   if (!tank || tank.clubId !== clubId) throw errors.notFound('That tank');
   return tank;
 }
 
-export function concernRouter(deps: { dataSource: DataSource }): Router {
-  const { dataSource } = deps;
+export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
+  const { dataSource, tankChanges } = deps;
   const router = Router();
   const guard = [requireSignIn];
 
@@ -62,9 +62,9 @@ export function concernRouter(deps: { dataSource: DataSource }): Router {
           : { status: 'resolved' as const, resolvedById: actorId, resolvedAt: now, resolveNote: body.note || null, resolvedByTest: false };
       await tx.update(ConcernRow, { id: c.id }, patch);
       await audit(tx, { actorId, clubId: c.clubId, action: `concern.${action}d`, targetType: 'Concern', targetId: c.id });
+      await tankChanges.publish(tx, c.tankId, 'concern');
       return { ...c, ...patch };
     });
-    announceTankChange(dataSource.manager, { id: row.tankId, clubId: row.clubId, ownerId: row.ownerId });
     res.json({ concern: presentConcern(row) });
   };
   router.post('/clubs/:clubId/concerns/:concernId/acknowledge', ...guard, validate(act), requireClubMember, changeConcern('acknowledge'));
@@ -93,7 +93,7 @@ export function concernRouter(deps: { dataSource: DataSource }): Router {
     await dataSource.transaction(async (tx) => {
       await tx.getRepository(TankReadiness).upsert({ tankId: tank.id, signedOffById: actorId, signedOffAt: new Date(), signOffNote: body.note }, ['tankId']);
       await audit(tx, { actorId, clubId: tank.clubId, action: 'tank.signed-off', targetType: 'Tank', targetId: tank.id });
-      await tankChanged(tx, tank.id);
+      await tankChanges.publish(tx, tank.id, 'sign-off');
     });
     res.json(await careSummary(dataSource.manager, tank));
   });
@@ -105,7 +105,7 @@ export function concernRouter(deps: { dataSource: DataSource }): Router {
     await dataSource.transaction(async (tx) => {
       await tx.getRepository(TankReadiness).update({ tankId: tank.id }, { signedOffById: null, signedOffAt: null, signOffNote: null });
       await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'tank.sign-off-withdrawn', targetType: 'Tank', targetId: tank.id });
-      await tankChanged(tx, tank.id);
+      await tankChanges.publish(tx, tank.id, 'sign-off');
     });
     res.json(await careSummary(dataSource.manager, tank));
   });

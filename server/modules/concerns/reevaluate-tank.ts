@@ -8,10 +8,10 @@ import {
   type CareProfile,
   type Concern,
   type WaterTestInput,
-} from '../../../shared/care';
-import { resolveProfile } from '../care/care-profile.service';
+} from '@shared/care';
+import { resolveProfile } from '../care';
+import { careHistory, lastSourceNitrate, tankForCare, type TankForCare } from '../tanks';
 import { ConcernRow, TankReadiness } from './concern.entity';
-import { lastSourceNitrate, loadHistory, loadTankForCare, type TankForCare } from './tank-care-data';
 
 export interface Reevaluation {
   raised: ConcernRow[];
@@ -43,7 +43,7 @@ function measuredBy(latest: WaterTestInput | undefined, concern: ConcernRow): bo
 }
 
 export async function concernsFor(m: EntityManager, tank: TankForCare, profile: CareProfile, now: Date): Promise<{ concerns: Concern[]; latest?: WaterTestInput }> {
-  const history = await loadHistory(m, tank.id, now);
+  const history = await careHistory(m, tank.id, now);
   const latest = history.at(-1);
   const fired: Concern[] = [];
   if (latest) {
@@ -71,7 +71,7 @@ export async function concernsFor(m: EntityManager, tank: TankForCare, profile: 
  */
 export async function reevaluateTank(tx: EntityManager, tankId: string, now = new Date()): Promise<Reevaluation> {
   const result: Reevaluation = { raised: [], changed: [], cleared: [] };
-  const tank = await loadTankForCare(tx, tankId);
+  const tank = await tankForCare(tx, tankId);
   if (!tank || tank.archived) return result;
   const profile = await resolveProfile(tx, tank.clubId, tank.careProfileKey);
   if (!profile) return result;

@@ -1,16 +1,14 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { tankParams } from '../../../shared/schemas/tank.schema';
+import type { Deps } from '@server/deps';
+import { tankParams } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn } from '../../middleware/viewer';
-import { loadTank, ownedBy } from '../tanks/tank-access';
-import { TankEvent } from '../tanks/tank-event.entity';
-import { WaterTest } from '../tanks/water-test.entity';
+import { loadTank, ownedBy, TankEvent, WaterTest } from '../tanks';
 import { exportCsv } from './csv-export';
 
 const fileSlug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'tank';
 
-export function csvExportRouter(deps: { dataSource: DataSource }): Router {
+export function csvExportRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const { dataSource } = deps;
   const router = Router();
   const route = { params: tankParams };

@@ -1,9 +1,7 @@
 import Papa from 'papaparse';
-import { PARAMETER_KEYS, parameterInfo } from '../../../shared/care/parameters';
-import { parameterHeader } from '../../../shared/readings/csv-columns';
-import type { TankEvent } from '../tanks/tank-event.entity';
-import type { WaterTest } from '../tanks/water-test.entity';
-import { valuesOf } from '../tanks/water-test.presenter';
+import { PARAMETER_KEYS, parameterInfo } from '@shared/care/parameters';
+import { parameterHeader } from '@shared/readings/csv-columns';
+import { valuesOf, type TankEvent, type WaterTest } from '../tanks';
 
 export const EXPORT_HEADERS = ['record', 'date (UTC)', ...PARAMETER_KEYS.map(parameterHeader), parameterHeader('freeAmmonia'), 'note', 'details'];
 

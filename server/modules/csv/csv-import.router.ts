@@ -1,18 +1,18 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { csvImportSchema } from '../../../shared/schemas/csv-import.schema';
-import { tankParams } from '../../../shared/schemas/tank.schema';
+import type { Deps } from '@server/deps';
+import { csvImportSchema } from '@shared/schemas/csv-import.schema';
+import { tankParams } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { loadTank, ownedBy, requireActive } from '../tanks/tank-access';
+import { audit } from '../audit';
+import { loadTank, ownedBy, requireActive } from '../tanks';
 import { analyzeForTank, commitImport } from './csv-import.service';
 
 /** Path prefix of the import routes, which take a larger JSON body (the file as text). */
 export const IMPORT_ROUTES_PREFIX = '/clubs/:clubId/tanks/:tankId/imports';
 
 /** Water tests from a spreadsheet: preview what would be saved, then save it in one go. */
-export function csvImportRouter(deps: { dataSource: DataSource }): Router {
+export function csvImportRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
   const { dataSource } = deps;
   const router = Router();
   const route = { params: tankParams, body: csvImportSchema };
@@ -33,7 +33,7 @@ export function csvImportRouter(deps: { dataSource: DataSource }): Router {
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'create', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      const outcome = await commitImport(tx, tank, body, user.timeZone, user.id);
+      const outcome = await commitImport(tx, deps, tank, body, user.timeZone, user.id);
       await audit(tx, { actorId: user.id, clubId: tank.clubId, action: 'water-tests.imported', targetType: 'Tank', targetId: tank.id, details: { imported: outcome.imported } });
       return outcome;
     });

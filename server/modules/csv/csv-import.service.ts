@@ -1,16 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
-import { analyzeCsv, type CsvAnalysis } from '../../../shared/readings/csv-analyze';
-import { CsvProblem } from '../../../shared/readings/csv-layout';
-import type { CsvImportRequest } from '../../../shared/schemas/csv-import.schema';
-import type { ImportCommitResult } from '../../../shared/schemas/tank-views';
+import type { Deps } from '@server/deps';
+import { analyzeCsv, type CsvAnalysis } from '@shared/readings/csv-analyze';
+import { CsvProblem } from '@shared/readings/csv-layout';
+import type { CsvImportRequest } from '@shared/schemas/csv-import.schema';
+import type { ImportCommitResult } from '@shared/schemas/tank-views';
 import { errors } from '../../lib/app-error';
-import { recomputeDerivedFrom } from '../tanks/derived-refresh';
-import type { Tank } from '../tanks/tank.entity';
-import { chemistryOf } from '../tanks/water-test.context';
-import { WaterTest } from '../tanks/water-test.entity';
-import { onWaterTestSaved } from '../tanks/water-test.events';
-import { columnsOf } from '../tanks/water-test.service';
+import { chemistryOf, columnsOf, recomputeDerivedFrom, WaterTest, type Tank } from '../tanks';
 
 /** Rows per INSERT: well under PostgreSQL's 65,535 parameters per statement. */
 const BATCH_ROWS = 500;
@@ -36,7 +32,7 @@ export async function analyzeForTank(manager: EntityManager, tank: Tank, request
  * Saves every valid row of the file in the caller's transaction, in batches; the tank row is locked first so two
  * imports of the same file cannot both pass the duplicate check.
  */
-export async function commitImport(tx: EntityManager, tank: Tank, request: CsvImportRequest, viewerTimeZone: string, actorId: string): Promise<ImportCommitResult> {
+export async function commitImport(tx: EntityManager, deps: Pick<Deps, 'tankChanges'>, tank: Tank, request: CsvImportRequest, viewerTimeZone: string, actorId: string): Promise<ImportCommitResult> {
   await tx.query(`SELECT id FROM tank WHERE id = $1 FOR UPDATE`, [tank.id]);
   const { preview, rows } = await analyzeForTank(tx, tank, request, viewerTimeZone);
   if (rows.length === 0) {
@@ -50,8 +46,7 @@ export async function commitImport(tx: EntityManager, tank: Tank, request: CsvIm
   const first = new Date(Math.min(...times));
   const last = new Date(Math.max(...times));
   await recomputeDerivedFrom(tx, tank, first);
-  const newest = values.find((v) => v.takenAt!.getTime() === last.getTime())!;
-  await onWaterTestSaved(tx, await tx.findOneByOrFail(WaterTest, { id: newest.id }));
+  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return {
     imported: values.length,
     invalid: preview.invalid,

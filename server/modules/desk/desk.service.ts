@@ -1,10 +1,11 @@
 import type { EntityManager } from 'typeorm';
-import type { AppAbility } from '../../../shared/abilities';
-import { cycleStage, isTrendRule, parameterInfo, rankTanks, severityRank, type ParameterKey, type TankState } from '../../../shared/care';
-import type { DeskRow, DeskView } from '../../../shared/schemas/desk.schema';
-import { abilityCondition } from '../access/ability-sql';
-import { ConcernRow } from '../concerns/concern.entity';
-import { loadHistory } from '../concerns/tank-care-data';
+import type { AppAbility } from '@shared/abilities';
+import { cycleStage, isTrendRule, parameterInfo, rankTanks, severityRank, type ParameterKey, type TankState } from '@shared/care';
+import type { DeskRow, DeskView } from '@shared/schemas/desk.schema';
+import { abilityCondition } from '../access';
+import { ConcernRow } from '../concerns';
+import { unansweredCountsByTank } from '../questions';
+import { careHistory } from '../tanks';
 
 const DAY_MS = 86_400_000;
 const SPARK_DAYS = 14;
@@ -14,8 +15,6 @@ export interface DeskFilters {
   cycling?: boolean;
   unanswered?: boolean;
 }
-
-export type UnansweredCounter = (m: EntityManager, clubId: string, tankIds: string[]) => Promise<Map<string, number>>;
 
 interface TankRow {
   id: string;
@@ -33,7 +32,7 @@ interface TankRow {
  */
 export async function buildDesk(
   m: EntityManager,
-  p: { clubId: string; viewerId: string; ability: AppAbility; filters: DeskFilters; now?: Date; unansweredCounts?: UnansweredCounter },
+  p: { clubId: string; viewerId: string; ability: AppAbility; filters: DeskFilters; now?: Date },
 ): Promise<DeskView> {
   const now = p.now ?? new Date();
   const watch = abilityCondition(p.ability, 'watch', 'Tank', { clubId: 't.club_id', ownerId: 't.owner_id' });
@@ -52,12 +51,12 @@ export async function buildDesk(
     .createQueryBuilder(ConcernRow, 'c')
     .where("c.tank_id IN (:...ids) AND c.status <> 'resolved'", { ids })
     .getMany();
-  const unanswered = p.unansweredCounts ? await p.unansweredCounts(m, p.clubId, ids) : new Map<string, number>();
+  const unanswered = await unansweredCountsByTank(m, p.clubId, ids);
 
   const rows: DeskRow[] = [];
   const states: TankState[] = [];
   for (const t of tanks) {
-    const history = await loadHistory(m, t.id, now, 60);
+    const history = await careHistory(m, t.id, now, 60);
     const last = history.at(-1);
     const mine = concerns.filter((c) => c.tankId === t.id).sort((a, b) => severityRank(b.severity) - severityRank(a.severity) || +b.raisedAt - +a.raisedAt);
     const worst = mine[0];

@@ -1,5 +1,6 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { errors } from '../../lib/app-error';
 
 const PING_TIMEOUT_MS = 2_000;
@@ -20,7 +21,7 @@ async function databaseIsUp(dataSource: DataSource): Promise<boolean> {
   }
 }
 
-export function healthRouter(dataSource: DataSource): Router {
+export function healthRouter({ dataSource }: Pick<Deps, 'dataSource'>): Router {
   const router = Router();
   const startedAt = Date.now();
   router.get('/health', async (_req, res) => {

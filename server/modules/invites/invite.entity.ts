@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
 import type { Role } from '../../../shared/constants/roles';
-import { Club } from '../clubs/club.entity';
+import { Club } from '../clubs';
 
 @Entity({ name: 'invite' })
 @Index('idx_invite_club', ['clubId'])

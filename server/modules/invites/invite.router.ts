@@ -1,26 +1,22 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { acceptInviteSchema } from '../../../shared/schemas/auth.schema';
 import { createInviteSchema, inviteParams } from '../../../shared/schemas/club.schema';
 import { clubIdParams } from '../../../shared/schemas/common';
-import type { Config } from '../../config/env';
 import { errors } from '../../lib/app-error';
 import { hashPassword } from '../../lib/passwords';
-import type { Mailer } from '../../mail/mailer';
 import { tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access/ability-sql';
-import { audit } from '../audit/audit';
-import { startSignedInSession } from '../auth/sessions';
-import { Club } from '../clubs/club.entity';
-import { Membership } from '../clubs/membership.entity';
-import { User } from '../users/user.entity';
-import { presentUser } from '../users/user.presenter';
+import { whereAllowed } from '../access';
+import { audit } from '../audit';
+import { startSignedInSession } from '../auth';
+import { Club, Membership } from '../clubs';
+import { presentUser, User } from '../users';
 import { Invite } from './invite.entity';
 import { findUsableInvite, issueInvite, presentInvite, resendInvite } from './invite.service';
 
-export function inviteRouter(deps: { dataSource: DataSource; mailer: Mailer; config: Config }): Router {
+export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>): Router {
   const { dataSource, mailer, config } = deps;
   const router = Router();
   const club = [requireSignIn, validate({ params: clubIdParams }), requireClubMember];

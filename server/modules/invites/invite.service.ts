@@ -5,10 +5,9 @@ import { errors } from '../../lib/app-error';
 import { hashToken, newToken } from '../../lib/tokens';
 import { inviteMail } from '../../mail/templates';
 import type { OutgoingMail } from '../../mail/mailer';
-import { audit } from '../audit/audit';
-import { Club } from '../clubs/club.entity';
-import { Membership } from '../clubs/membership.entity';
-import { User } from '../users/user.entity';
+import { audit } from '../audit';
+import { Club, Membership } from '../clubs';
+import { User } from '../users';
 import { Invite } from './invite.entity';
 
 const DAY_MS = 86_400_000;

@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { CapturedMail } from './captured-mail.entity';
 
 const escapeHtml = (s: string) =>
@@ -7,7 +7,7 @@ const escapeHtml = (s: string) =>
 const linkify = (escaped: string) => escaped.replace(/https?:\/\/[^\s<]+/g, (u) => `<a href="${u}">${u}</a>`);
 
 /** Development-only: what the fake SMTP server caught. Never mounted in production. */
-export function outboxRouter(deps: { dataSource: DataSource }): Router {
+export function outboxRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const repo = deps.dataSource.getRepository(CapturedMail);
   const router = Router();
 

@@ -1,12 +1,12 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { assignmentParams, createAssignmentSchema } from '../../../shared/schemas/club.schema';
-import { clubIdParams } from '../../../shared/schemas/common';
+import type { Deps } from '@server/deps';
+import { assignmentParams, createAssignmentSchema } from '@shared/schemas/club.schema';
+import { clubIdParams } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access/ability-sql';
-import { audit } from '../audit/audit';
+import { whereAllowed } from '../access';
+import { audit } from '../audit';
 import { assignMentor } from './assignment.service';
 import { MentorAssignment } from './mentor-assignment.entity';
 
@@ -19,7 +19,7 @@ export const presentAssignment = (a: MentorAssignment) => ({
   endedAt: a.endedAt?.toISOString() ?? null,
 });
 
-export function assignmentRouter(deps: { dataSource: DataSource }): Router {
+export function assignmentRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): Router {
   const { dataSource } = deps;
   const router = Router();
 
@@ -35,7 +35,7 @@ export function assignmentRouter(deps: { dataSource: DataSource }): Router {
   router.post('/clubs/:clubId/mentor-assignments', requireSignIn, validate(create), requireClubMember, async (req, res) => {
     const { params, body } = inputOf(res, create);
     authorize(req, 'create', 'MentorAssignment', { clubId: params.clubId, ...body });
-    const { assignment } = await dataSource.transaction((tx) => assignMentor(tx, { clubId: params.clubId, ...body, actorId: viewerOf(req).user.id }));
+    const { assignment } = await dataSource.transaction((tx) => assignMentor(tx, deps, { clubId: params.clubId, ...body, actorId: viewerOf(req).user.id }));
     res.status(201).json({ assignment: presentAssignment(assignment) });
   });
 

@@ -1,9 +1,9 @@
 import { In, IsNull, type EntityManager } from 'typeorm';
+import type { Deps } from '@server/deps';
+import { DEFAULT_MENTOR_CAPACITY } from '@shared/constants/mentorship';
 import { errors } from '../../lib/app-error';
-import { audit } from '../audit/audit';
-import { DEFAULT_MENTOR_CAPACITY } from '../clubs/club.router';
-import { Membership } from '../clubs/membership.entity';
-import { notify } from '../notifications/notify';
+import { audit } from '../audit';
+import { Membership } from '../clubs';
 import { MentorAssignment } from './mentor-assignment.entity';
 
 export interface AssignMentorInput {
@@ -30,7 +30,7 @@ async function namesOf(tx: EntityManager, ids: string[]): Promise<Map<string, st
  * The one way a mentor is paired with a mentee (admin pairing or an accepted request): checks both memberships,
  * the mentor's capacity, ends a previous pairing, answers the mentee's open request, audits and notifies.
  */
-export async function assignMentor(tx: EntityManager, input: AssignMentorInput): Promise<AssignMentorResult> {
+export async function assignMentor(tx: EntityManager, { notify }: Pick<Deps, 'notify'>, input: AssignMentorInput): Promise<AssignMentorResult> {
   const { clubId, mentorId, menteeId, actorId } = input;
   if (mentorId === menteeId) throw errors.badRequest('A member cannot mentor themselves.', [{ path: 'menteeId', message: 'Choose someone other than the mentor.' }]);
   // Lock both memberships (in id order, so two pairings never deadlock): two admins cannot both fill the mentor's

@@ -1,15 +1,16 @@
 import { Router } from 'express';
-import { IsNull, type DataSource } from 'typeorm';
-import { mentorParams, updateMentorCapacitySchema } from '../../../shared/schemas/mentor-request.schema';
+import { IsNull } from 'typeorm';
+import type { Deps } from '@server/deps';
+import { mentorParams, updateMentorCapacitySchema } from '@shared/schemas/mentor-request.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { Membership } from '../clubs/membership.entity';
+import { audit } from '../audit';
+import { Membership } from '../clubs';
 import { MentorAssignment } from './mentor-assignment.entity';
 
 /** How many mentees a mentor takes on in a club: set by the mentor themselves or by an admin. */
-export function mentorCapacityRouter(deps: { dataSource: DataSource }): Router {
+export function mentorCapacityRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const { dataSource } = deps;
   const router = Router();
 

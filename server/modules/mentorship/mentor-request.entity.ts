@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import type { MentorRequestState } from '../../../shared/constants/mentorship';
+import type { MentorRequestState } from '@shared/constants/mentorship';
 
 @Entity({ name: 'mentor_request' })
 @Index('uq_mentor_request_open', ['clubId', 'requesterId'], { unique: true, where: "state = 'open'" })

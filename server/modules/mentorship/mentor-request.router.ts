@@ -1,24 +1,24 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { clubIdParams } from '../../../shared/schemas/common';
+import type { Deps } from '@server/deps';
+import { clubIdParams } from '@shared/schemas/common';
 import {
   acceptMentorRequestSchema,
   createMentorRequestSchema,
   declineMentorRequestSchema,
   listMentorRequestsQuery,
   mentorRequestParams,
-} from '../../../shared/schemas/mentor-request.schema';
+} from '@shared/schemas/mentor-request.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access/ability-sql';
-import { Membership } from '../clubs/membership.entity';
+import { whereAllowed } from '../access';
+import { Membership } from '../clubs';
 import { presentAssignment } from './assignment.router';
 import { assignMentor } from './assignment.service';
 import { MentorRequest } from './mentor-request.entity';
 import { createMentorRequest, declineMentorRequest, lockOpenRequest, myMentorRequest, presentRequests } from './mentor-request.service';
 
-export function mentorRequestRouter(deps: { dataSource: DataSource }): Router {
+export function mentorRequestRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): Router {
   const { dataSource } = deps;
   const router = Router();
 
@@ -27,7 +27,7 @@ export function mentorRequestRouter(deps: { dataSource: DataSource }): Router {
     const { params, body } = inputOf(res, create);
     const { user } = viewerOf(req);
     authorize(req, 'create', 'MentorRequest', { clubId: params.clubId, requesterId: user.id });
-    const row = await dataSource.transaction((tx) => createMentorRequest(tx, { clubId: params.clubId, requester: user, ...body }));
+    const row = await dataSource.transaction((tx) => createMentorRequest(tx, deps, { clubId: params.clubId, requester: user, ...body }));
     res.status(201).json({ request: (await presentRequests(dataSource.manager, [row]))[0] });
   });
 
@@ -65,7 +65,7 @@ export function mentorRequestRouter(deps: { dataSource: DataSource }): Router {
       if (!mentorId) throw errors.badRequest('Choose a mentor for this member.', [{ path: 'mentorId', message: 'Choose a mentor.' }]);
       const requester = await tx.findOneBy(Membership, { clubId: params.clubId, userId: request.requesterId });
       if (requester?.status !== 'active') throw errors.conflict('That member is no longer active in the club. Decline the request instead.');
-      const { assignment } = await assignMentor(tx, { clubId: params.clubId, mentorId, menteeId: request.requesterId, actorId });
+      const { assignment } = await assignMentor(tx, deps, { clubId: params.clubId, mentorId, menteeId: request.requesterId, actorId });
       return { assignment, request: await tx.findOneByOrFail(MentorRequest, { id: request.id }) };
     });
     res.json({ request: (await presentRequests(dataSource.manager, [result.request]))[0], assignment: presentAssignment(result.assignment) });
@@ -78,7 +78,7 @@ export function mentorRequestRouter(deps: { dataSource: DataSource }): Router {
     const row = await dataSource.transaction(async (tx) => {
       const request = await lockOpenRequest(tx, params.clubId, params.requestId);
       authorize(req, 'update', 'MentorRequest', request);
-      return declineMentorRequest(tx, { request, actorId: viewerOf(req).user.id, reason: body.reason });
+      return declineMentorRequest(tx, deps, { request, actorId: viewerOf(req).user.id, reason: body.reason });
     });
     res.json({ request: (await presentRequests(dataSource.manager, [row]))[0] });
   });

@@ -1,10 +1,10 @@
 import { In, IsNull, type EntityManager } from 'typeorm';
-import type { MentorRequestView, MyMentorRequestView } from '../../../shared/schemas/notification-views';
+import type { Deps } from '@server/deps';
+import type { MentorRequestView, MyMentorRequestView } from '@shared/schemas/notification-views';
 import { errors } from '../../lib/app-error';
-import { audit } from '../audit/audit';
-import { Membership } from '../clubs/membership.entity';
-import { notify } from '../notifications/notify';
-import { User } from '../users/user.entity';
+import { audit } from '../audit';
+import { Membership } from '../clubs';
+import { User } from '../users';
 import { MentorAssignment } from './mentor-assignment.entity';
 import { MentorRequest } from './mentor-request.entity';
 
@@ -32,6 +32,7 @@ const isUniqueViolation = (err: unknown) => (err as { code?: string })?.code ===
 
 export async function createMentorRequest(
   tx: EntityManager,
+  { notify }: Pick<Deps, 'notify'>,
   p: { clubId: string; requester: User; note?: string; preferredMentorId?: string },
 ): Promise<MentorRequest> {
   const { clubId, requester } = p;
@@ -78,7 +79,7 @@ export async function lockOpenRequest(tx: EntityManager, clubId: string, request
   return row;
 }
 
-export async function declineMentorRequest(tx: EntityManager, p: { request: MentorRequest; actorId: string; reason: string }): Promise<MentorRequest> {
+export async function declineMentorRequest(tx: EntityManager, { notify }: Pick<Deps, 'notify'>, p: { request: MentorRequest; actorId: string; reason: string }): Promise<MentorRequest> {
   const { request } = p;
   await tx.update(MentorRequest, { id: request.id }, { state: 'declined', declineReason: p.reason, decidedById: p.actorId, decidedAt: new Date() });
   await audit(tx, { actorId: p.actorId, clubId: request.clubId, action: 'mentor-request.declined', targetType: 'MentorRequest', targetId: request.id });

@@ -1,12 +1,12 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { DEFAULT_EMAIL_MODES } from '../../../shared/constants/notifications';
 import type { NotificationPage, NotificationPreferencesView } from '../../../shared/schemas/notification-views';
 import { listNotificationsQuery, notificationParams, updateNotificationPreferencesSchema } from '../../../shared/schemas/notification.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
+import { audit } from '../audit';
 import { Notification } from './notification.entity';
 import { presentNotification } from './notification.presenter';
 import { emailModesOf, setEmailModes } from './preferences';
@@ -17,7 +17,7 @@ const visible = (user: string) =>
 
 type Row = Notification & { clubName: string };
 
-export function notificationRouter(deps: { dataSource: DataSource }): Router {
+export function notificationRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const { dataSource } = deps;
   const router = Router();
 

@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
-import type { NotificationKind } from '../../../shared/constants/notifications';
+import type { NotificationKind } from '@shared/constants/notifications';
 import { afterCommit } from '../../db/after-commit';
-import { deliveryFor } from './delivery';
+import type { NotificationDelivery } from './delivery';
 import { immediateMail, type Recipient } from './notification-mail';
 import { Notification } from './notification.entity';
 import { presentNotification } from './notification.presenter';
@@ -28,9 +28,15 @@ const clip = (s: string, max: number) => (s.length > max ? `${s.slice(0, max - 1
  * Records notifications inside the caller's transaction. E-mails for people who chose "right away" are queued in the
  * same transaction (so they exist only if it commits); the live socket event goes out after the commit.
  */
-export async function notify(tx: EntityManager, input: NotifyInput): Promise<Notification[]> {
+export type Notify = (tx: EntityManager, input: NotifyInput) => Promise<Notification[]>;
+
+/** The app's notify(), delivering through its socket hub and mail queue (createApp builds it once). */
+export function createNotifier(delivery: NotificationDelivery): Notify {
+  return (tx, input) => notifyThrough(delivery, tx, input);
+}
+
+async function notifyThrough(delivery: NotificationDelivery, tx: EntityManager, input: NotifyInput): Promise<Notification[]> {
   if (!/^\/(?![/\\])/.test(input.link)) throw new Error(`notify(): link must be a path inside the app, got "${input.link}"`);
-  const delivery = deliveryFor(tx);
   const wanted = [...new Set(input.userIds)];
   if (!wanted.length) return [];
   const recipients: Recipient[] = await tx.query(

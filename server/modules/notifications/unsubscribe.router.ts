@@ -1,10 +1,9 @@
 import { Router, type Request, type Response } from 'express';
-import type { DataSource } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '../../../shared/constants/notifications';
 import { unsubscribeQuery } from '../../../shared/schemas/notification.schema';
-import type { Config } from '../../config/env';
-import { audit } from '../audit/audit';
-import { User } from '../users/user.entity';
+import { audit } from '../audit';
+import { User } from '../users';
 import { unsubscribe } from './preferences';
 import { unsubscribePage } from './unsubscribe-page';
 import { verifyUnsubscribeToken, type UnsubscribeClaim } from './unsubscribe-token';
@@ -23,7 +22,7 @@ const refuse = (res: Response) =>
  * GET only shows a confirmation button (link scanners in mail clients follow GETs); POST turns the e-mails off,
  * which is also what a mail client's one-click unsubscribe (RFC 8058) sends.
  */
-export function unsubscribeRouter(deps: { dataSource: DataSource; config: Config }): Router {
+export function unsubscribeRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
   const { dataSource, config } = deps;
   const router = Router();
 

@@ -1,4 +1,4 @@
-import type { PhotoView } from '../../../shared/schemas/tank-views';
+import type { PhotoView } from '@shared/schemas/tank-views';
 import type { Photo } from './photo.entity';
 
 export function presentPhoto(p: Photo, clubId: string): PhotoView {

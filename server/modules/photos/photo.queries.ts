@@ -1,5 +1,5 @@
 import { In, type EntityManager } from 'typeorm';
-import type { PhotoView } from '../../../shared/schemas/tank-views';
+import type { PhotoView } from '@shared/schemas/tank-views';
 import { Photo } from './photo.entity';
 import { presentPhoto } from './photo.presenter';
 
@@ -35,4 +35,20 @@ export async function storageKeysOf(manager: EntityManager, parents: { waterTest
   if (!where.length) return [];
   const rows = await manager.find(Photo, { where, select: { storageKey: true } });
   return rows.map((r) => r.storageKey);
+}
+
+/** A tank's photos, newest first; only those of one test or event when asked. */
+export async function photosOfTank(manager: EntityManager, tankId: string, filter: { waterTestId?: string; eventId?: string }): Promise<Photo[]> {
+  return manager.find(Photo, {
+    where: { tankId, ...(filter.waterTestId ? { waterTestId: filter.waterTestId } : {}), ...(filter.eventId ? { eventId: filter.eventId } : {}) },
+    order: { createdAt: 'DESC', id: 'DESC' },
+  });
+}
+
+export async function findPhoto(manager: EntityManager, photoId: string): Promise<Photo | null> {
+  return manager.findOneBy(Photo, { id: photoId });
+}
+
+export async function deletePhotoRow(manager: EntityManager, photoId: string): Promise<void> {
+  await manager.delete(Photo, { id: photoId });
 }

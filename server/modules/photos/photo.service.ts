@@ -1,34 +1,22 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { photoUploadFieldsSchema } from '../../../shared/schemas/photo.schema';
-import { errors } from '../../lib/app-error';
-import type { Tank } from '../tanks/tank.entity';
-import { TankEvent } from '../tanks/tank-event.entity';
-import { WaterTest } from '../tanks/water-test.entity';
+import type { photoUploadFieldsSchema } from '@shared/schemas/photo.schema';
 import { Photo } from './photo.entity';
 import type { ProcessedPhoto } from './photo-processing';
 import { discard, newStorageKey, publish, stage, type StagedFile } from './photo-storage';
 
-type Fields = z.output<typeof photoUploadFieldsSchema>;
-
-async function checkParent(tx: EntityManager, tank: Tank, fields: Fields): Promise<void> {
-  if (fields.waterTestId && !(await tx.existsBy(WaterTest, { id: fields.waterTestId, tankId: tank.id }))) {
-    throw errors.badRequest('Check what the photo belongs to.', [{ path: 'waterTestId', message: 'That water test is not on this tank.' }]);
-  }
-  if (fields.eventId && !(await tx.existsBy(TankEvent, { id: fields.eventId, tankId: tank.id }))) {
-    throw errors.badRequest('Check what the photo belongs to.', [{ path: 'eventId', message: 'That entry is not on this tank.' }]);
-  }
-}
+export type PhotoFields = z.output<typeof photoUploadFieldsSchema>;
 
 /**
  * Saves processed photos so that nothing is left half-written: files go to temporary names first, the rows are
- * inserted and the files renamed inside one transaction, and any failure removes every file written.
+ * inserted and the files renamed inside one transaction, and any failure removes every file written. `checkParent`
+ * runs first in that transaction: the owner of the tank's records says whether the test or event named is the tank's.
  */
 export async function storePhotos(
   dataSource: DataSource,
   uploadsDir: string,
-  tank: Tank,
-  fields: Fields,
+  owner: { tankId: string; checkParent: (tx: EntityManager) => Promise<void> },
+  fields: PhotoFields,
   photos: readonly ProcessedPhoto[],
   actorId: string,
 ): Promise<Photo[]> {
@@ -41,13 +29,13 @@ export async function storePhotos(
       keyed.push({ key, photo });
     }
     return await dataSource.transaction(async (tx) => {
-      await checkParent(tx, tank, fields);
+      await owner.checkParent(tx);
       const rows: Photo[] = [];
       for (const { key, photo } of keyed) {
         rows.push(
           await tx.save(
             tx.create(Photo, {
-              tankId: tank.id,
+              tankId: owner.tankId,
               waterTestId: fields.waterTestId ?? null,
               eventId: fields.eventId ?? null,
               storageKey: key,

@@ -1,20 +1,11 @@
 import type { EntityManager } from 'typeorm';
-import { asSubject, type QuestionSubject } from '../../../shared/abilities';
-import type { PersonRef } from '../../../shared/schemas/notification-views';
-import { mentionedIn } from '../../../shared/questions/mentions';
-import { loadViewer } from '../access/viewer.service';
+import { asSubject, type QuestionSubject } from '@shared/abilities';
+import type { PersonRef } from '@shared/schemas/notification-views';
+import { mentionedIn } from '@shared/questions/mentions';
+import { loadViewer } from '../access';
 
 /** Clubs are small; past this a mention picker would be the wrong tool anyway. */
 const CANDIDATES_MAX = 100;
-
-/** The asker's current mentors in the club: who a new question is for. */
-export async function currentMentorsOf(m: EntityManager, clubId: string, menteeId: string): Promise<string[]> {
-  const rows: { mentorId: string }[] = await m.query(
-    `SELECT DISTINCT mentor_id AS "mentorId" FROM mentor_assignment WHERE club_id = $1 AND mentee_id = $2 AND ended_at IS NULL`,
-    [clubId, menteeId],
-  );
-  return rows.map((r) => r.mentorId);
-}
 
 /**
  * Mentors and admins of the club who may read this question, by the same rules as the routes (loaded fresh):

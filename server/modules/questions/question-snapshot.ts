@@ -1,14 +1,11 @@
 import type { EntityManager } from 'typeorm';
-import type { AnyParameterKey } from '../../../shared/care/parameters';
-import type { QuestionSnapshot, SnapshotConcern, SnapshotSubject } from '../../../shared/schemas/question-views';
-import type { TankEventDetails } from '../../../shared/schemas/tank-event.schema';
+import type { AnyParameterKey } from '@shared/care/parameters';
+import type { QuestionSnapshot, SnapshotConcern, SnapshotSubject } from '@shared/schemas/question-views';
+import type { TankEventDetails } from '@shared/schemas/tank-event.schema';
 import { errors } from '../../lib/app-error';
-import { resolveProfile } from '../care/care-profile.service';
-import { ConcernRow } from '../concerns/concern.entity';
-import { TankEvent } from '../tanks/tank-event.entity';
-import type { Tank } from '../tanks/tank.entity';
-import { WaterTest } from '../tanks/water-test.entity';
-import { valuesOf } from '../tanks/water-test.presenter';
+import { resolveProfile } from '../care';
+import { ConcernRow } from '../concerns';
+import { TankEvent, valuesOf, WaterTest, type Tank } from '../tanks';
 
 export interface AskedAbout {
   waterTestId?: string;

@@ -1,11 +1,9 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { QuestionSnapshot } from '../../../shared/schemas/question-views';
-import type { QuestionStatus } from '../../../shared/schemas/question.schema';
-import { Club } from '../clubs/club.entity';
-import { TankEvent } from '../tanks/tank-event.entity';
-import { Tank } from '../tanks/tank.entity';
-import { WaterTest } from '../tanks/water-test.entity';
-import { User } from '../users/user.entity';
+import type { QuestionSnapshot } from '@shared/schemas/question-views';
+import type { QuestionStatus } from '@shared/schemas/question.schema';
+import { Club } from '../clubs';
+import { TankEvent, Tank, WaterTest } from '../tanks';
+import { User } from '../users';
 
 /** A keeper's question about one water test or observation; `askerId` is always the tank's owner. */
 @Entity({ name: 'question' })

@@ -1,5 +1,5 @@
-import type { QuestionSummaryView, SnapshotSubject } from '../../../shared/schemas/question-views';
-import type { QuestionStatus } from '../../../shared/schemas/question.schema';
+import type { QuestionSummaryView, SnapshotSubject } from '@shared/schemas/question-views';
+import type { QuestionStatus } from '@shared/schemas/question.schema';
 
 /** One row of the summary query (question.queries.ts), as PostgreSQL hands it back. */
 export interface SummaryRow {

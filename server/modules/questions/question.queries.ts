@@ -1,10 +1,9 @@
 import type { EntityManager, SelectQueryBuilder } from 'typeorm';
-import type { AppAbility } from '../../../shared/abilities';
-import type { ChartReading, ReplyView } from '../../../shared/schemas/question-views';
+import type { AppAbility } from '@shared/abilities';
+import type { ChartReading, ReplyView } from '@shared/schemas/question-views';
 import { errors } from '../../lib/app-error';
-import { whereAllowed } from '../access/ability-sql';
-import { WaterTest } from '../tanks/water-test.entity';
-import { valuesOf } from '../tanks/water-test.presenter';
+import { whereAllowed } from '../access';
+import { valuesOf, WaterTest } from '../tanks';
 import { Question } from './question.entity';
 import type { SummaryRow } from './question.presenter';
 

@@ -1,11 +1,11 @@
 import { Router, type Request } from 'express';
-import type { DataSource } from 'typeorm';
-import type { QuestionDetailView } from '../../../shared/schemas/question-views';
-import { askQuestionParams, askQuestionSchema, markAnsweredSchema, questionListQuery, questionParams, replySchema } from '../../../shared/schemas/question.schema';
-import { clubIdParams } from '../../../shared/schemas/common';
+import type { Deps } from '@server/deps';
+import type { QuestionDetailView } from '@shared/schemas/question-views';
+import { askQuestionParams, askQuestionSchema, markAnsweredSchema, questionListQuery, questionParams, replySchema } from '@shared/schemas/question.schema';
+import { clubIdParams } from '@shared/schemas/common';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { loadTank, requireActive } from '../tanks/tank-access';
+import { loadTank, requireActive } from '../tanks';
 import { mentionableFor } from './question-people';
 import type { Question } from './question.entity';
 import { presentSummary } from './question.presenter';
@@ -22,7 +22,7 @@ const subject = (q: Pick<Question, 'clubId' | 'askerId'>) => ({ clubId: q.clubId
  * Questions on a reading. The asker writes in their own thread ('update'); everyone else needs 'answer'
  * (current mentors, admins), so a past mentor can still read but no longer reply.
  */
-export function questionRouter(deps: { dataSource: DataSource }): Router {
+export function questionRouter(deps: Pick<Deps, 'dataSource' | 'notify' | 'tankChanges'>): Router {
   const { dataSource } = deps;
   const router = Router();
   const base = '/clubs/:clubId/questions';
@@ -34,7 +34,7 @@ export function questionRouter(deps: { dataSource: DataSource }): Router {
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'create', 'Question', { clubId: tank.clubId, askerId: tank.ownerId });
       requireActive(tank);
-      return askQuestion(tx, tank, body, author(req));
+      return askQuestion(tx, deps, tank, body, author(req));
     });
     const summary = presentSummary(await summaryOf(dataSource.manager, question.id));
     res.status(201).json({ question: { ...summary, body: question.body }, mentioned });
@@ -71,7 +71,7 @@ export function questionRouter(deps: { dataSource: DataSource }): Router {
     const saved = await dataSource.transaction(async (tx) => {
       const question = await loadQuestion(tx, params.clubId, params.questionId, true);
       authorize(req, question.askerId === me.id ? 'update' : 'answer', 'Question', subject(question));
-      return addReply(tx, question, body, me);
+      return addReply(tx, deps, question, body, me);
     });
     const { reply: r } = saved;
     res.status(201).json({
@@ -87,7 +87,7 @@ export function questionRouter(deps: { dataSource: DataSource }): Router {
     await dataSource.transaction(async (tx) => {
       const question = await loadQuestion(tx, params.clubId, params.questionId, true);
       authorize(req, 'update', 'Question', subject(question));
-      await setAnswered(tx, question, body.answered);
+      await setAnswered(tx, deps, question, body.answered);
     });
     res.json({ question: presentSummary(await summaryOf(dataSource.manager, params.questionId)) });
   });

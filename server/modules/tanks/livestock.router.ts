@@ -1,20 +1,18 @@
-import { tankChanged } from '../concerns/tank-changed';
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { createLivestockSchema, livestockListQuery, livestockParams, tankParams, updateLivestockSchema } from '../../../shared/schemas/tank.schema';
+import type { Deps } from '@server/deps';
+import { createLivestockSchema, livestockListQuery, livestockParams, tankParams, updateLivestockSchema } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { removePhotoFiles } from '../photos/photo-storage';
-import { storageKeysOf } from '../photos/photo.queries';
+import { removePhotoFiles } from '../photos';
 import { Livestock } from './livestock.entity';
-import { addLivestock, editLivestock, loadLivestock } from './livestock.service';
+import { addLivestock, deleteLivestock, editLivestock, loadLivestock } from './livestock.service';
 import { loadTank, ownedBy, requireActive } from './tank-access';
-import { TankEvent } from './tank-event.entity';
 import { presentLivestock } from './tank.presenter';
 
 /** Animals in a tank. Changing them is changing the tank, so the Tank rules apply. */
-export function livestockRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
-  const { dataSource, uploadsDir } = deps;
+export function livestockRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tankChanges'>): Router {
+  const { dataSource } = deps;
+  const { uploadsDir } = deps.config;
   const router = Router();
   const base = '/clubs/:clubId/tanks/:tankId/livestock';
 
@@ -36,7 +34,7 @@ export function livestockRouter(deps: { dataSource: DataSource; uploadsDir: stri
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'update', 'Tank', ownedBy(tank));
       requireActive(tank);
-      return addLivestock(tx, tank, body, viewerOf(req).user.id);
+      return addLivestock(tx, deps, tank, body, viewerOf(req).user.id);
     });
     res.status(201).json({ livestock: presentLivestock(row) });
   });
@@ -48,7 +46,7 @@ export function livestockRouter(deps: { dataSource: DataSource; uploadsDir: stri
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'update', 'Tank', ownedBy(tank));
       requireActive(tank);
-      return editLivestock(tx, await loadLivestock(tx, tank.id, params.livestockId), body, viewerOf(req).user.id);
+      return editLivestock(tx, deps, await loadLivestock(tx, tank.id, params.livestockId), body, viewerOf(req).user.id);
     });
     res.json({ livestock: presentLivestock(row) });
   });
@@ -61,12 +59,7 @@ export function livestockRouter(deps: { dataSource: DataSource; uploadsDir: stri
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'update', 'Tank', ownedBy(tank));
       requireActive(tank);
-      const row = await loadLivestock(tx, tank.id, params.livestockId);
-      const events = await tx.find(TankEvent, { where: { livestockId: row.id }, select: { id: true } });
-      const keys = await storageKeysOf(tx, { eventIds: events.map((e) => e.id) });
-      await tx.delete(Livestock, { id: row.id });
-      await tankChanged(tx, tank.id);
-      return keys;
+      return deleteLivestock(tx, deps, await loadLivestock(tx, tank.id, params.livestockId));
     });
     await removePhotoFiles(uploadsDir, photoKeys);
     res.status(204).end();

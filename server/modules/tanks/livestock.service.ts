@@ -1,8 +1,9 @@
-import { tankChanged } from '../concerns/tank-changed';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import type { createLivestockSchema, updateLivestockSchema } from '../../../shared/schemas/tank.schema';
+import type { Deps } from '@server/deps';
+import type { createLivestockSchema, updateLivestockSchema } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
+import { storageKeysOf } from '../photos';
 import { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
 import { TankEvent } from './tank-event.entity';
@@ -30,14 +31,16 @@ export async function syncLivestockEvents(tx: EntityManager, l: Livestock, actor
   else await tx.delete(TankEvent, { livestockId: l.id, kind: 'livestock-removed' });
 }
 
-export async function addLivestock(tx: EntityManager, tank: Tank, input: z.output<typeof createLivestockSchema>, actorId: string): Promise<Livestock> {
+type Changes = Pick<Deps, 'tankChanges'>;
+
+export async function addLivestock(tx: EntityManager, deps: Changes, tank: Tank, input: z.output<typeof createLivestockSchema>, actorId: string): Promise<Livestock> {
   const row = await tx.save(tx.create(Livestock, { ...input, tankId: tank.id, removedOn: null, removalReason: null }));
   await syncLivestockEvents(tx, row, actorId);
-  await tankChanged(tx, tank.id);
+  await deps.tankChanges.publish(tx, tank.id, 'livestock');
   return row;
 }
 
-export async function editLivestock(tx: EntityManager, row: Livestock, patch: z.output<typeof updateLivestockSchema>, actorId: string): Promise<Livestock> {
+export async function editLivestock(tx: EntityManager, deps: Changes, row: Livestock, patch: z.output<typeof updateLivestockSchema>, actorId: string): Promise<Livestock> {
   const next = { ...row, ...Object.fromEntries(Object.entries(patch).filter(([, v]) => v !== undefined)) } as Livestock;
   if (next.removedOn && next.removedOn < next.addedOn) {
     throw errors.badRequest('Check the dates.', [{ path: 'removedOn', message: 'The animals cannot leave before they arrived.' }]);
@@ -54,8 +57,17 @@ export async function editLivestock(tx: EntityManager, row: Livestock, patch: z.
   });
   const saved = await tx.findOneByOrFail(Livestock, { id: row.id });
   await syncLivestockEvents(tx, saved, actorId);
-  await tankChanged(tx, saved.tankId);
+  await deps.tankChanges.publish(tx, saved.tankId, 'livestock');
   return saved;
+}
+
+/** For an entry made by mistake: its timeline entries go with it. Returns the photo files to remove once committed. */
+export async function deleteLivestock(tx: EntityManager, deps: Changes, row: Livestock): Promise<string[]> {
+  const events = await tx.find(TankEvent, { where: { livestockId: row.id }, select: { id: true } });
+  const keys = await storageKeysOf(tx, { eventIds: events.map((e) => e.id) });
+  await tx.delete(Livestock, { id: row.id });
+  await deps.tankChanges.publish(tx, row.tankId, 'livestock');
+  return keys;
 }
 
 export async function loadLivestock(manager: EntityManager, tankId: string, livestockId: string): Promise<Livestock> {

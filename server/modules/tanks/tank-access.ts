@@ -1,11 +1,16 @@
 import type { EntityManager } from 'typeorm';
-import type { OwnedInClub } from '../../../shared/abilities';
+import type { OwnedInClub } from '@shared/abilities';
 import { errors } from '../../lib/app-error';
 import { Tank } from './tank.entity';
 
-/** The tank in this club, or 404: an id from another club is "not found" here. */
+/** The tank in this club, or null: an id from another club is "not found" here. */
+export async function findTank(manager: EntityManager, clubId: string, tankId: string): Promise<Tank | null> {
+  return manager.findOneBy(Tank, { id: tankId, clubId });
+}
+
+/** The tank in this club, or 404. */
 export async function loadTank(manager: EntityManager, clubId: string, tankId: string): Promise<Tank> {
-  const tank = await manager.findOneBy(Tank, { id: tankId, clubId });
+  const tank = await findTank(manager, clubId, tankId);
   if (!tank) throw errors.notFound('That tank');
   return tank;
 }

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { TankDetailView } from '../../../shared/schemas/tank-views';
-import { User } from '../users/user.entity';
+import { User } from '../users';
 import { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
 import { presentTankDetail } from './tank.presenter';

@@ -1,6 +1,6 @@
 import type { TankEventDetails } from '../../../shared/schemas/tank-event.schema';
 import type { TankEventView } from '../../../shared/schemas/tank-views';
-import type { PhotosByOwner } from '../photos/photo.queries';
+import type { PhotosByOwner } from '../photos';
 import type { TankEvent } from './tank-event.entity';
 
 export function presentTankEvent(e: TankEvent, photos: PhotosByOwner): TankEventView {

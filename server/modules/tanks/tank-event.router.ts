@@ -1,13 +1,13 @@
 import { Router } from 'express';
-import type { DataSource, EntityManager } from 'typeorm';
-import { createTankEventSchema, tankEventListQuery, tankEventParams, updateTankEventSchema } from '../../../shared/schemas/tank-event.schema';
-import { tankParams } from '../../../shared/schemas/tank.schema';
+import type { EntityManager } from 'typeorm';
+import type { Deps } from '@server/deps';
+import { createTankEventSchema, tankEventListQuery, tankEventParams, updateTankEventSchema } from '@shared/schemas/tank-event.schema';
+import { tankParams } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { removePhotoFiles } from '../photos/photo-storage';
-import { photosOf } from '../photos/photo.queries';
+import { audit } from '../audit';
+import { photosOf, removePhotoFiles } from '../photos';
 import { decodeCursor, pageOf } from './cursor';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { TankEvent } from './tank-event.entity';
@@ -15,8 +15,9 @@ import { presentTankEvent } from './tank-event.presenter';
 import { createTankEvent, deleteTankEvent, updateTankEvent } from './tank-event.service';
 
 /** Timeline entries other than water tests: water changes, doses, feeding, equipment, animals, observations. */
-export function tankEventRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
-  const { dataSource, uploadsDir } = deps;
+export function tankEventRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
+  const { dataSource } = deps;
+  const { uploadsDir } = deps.config;
   const router = Router();
   const base = '/clubs/:clubId/tanks/:tankId/events';
 

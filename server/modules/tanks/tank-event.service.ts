@@ -13,7 +13,7 @@ import {
 } from '../../../shared/schemas/tank-event.schema';
 import { errors } from '../../lib/app-error';
 import { parseInput } from '../../middleware/validate';
-import { storageKeysOf } from '../photos/photo.queries';
+import { storageKeysOf } from '../photos';
 import { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
 import { TankEvent } from './tank-event.entity';

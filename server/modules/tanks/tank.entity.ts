@@ -2,8 +2,8 @@ import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, Primary
 import type { SystemType } from '../../../shared/care/system-types';
 import type { TankPhase } from '../../../shared/care/types';
 import type { TankShape } from '../../../shared/chemistry/tank-volume';
-import { Club } from '../clubs/club.entity';
-import { User } from '../users/user.entity';
+import { Club } from '../clubs';
+import { User } from '../users';
 
 @Entity({ name: 'tank' })
 @Index('idx_tank_club_owner', ['clubId', 'ownerId'])

@@ -1,6 +1,7 @@
-import { In, type EntityManager } from 'typeorm';
-import type { AppAbility } from '../../../shared/abilities';
-import { whereAllowed } from '../access/ability-sql';
+import { In, IsNull, type EntityManager } from 'typeorm';
+import type { AppAbility } from '@shared/abilities';
+import type { SystemType, TankPhase } from '@shared/care';
+import { whereAllowed } from '../access';
 import { Livestock } from './livestock.entity';
 import { Tank } from './tank.entity';
 
@@ -40,4 +41,53 @@ export async function listTanks(manager: EntityManager, ability: AppAbility, clu
   const tanks = await qb.orderBy('t.name', 'ASC').addOrderBy('t.id', 'ASC').getMany();
   const stocked = await tanksWithLivestock(manager, tanks.map((t) => t.id));
   return tanks.map((tank) => ({ tank, ownerName: tank.owner?.displayName ?? '', hasLivestock: stocked.has(tank.id) }));
+}
+
+/** The few facts about a tank that announcing a change needs. */
+export type TankRef = Pick<Tank, 'id' | 'clubId' | 'ownerId' | 'name'>;
+
+export async function tankRef(manager: EntityManager, tankId: string): Promise<TankRef | null> {
+  return manager.findOne(Tank, { where: { id: tankId }, select: { id: true, clubId: true, ownerId: true, name: true } });
+}
+
+/** Ids of the club's tanks that follow a care profile and are not archived. */
+export async function liveTankIdsOnProfile(manager: EntityManager, clubId: string, careProfileKey: string): Promise<string[]> {
+  const rows = await manager.find(Tank, { where: { clubId, careProfileKey, archivedAt: IsNull() }, select: { id: true } });
+  return rows.map((r) => r.id);
+}
+
+/** A tank as the care engine reads it: its settings and whether animals live in it now. */
+export interface TankForCare {
+  id: string;
+  clubId: string;
+  ownerId: string;
+  name: string;
+  systemType: SystemType;
+  volumeL: number;
+  phase: TankPhase;
+  careProfileKey: string;
+  createdAt: string;
+  setUpOn: string | null;
+  hasLivestock: boolean;
+  archived: boolean;
+}
+
+export async function tankForCare(manager: EntityManager, tankId: string): Promise<TankForCare | null> {
+  const tank = await manager.findOneBy(Tank, { id: tankId });
+  if (!tank) return null;
+  const stocked = await tanksWithLivestock(manager, [tank.id]);
+  return {
+    id: tank.id,
+    clubId: tank.clubId,
+    ownerId: tank.ownerId,
+    name: tank.name,
+    systemType: tank.systemType,
+    volumeL: tank.volumeL,
+    phase: tank.phase,
+    careProfileKey: tank.careProfileKey,
+    createdAt: tank.createdAt.toISOString(),
+    setUpOn: tank.setUpOn,
+    hasLivestock: stocked.has(tank.id),
+    archived: tank.archivedAt !== null,
+  };
 }

@@ -1,11 +1,10 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
-import { clubIdParams } from '../../../shared/schemas/common';
-import { createTankSchema, tankListQuery, tankParams, updateTankSchema } from '../../../shared/schemas/tank.schema';
+import type { Deps } from '@server/deps';
+import { clubIdParams } from '@shared/schemas/common';
+import { createTankSchema, tankListQuery, tankParams, updateTankSchema } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { recomputeDerivedFrom } from './derived-refresh';
+import { audit } from '../audit';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { loadTankDetail } from './tank-detail';
 import { Tank } from './tank.entity';
@@ -13,7 +12,7 @@ import { presentTank } from './tank.presenter';
 import { listTanks } from './tank.queries';
 import { createTank, updateTank } from './tank.service';
 
-export function tankRouter(deps: { dataSource: DataSource }): Router {
+export function tankRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
   const { dataSource } = deps;
   const router = Router();
 
@@ -53,10 +52,7 @@ export function tankRouter(deps: { dataSource: DataSource }): Router {
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'update', 'Tank', ownedBy(tank));
       requireActive(tank);
-      const result = await updateTank(tx, tank, body);
-      // Free ammonia assumes a salinity from the kind of tank and its profile.
-      if (result.chemistryChanged) await recomputeDerivedFrom(tx, result.tank, null);
-      return result.tank;
+      return updateTank(tx, deps, tank, body);
     });
     res.json({ tank: await loadTankDetail(dataSource.manager, saved) });
   });

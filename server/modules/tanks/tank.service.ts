@@ -1,13 +1,14 @@
-import { tankChanged } from '../concerns/tank-changed';
 import type { EntityManager } from 'typeorm';
-import { defaultProfileFor } from '../../../shared/care/profiles';
-import type { SystemType } from '../../../shared/care/system-types';
-import { tankVolume, type TankVolumeInput as ChemistryVolumeInput } from '../../../shared/chemistry/tank-volume';
-import { convert } from '../../../shared/chemistry/units';
-import { CM_PER_INCH, MAX_TANK_VOLUME_L, type createTankSchema, type tankVolumeSchema, type updateTankSchema } from '../../../shared/schemas/tank.schema';
 import type { z } from 'zod';
+import type { Deps } from '@server/deps';
+import { defaultProfileFor } from '@shared/care/profiles';
+import type { SystemType } from '@shared/care/system-types';
+import { tankVolume, type TankVolumeInput as ChemistryVolumeInput } from '@shared/chemistry/tank-volume';
+import { convert } from '@shared/chemistry/units';
+import { CM_PER_INCH, MAX_TANK_VOLUME_L, type createTankSchema, type tankVolumeSchema, type updateTankSchema } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
-import { resolveProfile } from '../care/care-profile.service';
+import { resolveProfile } from '../care';
+import { recomputeDerivedFrom } from './derived-refresh';
 import { Tank } from './tank.entity';
 
 type VolumeInput = z.output<typeof tankVolumeSchema>;
@@ -79,8 +80,8 @@ export async function createTank(tx: EntityManager, clubId: string, ownerId: str
   return tx.save(row);
 }
 
-/** Applies an edit; says whether what free ammonia depends on (kind of tank, profile) changed. */
-export async function updateTank(tx: EntityManager, tank: Tank, input: z.output<typeof updateTankSchema>): Promise<{ tank: Tank; chemistryChanged: boolean }> {
+/** Applies an edit; when what free ammonia depends on (kind of tank, profile) changed, every test's is worked out again. */
+export async function updateTank(tx: EntityManager, deps: Pick<Deps, 'tankChanges'>, tank: Tank, input: z.output<typeof updateTankSchema>): Promise<Tank> {
   const { volume, careProfileKey, systemType, ...rest } = input;
   const nextType = systemType ?? tank.systemType;
   let nextKey = careProfileKey === undefined ? tank.careProfileKey : await resolveCareProfileKey(tx, tank.clubId, nextType, careProfileKey);
@@ -97,7 +98,9 @@ export async function updateTank(tx: EntityManager, tank: Tank, input: z.output<
   };
   await tx.update(Tank, { id: tank.id }, changes);
   const updated = await tx.findOneByOrFail(Tank, { id: tank.id });
+  // Free ammonia assumes a salinity from the kind of tank and its profile.
+  if (nextType !== tank.systemType || nextKey !== tank.careProfileKey) await recomputeDerivedFrom(tx, updated, null);
   // Phase, volume, kind or profile all change what the readings mean.
-  await tankChanged(tx, tank.id);
-  return { tank: updated, chemistryChanged: nextType !== tank.systemType || nextKey !== tank.careProfileKey };
+  await deps.tankChanges.publish(tx, tank.id, 'settings');
+  return updated;
 }

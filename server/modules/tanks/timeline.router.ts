@@ -1,11 +1,12 @@
 import { Router } from 'express';
-import { In, type DataSource } from 'typeorm';
-import { timelineQuery } from '../../../shared/schemas/tank-event.schema';
-import { tankParams } from '../../../shared/schemas/tank.schema';
-import type { TimelineItem } from '../../../shared/schemas/tank-views';
+import { In } from 'typeorm';
+import type { Deps } from '@server/deps';
+import { timelineQuery } from '@shared/schemas/tank-event.schema';
+import { tankParams } from '@shared/schemas/tank.schema';
+import type { TimelineItem } from '@shared/schemas/tank-views';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn } from '../../middleware/viewer';
-import { photosOf } from '../photos/photo.queries';
+import { photosOf } from '../photos';
 import { decodeCursor, pageOf } from './cursor';
 import { loadTank, ownedBy } from './tank-access';
 import { TankEvent } from './tank-event.entity';
@@ -20,7 +21,7 @@ interface Slot {
 }
 
 /** Water tests and events of one tank, newest first, one page at a time. */
-export function timelineRouter(deps: { dataSource: DataSource }): Router {
+export function timelineRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const { dataSource } = deps;
   const router = Router();
 

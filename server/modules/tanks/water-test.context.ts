@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import { FREE_AMMONIA_INPUTS, type LastKnown, type TankChemistryContext } from '../../../shared/readings/free-ammonia';
-import { resolveProfile } from '../care/care-profile.service';
+import { resolveProfile } from '../care';
 import type { Position } from './cursor';
 import type { Tank } from './tank.entity';
 import { VALUE_COLUMNS } from './water-test.entity';

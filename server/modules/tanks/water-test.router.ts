@@ -1,13 +1,13 @@
 import { Router } from 'express';
 import type { DataSource } from 'typeorm';
-import { tankParams } from '../../../shared/schemas/tank.schema';
-import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, waterTestParams } from '../../../shared/schemas/water-test.schema';
+import type { Deps } from '@server/deps';
+import { tankParams } from '@shared/schemas/tank.schema';
+import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, waterTestParams } from '@shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit/audit';
-import { removePhotoFiles } from '../photos/photo-storage';
-import { photosOf } from '../photos/photo.queries';
+import { audit } from '../audit';
+import { photosOf, removePhotoFiles } from '../photos';
 import { decodeCursor, pageOf } from './cursor';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { WaterTest } from './water-test.entity';
@@ -18,8 +18,9 @@ import { createWaterTest, deleteWaterTest, updateWaterTest } from './water-test.
  * Water tests of one tank. Deleting is for good (a mistyped test should vanish from charts and evaluation) and only
  * for the tank's owner; archiving the tank is how history is kept.
  */
-export function waterTestRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
-  const { dataSource, uploadsDir } = deps;
+export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tankChanges'>): Router {
+  const { dataSource } = deps;
+  const { uploadsDir } = deps.config;
   const router = Router();
   const base = '/clubs/:clubId/tanks/:tankId/water-tests';
 
@@ -52,7 +53,7 @@ export function waterTestRouter(deps: { dataSource: DataSource; uploadsDir: stri
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'create', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      return createWaterTest(tx, tank, body, viewerOf(req).user.id);
+      return createWaterTest(tx, deps, tank, body, viewerOf(req).user.id);
     });
     res.status(201).json({ waterTest: presentWaterTest(saved.test, () => []), warnings: saved.warnings });
   });
@@ -74,7 +75,7 @@ export function waterTestRouter(deps: { dataSource: DataSource; uploadsDir: stri
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'update', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      return updateWaterTest(tx, tank, await loadTest(tx, tank.id, params.testId), body);
+      return updateWaterTest(tx, deps, tank, await loadTest(tx, tank.id, params.testId), body);
     });
     const photos = await photosOf(dataSource.manager, params.clubId, { waterTestIds: [saved.test.id] });
     res.json({ waterTest: presentWaterTest(saved.test, photos), warnings: saved.warnings });
@@ -87,7 +88,7 @@ export function waterTestRouter(deps: { dataSource: DataSource; uploadsDir: stri
       authorize(req, 'delete', 'WaterTest', ownedBy(tank));
       requireActive(tank);
       const test = await loadTest(tx, tank.id, params.testId);
-      const keys = await deleteWaterTest(tx, tank, test);
+      const keys = await deleteWaterTest(tx, deps, tank, test);
       await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'water-test.deleted', targetType: 'WaterTest', targetId: test.id, details: { tankId: tank.id, takenAt: test.takenAt.toISOString() } });
       return keys;
     });

@@ -6,13 +6,12 @@ import type { ReadingIssue } from '../../../shared/readings/issues';
 import { normalizeWaterTest, type NormalizedWaterTest } from '../../../shared/readings/normalize-water-test';
 import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '../../../shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
-import { storageKeysOf } from '../photos/photo.queries';
+import type { Deps } from '@server/deps';
+import { storageKeysOf } from '../photos';
 import { recomputeDerivedFrom } from './derived-refresh';
 import type { Tank } from './tank.entity';
 import { chemistryOf, lastKnownBefore } from './water-test.context';
 import { VALUE_COLUMNS, WaterTest } from './water-test.entity';
-import { tankChanged } from '../concerns/tank-changed';
-import { onWaterTestSaved } from './water-test.events';
 
 export interface SavedWaterTest {
   test: WaterTest;
@@ -37,8 +36,11 @@ async function normalizeFor(tx: EntityManager, tank: Tank, id: string, takenAt: 
   return normalized;
 }
 
+type Changes = Pick<Deps, 'tankChanges'>;
+
 export async function createWaterTest(
   tx: EntityManager,
+  deps: Changes,
   tank: Tank,
   input: z.output<typeof createWaterTestSchema>,
   actorId: string,
@@ -50,13 +52,14 @@ export async function createWaterTest(
   // Later tests may lean on this one's temperature, pH or salinity.
   await recomputeDerivedFrom(tx, tank, new Date(input.takenAt));
   const test = await tx.findOneByOrFail(WaterTest, { id });
-  await onWaterTestSaved(tx, test);
+  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return { test, warnings: normalized.warnings };
 }
 
 /** Merges the edit into the stored entries, then normalizes the whole test again (derived values included). */
 export async function updateWaterTest(
   tx: EntityManager,
+  deps: Changes,
   tank: Tank,
   test: WaterTest,
   patch: z.output<typeof updateWaterTestSchema>,
@@ -76,15 +79,15 @@ export async function updateWaterTest(
   const earliest = Math.min(test.takenAt.getTime(), Date.parse(takenAt));
   await recomputeDerivedFrom(tx, tank, new Date(earliest));
   const saved = await tx.findOneByOrFail(WaterTest, { id: test.id });
-  await onWaterTestSaved(tx, saved);
+  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return { test: saved, warnings: normalized.warnings };
 }
 
 /** Deletes for good (photos included); returns the photo files to remove once committed. */
-export async function deleteWaterTest(tx: EntityManager, tank: Tank, test: WaterTest): Promise<string[]> {
+export async function deleteWaterTest(tx: EntityManager, deps: Changes, tank: Tank, test: WaterTest): Promise<string[]> {
   const keys = await storageKeysOf(tx, { waterTestIds: [test.id] });
   await tx.delete(WaterTest, { id: test.id });
   await recomputeDerivedFrom(tx, tank, test.takenAt);
-  await tankChanged(tx, tank.id);
+  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return keys;
 }

@@ -27,7 +27,7 @@ describe('authorization matrix', () => {
       const outcome: Partial<Record<Persona, number>> = {};
       for (const persona of PERSONAS) {
         await resetDatabase(t.dataSource);
-        const world = await buildWorld(t.dataSource, t.config.uploadsDir);
+        const world = await buildWorld(t.deps);
         const client = persona === 'anonymous' ? new Client(t.app) : await signedIn(t.app, world.people[persona].user.email);
         const { path, body, files } = row.request(world);
         const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'patch' | 'delete';

@@ -1,7 +1,7 @@
-import type { DataSource } from 'typeorm';
-import { copyProfile } from '../../../server/modules/care/care-profile.service';
-import { Invite } from '../../../server/modules/invites/invite.entity';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
+import type { Deps } from '@server/deps';
+import { copyProfile } from '@server/modules/care';
+import { Invite } from '@server/modules/invites';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
 import { tankWithHistory } from './world-tanks';
 import { mentorshipWorld } from './world-mentorship';
 import { questionWorld } from './world-questions';
@@ -14,7 +14,8 @@ export type Persona = (typeof PERSONAS)[number];
  * member = a mentee, mentor = that mentee's mentor, otherMentor = a mentor of the same club without that mentee
  * (they mentor `spare`). `tank` is the member's, `spareTank` spare's, each with a test, an animal, an event and a photo.
  */
-export async function buildWorld(ds: DataSource, uploadsDir: string) {
+export async function buildWorld(deps: Deps) {
+  const ds = deps.dataSource;
   const club = await makeClub(ds, 'Matrix Club');
   const elsewhere = await makeClub(ds, 'Other Club');
   const member = await makeMember(ds, club, 'Mina Member');
@@ -32,10 +33,10 @@ export async function buildWorld(ds: DataSource, uploadsDir: string) {
   });
   const careProfile = await ds.transaction((tx) => copyProfile(tx, { clubId: club.id, basedOn: 'seahorse-large', name: 'Matrix seahorses', actorId: admin.user.id }));
   // The mentee's tank (read by their mentor and admins) and spare's (read by otherMentor, spare's mentor).
-  const tank = await tankWithHistory(ds, club.id, member.user.id, 'Mina reef', uploadsDir);
-  const spareTank = await tankWithHistory(ds, club.id, spare.user.id, 'Spare reef', uploadsDir);
+  const tank = await tankWithHistory(deps, club.id, member.user.id, 'Mina reef');
+  const spareTank = await tankWithHistory(deps, club.id, spare.user.id, 'Spare reef');
   const mentorship = await mentorshipWorld(ds, club, { member: member.user, mentor: mentor.user });
-  const questions = await questionWorld(ds, { member: member.user, tank: tank.tank, waterTest: tank.waterTest });
+  const questions = await questionWorld(deps, { member: member.user, tank: tank.tank, waterTest: tank.waterTest });
   // Animals went in without a sign-off, so the member's tank has at least that concern open.
   const concerns: { id: string }[] = await ds.query(`SELECT id FROM concern WHERE tank_id = $1 AND status <> 'resolved' ORDER BY raised_at LIMIT 1`, [tank.tank.id]);
   const concernId = concerns[0]!.id;

@@ -4,7 +4,7 @@ import { runDigest } from '../../../server/modules/notifications/digest';
 import { DIGEST_CRON, DIGEST_QUEUE, startDigestScheduler } from '../../../server/modules/notifications/digest-scheduler';
 import { NotificationDigest } from '../../../server/modules/notifications/notification-digest.entity';
 import { Notification } from '../../../server/modules/notifications/notification.entity';
-import { notify, type NotifyInput } from '../../../server/modules/notifications/notify';
+import type { NotifyInput } from '../../../server/modules/notifications';
 import { setEmailModes } from '../../../server/modules/notifications/preferences';
 import { createLogger } from '../../../server/lib/logger';
 import { resetDatabase } from '../../helpers/db';
@@ -56,7 +56,7 @@ describe('the daily digest, with the clock in the test’s hands', () => {
   }
 
   const send = (userIds: string[], input: Partial<NotifyInput> = {}) =>
-    t.dataSource.transaction((tx) => notify(tx, { userIds, clubId: club.id, kind: 'question.asked', title: 'A question', link: '/desk', ...input }));
+    t.dataSource.transaction((tx) => t.deps.notify(tx, { userIds, clubId: club.id, kind: 'question.asked', title: 'A question', link: '/desk', ...input }));
 
   it('when two workers run the digest at the same moment, then each person gets exactly one e-mail listing their notifications', async () => {
     await send([maya.user.id, milo.user.id], { title: 'Ben asked: is 40 ppm nitrate OK?', body: 'Tank: Ben’s 60 L community', link: '/tanks/b1' });

@@ -2,7 +2,7 @@ import request from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Club } from '../../../server/modules/clubs/club.entity';
 import { Notification } from '../../../server/modules/notifications/notification.entity';
-import { notify, type NotifyInput } from '../../../server/modules/notifications/notify';
+import type { NotifyInput } from '../../../server/modules/notifications';
 import { emailModesOf } from '../../../server/modules/notifications/preferences';
 import { signUnsubscribeToken } from '../../../server/modules/notifications/unsubscribe-token';
 import { resetDatabase } from '../../helpers/db';
@@ -29,7 +29,7 @@ describe('notification e-mails and unsubscribing', () => {
 
   const send = (input: Partial<NotifyInput> = {}) =>
     t.dataSource.transaction((tx) =>
-      notify(tx, {
+      t.deps.notify(tx, {
         userIds: [mentor.user.id],
         clubId: club.id,
         kind: 'concern.urgent',
@@ -63,7 +63,7 @@ describe('notification e-mails and unsubscribing', () => {
   it('when the notifying transaction rolls back, then its e-mail is never sent either', async () => {
     await t.dataSource
       .transaction(async (tx) => {
-        await notify(tx, { userIds: [mentor.user.id], clubId: club.id, kind: 'concern.urgent', title: 'Rolled back', link: '/' });
+        await t.deps.notify(tx, { userIds: [mentor.user.id], clubId: club.id, kind: 'concern.urgent', title: 'Rolled back', link: '/' });
         throw new Error('the caller failed');
       })
       .catch(() => undefined);

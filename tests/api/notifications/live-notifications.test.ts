@@ -3,7 +3,6 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { NotificationView } from '../../../shared/schemas/notification-views';
 import { startServer, type RunningServer } from '../../../server/boot';
 import type { Club } from '../../../server/modules/clubs/club.entity';
-import { notify } from '../../../server/modules/notifications/notify';
 import { resetDatabase } from '../../helpers/db';
 import { makeClub, makeMember } from '../../helpers/factories';
 import { signedIn } from '../../helpers/http';
@@ -62,7 +61,7 @@ describe('notifications over the socket', () => {
     const ottoGot = listen(await socketOf(otto.user.email));
     const sentAt = Date.now();
     const [row] = await server.dataSource.transaction((tx) =>
-      notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'Milo mentioned you', body: 'Look at this nitrate.', link: '/tanks/t1' }),
+      server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'Milo mentioned you', body: 'Look at this nitrate.', link: '/tanks/t1' }),
     );
     expect(await until(() => minaGot.length === 1, 1_000)).toBe(true);
     expect(Date.now() - sentAt).toBeLessThan(1_000);
@@ -77,20 +76,20 @@ describe('notifications over the socket', () => {
     const minaGot = listen(await socketOf(mina.user.email));
     await server.dataSource
       .transaction(async (tx) => {
-        await notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'never happened', link: '/' });
+        await server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'never happened', link: '/' });
         throw new Error('roll back');
       })
       .catch(() => undefined);
     // A savepoint rolled back inside a transaction that commits takes its notification with it.
     await server.dataSource.transaction(async (tx) => {
-      await tx.transaction((inner) => notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a released savepoint', link: '/' }));
+      await tx.transaction((inner) => server.deps.notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a released savepoint', link: '/' }));
       await tx
         .transaction(async (inner) => {
-          await notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a rolled-back savepoint', link: '/' });
+          await server.deps.notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a rolled-back savepoint', link: '/' });
           throw new Error('roll back the savepoint');
         })
         .catch(() => undefined);
-      await notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'this one did', link: '/' });
+      await server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'this one did', link: '/' });
     });
     expect(await until(() => minaGot.length >= 2, 1_000)).toBe(true);
     await new Promise((r) => setTimeout(r, 300));

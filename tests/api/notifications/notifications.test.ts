@@ -3,7 +3,7 @@ import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import { DEFAULT_EMAIL_MODES } from '../../../shared/constants/notifications';
 import type { Club } from '../../../server/modules/clubs/club.entity';
 import { Notification } from '../../../server/modules/notifications/notification.entity';
-import { notify, type NotifyInput } from '../../../server/modules/notifications/notify';
+import type { NotifyInput } from '../../../server/modules/notifications';
 import { resetDatabase } from '../../helpers/db';
 import { makeClub, makeMember } from '../../helpers/factories';
 import { signedIn, type Client } from '../../helpers/http';
@@ -31,7 +31,7 @@ describe('in-app notifications', () => {
 
   const send = (input: Partial<NotifyInput> = {}) =>
     t.dataSource.transaction((tx) =>
-      notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'question.answered', title: 'Milo answered your question', body: 'Nitrate at 20 is fine.', link: '/tanks/abc', ...input }),
+      t.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'question.answered', title: 'Milo answered your question', body: 'Nitrate at 20 is fine.', link: '/tanks/abc', ...input }),
     );
 
   it('when notified, then only that person lists it, with the club name and an unread count', async () => {
@@ -93,7 +93,7 @@ describe('in-app notifications', () => {
   it('when the caller’s transaction rolls back, or the person is not an active member, then nothing is stored', async () => {
     await expect(
       t.dataSource.transaction(async (tx) => {
-        await notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'x', link: '/' });
+        await t.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'x', link: '/' });
         throw new Error('the caller failed');
       }),
     ).rejects.toThrow('the caller failed');

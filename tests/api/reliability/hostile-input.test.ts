@@ -65,7 +65,7 @@ describe('hostile input over every route', () => {
     await new Promise<void>((resolve) => server.listen(0, '127.0.0.1', resolve));
     base = `http://127.0.0.1:${(server.address() as AddressInfo).port}`;
     await resetDatabase(t.dataSource);
-    world = await buildWorld(t.dataSource, t.config.uploadsDir);
+    world = await buildWorld(t.deps);
     for (const p of SIGNED_IN) clients.set(p, await signedIn(base, world.people[p].user.email));
     watch = await watchRows(t.dataSource, { ignore: WRITTEN_WHEN_REFUSED });
   }, 60_000);

@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { cycleStage } from '../../../shared/care';
 import { seedDemoClub } from '../../../server/db/seeds/demo-club';
-import { loadHistory } from '../../../server/modules/concerns/tank-care-data';
+import { careHistory } from '../../../server/modules/tanks';
 import { resetDatabase } from '../../helpers/db';
 import { signedIn } from '../../helpers/http';
 import { createTestApp, type TestApp } from '../../helpers/test-app';
@@ -36,7 +36,7 @@ describe('the demo club seed', () => {
 
   it('when the cycling seahorse tank is read, then it is past the ammonia peak with nitrite on the way down', async () => {
     const [row] = await t.dataSource.query(`SELECT id FROM tank WHERE name = 'Seagrass corner'`);
-    const history = await loadHistory(t.dataSource.manager, row.id, new Date());
+    const history = await careHistory(t.dataSource.manager, row.id, new Date());
     // The seed's nitrite peaked on day 17 of 28 and ammonia has read 0 since day 17 (see demo-tanks.ts).
     expect(cycleStage(history).stage).toBe('nitrite-falling');
   });

@@ -1,22 +1,19 @@
 import { readFile } from 'node:fs/promises';
 import { Router, type RequestHandler } from 'express';
-import type { DataSource } from 'typeorm';
-import { photoParams, photoUploadFieldsSchema, tankParams, tankPhotoListQuery } from '../../../shared/schemas/photo.schema';
+import type { Deps } from '@server/deps';
+import { photoParams, photoUploadFieldsSchema, tankParams, tankPhotoListQuery } from '@shared/schemas/photo.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, parseInput, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { loadTank, ownedBy, requireActive } from '../tanks/tank-access';
-import type { Tank } from '../tanks/tank.entity';
-import { Photo } from './photo.entity';
-import { presentPhoto } from './photo.presenter';
-import { processPhoto } from './photo-processing';
-import { ensureUploadsDir, photoPath, removePhotoFiles, type PhotoSize } from './photo-storage';
-import { receivePhotos } from './photo-upload';
-import { storePhotos } from './photo.service';
+import { deletePhotoRow, ensureUploadsDir, findPhoto, photoPath, photosOfTank, presentPhoto, receivePhotos, removePhotoFiles, type PhotoSize } from '../photos';
+import { findTank, loadTank, ownedBy, requireActive } from './tank-access';
+import type { Tank } from './tank.entity';
+import { attachPhotos } from './tank-photo.service';
 
 /** Photos of a tank, a water test or an event, served only to people who may read the tank. */
-export function photoRouter(deps: { dataSource: DataSource; uploadsDir: string }): Router {
-  const { dataSource, uploadsDir } = deps;
+export function photoRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
+  const { dataSource } = deps;
+  const { uploadsDir } = deps.config;
   ensureUploadsDir(uploadsDir);
   const router = Router();
   const tankPhotos = '/clubs/:clubId/tanks/:tankId/photos';
@@ -26,10 +23,7 @@ export function photoRouter(deps: { dataSource: DataSource; uploadsDir: string }
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'Photo', ownedBy(tank));
-    const rows = await dataSource.manager.find(Photo, {
-      where: { tankId: tank.id, ...(query.waterTestId ? { waterTestId: query.waterTestId } : {}), ...(query.eventId ? { eventId: query.eventId } : {}) },
-      order: { createdAt: 'DESC', id: 'DESC' },
-    });
+    const rows = await photosOfTank(dataSource.manager, tank.id, query);
     res.json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
   });
 
@@ -47,22 +41,17 @@ export function photoRouter(deps: { dataSource: DataSource; uploadsDir: string }
     const tank = res.locals.tank as Tank;
     const fields = parseInput(photoUploadFieldsSchema, { ...req.body }, 'body');
     const files = (req.files ?? []) as Express.Multer.File[];
-    if (files.length === 0) throw errors.badRequest('Attach at least one photo.', [{ path: 'photos', message: 'Choose a JPEG, PNG or WebP picture.' }]);
-    const processed = [];
-    for (const [i, file] of files.entries()) processed.push(await processPhoto(file, i));
-    const rows = await storePhotos(dataSource, uploadsDir, tank, fields, processed, viewerOf(req).user.id);
+    const rows = await attachPhotos(dataSource, uploadsDir, tank, fields, files, viewerOf(req).user.id);
     res.status(201).json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
   });
 
   const photo = { params: photoParams };
+  /** The photo and its tank, when the tank is in this club. */
   const loadPhoto = async (clubId: string, photoId: string) => {
-    const row = await dataSource.manager
-      .createQueryBuilder(Photo, 'p')
-      .innerJoinAndSelect('p.tank', 't')
-      .where('p.id = :photoId AND t.club_id = :clubId', { photoId, clubId })
-      .getOne();
-    if (!row?.tank) throw errors.notFound('That photo');
-    return { photo: row, tank: row.tank };
+    const row = await findPhoto(dataSource.manager, photoId);
+    const tank = row ? await findTank(dataSource.manager, clubId, row.tankId) : null;
+    if (!row || !tank) throw errors.notFound('That photo');
+    return { photo: row, tank };
   };
 
   const serve = (size: PhotoSize): RequestHandler => async (req, res) => {
@@ -91,7 +80,7 @@ export function photoRouter(deps: { dataSource: DataSource; uploadsDir: string }
     const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
     authorize(req, 'delete', 'Photo', ownedBy(tank));
     requireActive(tank);
-    await dataSource.manager.delete(Photo, { id: row.id });
+    await deletePhotoRow(dataSource.manager, row.id);
     await removePhotoFiles(uploadsDir, [row.storageKey]);
     res.status(204).end();
   });

@@ -1,0 +1,2 @@
+/** Whether the app and its database are up. */
+export { healthRouter } from './health.router';

@@ -1,0 +1,32 @@
+/**
+ * Tanks: a keeper's tanks and everything logged on them (animals, water tests, events, photos), and the tank-changed
+ * seam every change to a tank goes through.
+ */
+export { Livestock } from './livestock.entity';
+export { TankEvent } from './tank-event.entity';
+export { Tank } from './tank.entity';
+export { WaterTest } from './water-test.entity';
+
+export { livestockRouter } from './livestock.router';
+export { photoRouter } from './photo.router';
+export { tankEventRouter } from './tank-event.router';
+export { tankRouter } from './tank.router';
+export { timelineRouter } from './timeline.router';
+export { waterTestRouter } from './water-test.router';
+
+export { NOTHING_NEW, TankChanges, type JudgedConcern, type TankChange, type TankChangeCause, type TankChangeListener, type TankJudge, type TankVerdict } from './tank-changed';
+export { findTank, loadTank, ownedBy, requireActive } from './tank-access';
+export { listTanks, tankForCare, tankRef, type TankForCare, type TankRef } from './tank.queries';
+export { careHistory } from './water-test.queries';
+export { lastSourceNitrate } from './tank-event.queries';
+export { valuesOf } from './water-test.presenter';
+
+export { addLivestock } from './livestock.service';
+export { createTankEvent } from './tank-event.service';
+export { createTank } from './tank.service';
+export { attachPhotos } from './tank-photo.service';
+export { createWaterTest } from './water-test.service';
+// The CSV import saves through the same steps as the form (until both share insertWaterTests).
+export { recomputeDerivedFrom } from './derived-refresh';
+export { chemistryOf } from './water-test.context';
+export { columnsOf } from './water-test.service';

@@ -1,0 +1,3 @@
+/** People with an account. */
+export { User } from './user.entity';
+export { presentUser } from './user.presenter';
