@@ -30,12 +30,25 @@ export function unstorableTextPaths(root: unknown, prefix: string): string[] {
   return found;
 }
 
+/** Path segments as the router will decode them into params (a malformed escape is left to the router's own 400). */
+function unstorablePathSegments(path: string): string[] {
+  return path.split('/').some((segment) => {
+    try {
+      return !storable(decodeURIComponent(segment));
+    } catch {
+      return false;
+    }
+  })
+    ? ['params']
+    : [];
+}
+
 /**
  * One rule for every route, before any handler sees the input: text the database cannot store is a 400 naming the
- * field, never a failed INSERT answered with a 500 (ASVS 1.2.x, 2.2.1).
+ * field, never a failed query answered with a 500 (ASVS 1.2.x, 2.2.1).
  */
 export const rejectUnstorableText: RequestHandler = (req, _res, next) => {
-  const paths = [...unstorableTextPaths(req.body, ''), ...unstorableTextPaths(req.query, 'query')];
+  const paths = [...unstorablePathSegments(req.path), ...unstorableTextPaths(req.body, ''), ...unstorableTextPaths(req.query, 'query')];
   if (!paths.length) return next();
   const issues: FieldIssue[] = [...new Set(paths)].map((path) => ({ path, message: UNSTORABLE }));
   next(errors.badRequest('Some fields need attention.', issues));

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { unstorableTextPaths } from '../../../server/middleware/storable-text';
+import type { Request } from 'express';
+import { rejectUnstorableText, unstorableTextPaths } from '../../../server/middleware/storable-text';
 
 describe('text PostgreSQL cannot store', () => {
   it('when a value or a key holds NUL or an unpaired surrogate, then its path is named', () => {
@@ -15,5 +16,16 @@ describe('text PostgreSQL cannot store', () => {
     let deep: unknown = '\u0000';
     for (let i = 0; i < 100_000; i++) deep = [deep];
     expect(unstorableTextPaths({ a: deep }, 'query')).toHaveLength(1);
+  });
+
+  it('when a path segment decodes to NUL, then the request is refused naming the params; a malformed escape is left to the router', () => {
+    const outcome = (path: string) => {
+      let passed: unknown = 'not called';
+      rejectUnstorableText({ path, body: undefined, query: {} } as unknown as Request, {} as never, (err?: unknown) => (passed = err));
+      return passed as { status?: number; issues?: { path: string }[] } | undefined;
+    };
+    expect(outcome('/clubs/x/care-profiles/%00')).toMatchObject({ status: 400, issues: [{ path: 'params' }] });
+    expect(outcome('/clubs/x/care-profiles/%E0%A4%A')).toBeUndefined();
+    expect(outcome('/clubs/x/care-profiles/reef%20tank')).toBeUndefined();
   });
 });
