@@ -12,6 +12,8 @@ import { enableAfterCommit } from './db/after-commit';
 import type { Deps } from './deps';
 import type { Mailer } from './mail/mailer';
 import { csrfProtection } from './middleware/csrf';
+import { createRateLimits } from './middleware/rate-limits';
+import { PostgresRateLimitStore } from './lib/rate-limit-store';
 import { rejectUnstorableText } from './middleware/storable-text';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
@@ -51,7 +53,8 @@ export function buildDeps(infra: Pick<AppInfrastructure, 'config' | 'dataSource'
   enableAfterCommit(dataSource);
   const notify = createNotifier({ hub, mailer, config });
   const tankChanges = new TankChanges(judgeConcerns).listen(tellMentorsOfConcerns(notify)).listen(announceTankChanges(hub));
-  return { config, dataSource, mailer, hub, notify, tankChanges };
+  const rateLimits = createRateLimits((identifier) => new PostgresRateLimitStore(dataSource, identifier));
+  return { config, dataSource, mailer, hub, notify, tankChanges, rateLimits };
 }
 
 export interface CreatedApp {
@@ -87,7 +90,7 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   const deps = buildDeps(infra);
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', false);
+  app.set('trust proxy', config.trustProxy);
   app.use(
     pinoHttp({
       logger,

@@ -10,6 +10,7 @@ import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
 import { answerUnreadableRequests } from './lib/client-error';
 import { createLogger } from './lib/logger';
+import { pruneRateLimitHits } from './lib/rate-limit-store';
 import { startMail } from './mail/start-mail';
 import { startDigestScheduler } from './modules/notifications/digest-scheduler';
 import { RealtimeHub } from './realtime/hub';
@@ -47,10 +48,13 @@ export async function startServer(config: Config): Promise<RunningServer> {
     server.listen(config.port, config.host, () => resolve());
   });
   const { port } = server.address() as AddressInfo;
+  // Every instance may prune: the DELETE only removes windows that ended an hour ago.
+  const pruning = setInterval(() => void pruneRateLimitHits(dataSource).catch(() => undefined), 3_600_000).unref();
 
   let closing: Promise<void> | undefined;
   const close = () =>
     (closing ??= (async () => {
+      clearInterval(pruning);
       await new Promise<void>((resolve) => io.close(() => resolve()));
       await new Promise<void>((resolve) => {
         server.close(() => resolve());

@@ -8,7 +8,6 @@ import { hashPassword, verifyPassword } from '../../lib/passwords';
 import { hashToken, newToken } from '../../lib/tokens';
 import { passwordResetMail } from '../../mail/templates';
 import { csrfTokenFor } from '../../middleware/csrf';
-import { resetRequestLimiters, signInLimiters, tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
 import { audit } from '../audit';
@@ -18,7 +17,7 @@ import { destroySession, endSessionsOfUser, startSignedInSession } from './sessi
 
 const BAD_CREDENTIALS = 'That e-mail and password do not match an account.';
 
-export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub'>): Router {
+export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub' | 'rateLimits'>): Router {
   const { dataSource, mailer, config, hub } = deps;
   const users = dataSource.getRepository(User);
   const router = Router();
@@ -29,7 +28,7 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const signIn = { body: signInSchema };
-  router.post('/session', ...signInLimiters(), validate(signIn), async (req, res) => {
+  router.post('/session', ...deps.rateLimits.signIn(), validate(signIn), async (req, res) => {
     const { email, password } = inputOf(res, signIn).body;
     const user = await users.createQueryBuilder('u').where('lower(u.email) = :email', { email }).getOne();
     const ok = await verifyPassword(user?.passwordHash, password);
@@ -72,7 +71,7 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const resetRequest = { body: requestPasswordResetSchema };
-  router.post('/password-resets', ...resetRequestLimiters(), validate(resetRequest), async (req, res) => {
+  router.post('/password-resets', ...deps.rateLimits.resetRequest(), validate(resetRequest), async (req, res) => {
     const { email } = inputOf(res, resetRequest).body;
     const user = await users.createQueryBuilder('u').where('lower(u.email) = :email', { email }).getOne();
     if (user && !user.disabledAt) {
@@ -91,7 +90,7 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const resetConfirm = { body: resetPasswordSchema };
-  router.post('/password-resets/confirm', tokenLimiter('reset-confirm'), validate(resetConfirm), async (req, res) => {
+  router.post('/password-resets/confirm', deps.rateLimits.token('reset-confirm'), validate(resetConfirm), async (req, res) => {
     const { token, password } = inputOf(res, resetConfirm).body;
     const passwordHash = await hashPassword(password);
     const userId = await dataSource.transaction(async (tx) => {

@@ -5,7 +5,6 @@ import { createInviteSchema, inviteParams } from '../../../shared/schemas/club.s
 import { clubIdParams } from '../../../shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { hashPassword } from '../../lib/passwords';
-import { tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
 import { whereAllowed } from '../access';
@@ -16,7 +15,7 @@ import { presentUser, User } from '../users';
 import { Invite } from './invite.entity';
 import { findUsableInvite, issueInvite, presentInvite, resendInvite } from './invite.service';
 
-export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>): Router {
+export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'rateLimits'>): Router {
   const { dataSource, mailer, config } = deps;
   const router = Router();
   const club = [requireSignIn, validate({ params: clubIdParams }), requireClubMember];
@@ -71,7 +70,7 @@ export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'
   });
 
   // Public: what the accept page shows before the invitee commits to anything.
-  router.get('/invites/:token', tokenLimiter('invite-preview', 60), async (req, res) => {
+  router.get('/invites/:token', deps.rateLimits.token('invite-preview', 60), async (req, res) => {
     const invite = await findUsableInvite(dataSource.manager, String(req.params.token));
     const clubRow = await dataSource.getRepository(Club).findOneByOrFail({ id: invite.clubId });
     const account = await dataSource.getRepository(User).createQueryBuilder('u').where('lower(u.email) = :e', { e: invite.email }).getExists();
@@ -79,7 +78,7 @@ export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'
   });
 
   const accept = { body: acceptInviteSchema };
-  router.post('/invites/accept', tokenLimiter('invite-accept'), validate(accept), async (req, res) => {
+  router.post('/invites/accept', deps.rateLimits.token('invite-accept'), validate(accept), async (req, res) => {
     const { token, displayName, password } = inputOf(res, accept).body;
     const passwordHash = password ? await hashPassword(password) : undefined;
     const signedInId = req.viewer?.user.id ?? req.session?.userId;
