@@ -29,7 +29,11 @@ function limiter(storeFor: RateLimitStoreFor, options: LimiterOptions): RequestH
  * proxy added, so a forged X-Forwarded-For changes nothing either way.
  */
 const byAddress = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
-const byAccount = (req: Request) => String((req.body as { email?: unknown })?.email ?? '').trim().toLowerCase();
+/** The e-mail as sent, when it is text: the limiter runs before validation, and String() of a hostile object throws. */
+const byAccount = (req: Request) => {
+  const email = (req.body as { email?: unknown } | undefined)?.email;
+  return typeof email === 'string' ? email.trim().toLowerCase() : '';
+};
 
 export interface RateLimits {
   /**

@@ -40,6 +40,16 @@ describe('rate limits shared by every instance', () => {
     expect(row.hits).toBe(2 * ACCOUNT_AND_ADDRESS_LIMIT);
   });
 
+  it('when the e-mail is an object whose toString is not a function, then the limiter does not fail: 400 names email', async () => {
+    const c = new Client(a.app);
+    const token = await c.csrfToken();
+    for (const path of ['/api/session', '/api/password-resets']) {
+      const res = await request(a.app).post(path).set('Cookie', c.cookies).set('X-CSRF-Token', token).set('Content-Type', 'application/json').send('{"email":{"toString":"x"},"password":"p"}');
+      expect(res.status, path).toBe(400);
+      expect(res.body.issues).toEqual(expect.arrayContaining([expect.objectContaining({ path: 'email' })]));
+    }
+  });
+
   it('when one instance has counted an address to its limit, then the other refuses it too, with Retry-After', async () => {
     const email = 'second@test.example';
     for (let i = 0; i < ACCOUNT_AND_ADDRESS_LIMIT; i++) expect(await failSignIn(a.app, email)).toBe(401);
