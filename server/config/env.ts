@@ -19,6 +19,8 @@ const envSchema = z.object({
   UPLOADS_DIR: z.string().min(1).default('.data/uploads'),
   /** Who may tell us the client's address in X-Forwarded-For; required in production (see trustProxySetting). */
   TRUST_PROXY: z.string().trim().min(1).optional(),
+  /** How often open sockets are checked against their sessions (ended or expired ones are disconnected). */
+  SOCKET_SESSION_CHECK_SECONDS: z.coerce.number().int().min(1).max(3600).default(30),
 });
 
 const NAMED_RANGES = new Set(['loopback', 'linklocal', 'uniquelocal']);
@@ -65,6 +67,7 @@ export interface Config {
   uploadsDir: string;
   /** Express's `trust proxy` (TRUST_PROXY). */
   trustProxy: false | number | string[];
+  socketSessionCheckSeconds: number;
 }
 
 export class ConfigError extends Error {
@@ -106,5 +109,6 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
     mailFrom: e.MAIL_FROM,
     uploadsDir,
     trustProxy,
+    socketSessionCheckSeconds: e.SOCKET_SESSION_CHECK_SECONDS,
   };
 }

@@ -9,6 +9,7 @@ import { rooms } from '../../shared/events/socket-events';
 import type { Config } from '../config/env';
 import { releaseDroppedListenClients } from './adapter-pool';
 import type { IoServer, RealtimeHub } from './hub';
+import { watchSocketSessions } from './session-watch';
 
 /** Browsers always send Origin on a WebSocket (ASVS 4.4.1); only our own origins may open one. */
 export function allowedOrigins(config: Config): Set<string> {
@@ -33,6 +34,7 @@ function originAllowed(origin: string | undefined, host: string | undefined, ori
 
 interface SessionRequest extends IncomingMessage {
   session?: { userId?: string };
+  sessionID?: string;
 }
 
 export function startRealtime(p: {
@@ -56,14 +58,16 @@ export function startRealtime(p: {
   // The same express-session as the HTTP API: no second sign-in, no token in the URL.
   io.engine.use(p.sessionMiddleware);
   io.use(async (socket, next) => {
-    const userId = (socket.request as SessionRequest).session?.userId;
-    if (!userId) return next(new Error('unauthenticated'));
+    const { session, sessionID } = socket.request as SessionRequest;
+    const userId = session?.userId;
+    if (!userId || !sessionID) return next(new Error('unauthenticated'));
     try {
       const clubs: { clubId: string }[] = await p.dataSource.query(
         `SELECT club_id AS "clubId" FROM membership WHERE user_id = $1 AND status = 'active'`,
         [userId],
       );
       socket.data.userId = userId;
+      socket.data.sessionId = sessionID;
       await socket.join([rooms.user(userId), ...clubs.map((c) => rooms.club(c.clubId))]);
       next();
     } catch (err) {
@@ -72,5 +76,7 @@ export function startRealtime(p: {
     }
   });
   p.hub.attach(io);
+  const stopWatching = watchSocketSessions({ io, dataSource: p.dataSource, intervalMs: p.config.socketSessionCheckSeconds * 1000, logger: p.logger });
+  p.httpServer.once('close', stopWatching);
   return io;
 }
