@@ -12,3 +12,5 @@ export * from './due-tests';
 export * from './triage';
 export * from './stocking-readiness';
 export { sortByTakenAt } from './readings';
+export { FREE_AMMONIA_INPUTS, lastKnownInputs, type FreeAmmoniaInput, type LastKnown } from './evaluation/free-ammonia';
+export type { KnownValue, TestPosition } from './readings';

@@ -15,6 +15,21 @@ export interface KnownValue {
   testId: string;
 }
 
+/** Where a test stands in a tank's history: tests are ordered by time, ties by id. */
+export interface TestPosition {
+  takenAt: string;
+  /** Absent for a test not stored yet: then only tests taken strictly earlier come before it. */
+  id?: string;
+}
+
+/** Whether `test` comes before `position` in (takenAt, id) order; the position's own test never does. */
+export function comesBefore(test: Pick<WaterTestInput, 'id' | 'takenAt'>, position: TestPosition): boolean {
+  const a = toMs(test.takenAt);
+  const b = toMs(position.takenAt);
+  if (a !== b) return a < b;
+  return position.id !== undefined && test.id < position.id;
+}
+
 /** The most recent value of a parameter among tests taken at or before `at`. */
 export function lastKnownValue(
   tests: readonly WaterTestInput[],

@@ -1,5 +1,6 @@
 import type { AnyParameterKey, ParameterKey } from './parameters';
 import type { SystemType } from './system-types';
+import type { LastKnown } from './evaluation/free-ammonia';
 
 /** One water test as the member entered it, already converted to canonical units. */
 export interface WaterTestInput {
@@ -43,6 +44,11 @@ export interface EvaluationContext {
   tank: TankContext;
   /** Earlier tests of the same tank, any order. May include the reading itself; it is ignored. */
   history: readonly WaterTestInput[];
+  /**
+   * The tank's last known temperature, pH and salinity before the reading, when the caller has them from the whole
+   * record (the server and the form's preview do); otherwise they are looked up in `history` by the same rule.
+   */
+  lastKnown?: LastKnown;
   sourceWater?: { nitrate?: number };
   /** ISO timestamp; the engine never reads the clock. */
   now: string;

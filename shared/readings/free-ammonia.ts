@@ -1,14 +1,10 @@
-import { computeFreeAmmonia, type ResolvedInput } from '../care/evaluation/free-ammonia';
+import { computeFreeAmmonia, type FreeAmmoniaInput, type LastKnown, type ResolvedInput } from '../care/evaluation/free-ammonia';
 import type { ParameterKey } from '../care/parameters';
 import { builtInProfile, defaultProfileFor, type CareProfile } from '../care/profiles';
 import type { KnownValue } from '../care/readings';
 import type { SystemType } from '../care/system-types';
-import type { WaterTestInput } from '../care/types';
 
-/** The parameters free ammonia depends on, whose last known values may stand in for missing ones. */
-export const FREE_AMMONIA_INPUTS = ['temperature', 'pH', 'salinity'] as const;
-export type FreeAmmoniaInput = (typeof FREE_AMMONIA_INPUTS)[number];
-export type LastKnown = Partial<Record<FreeAmmoniaInput, KnownValue>>;
+export { FREE_AMMONIA_INPUTS, lastKnownInputs, type FreeAmmoniaInput, type LastKnown } from '../care/evaluation/free-ammonia';
 
 export interface DerivedInput {
   value: number;
@@ -37,9 +33,9 @@ function traced(input: ResolvedInput, known: KnownValue | undefined): DerivedInp
 }
 
 /**
- * Free (un-ionized) NH3 from a test's total ammonia, with the same rules the care evaluation uses: the test's own
- * temperature, pH and salinity, else the tank's last known ones, else an assumption — and it records which.
- * Undefined when the test has no ammonia reading.
+ * Free (un-ionized) NH3 from a test's total ammonia, as stored with the test: `computeFreeAmmonia`, the same the care
+ * evaluation uses, with a record of where each input came from. `lastKnown` is `lastKnownInputs` at the test's
+ * position. Undefined when the test has no ammonia reading.
  */
 export function deriveFreeAmmonia(
   reading: { id: string; takenAt: string; values: Partial<Record<ParameterKey, number>> },
@@ -48,12 +44,10 @@ export function deriveFreeAmmonia(
 ): FreeAmmoniaDerivation | undefined {
   const total = reading.values.ammonia;
   if (total === undefined) return undefined;
-  const history: WaterTestInput[] = FREE_AMMONIA_INPUTS.flatMap((p) => {
-    const known = lastKnown[p];
-    return known && known.testId !== reading.id ? [{ id: known.testId, takenAt: known.takenAt, values: { [p]: known.value } }] : [];
-  });
+  // A test never stands in for its own missing readings (an edit can drop one).
+  const earlier: LastKnown = Object.fromEntries(Object.entries(lastKnown).filter(([, k]) => k.testId !== reading.id));
   const profile = tank.profile ?? ((tank.careProfileKey && builtInProfile(tank.careProfileKey)) || defaultProfileFor(tank.systemType));
-  const outcome = computeFreeAmmonia({ id: reading.id, takenAt: reading.takenAt, values: reading.values }, total, history, tank.systemType, profile);
+  const outcome = computeFreeAmmonia({ id: reading.id, takenAt: reading.takenAt, values: reading.values }, total, earlier, tank.systemType, profile);
   if (!outcome.ok) return { value: null, reason: outcome.why };
   const r = outcome.result;
   return {

@@ -1,10 +1,9 @@
 import type { SystemType } from '../care/system-types';
 import type { TankPhase } from '../care/types';
-import type { KnownValue } from '../care/readings';
 import type { TankShape } from '../chemistry/tank-volume';
 import type { CanonicalValues, DerivedInfo } from '../readings/normalize-water-test';
 import type { ReadingIssue } from '../readings/issues';
-import type { FreeAmmoniaInput } from '../readings/free-ammonia';
+import type { LastKnown } from '../care/evaluation/free-ammonia';
 import type { DateFormat, ImportTarget, ImportUnits } from './csv-import.schema';
 import type { TankEventDetails, TankEventKind } from './tank-event.schema';
 import type { WaterTestEntries } from './water-test.schema';
@@ -40,7 +39,7 @@ export interface TankView {
 export interface TankDetailView extends TankView {
   livestock: LivestockView[];
   /** The latest temperature, pH and salinity on record: what a new test's free ammonia falls back on. */
-  lastKnown: Partial<Record<FreeAmmoniaInput, KnownValue>>;
+  lastKnown: LastKnown;
 }
 
 export interface LivestockView {
@@ -110,6 +109,12 @@ export interface Page<T> {
   items: T[];
   /** Pass as `before` for the next (older) page; null on the last page. */
   nextCursor: string | null;
+}
+
+/** One test, with what its free ammonia falls back on: the last known values before it (the same shape as the tank's). */
+export interface WaterTestDetailView {
+  waterTest: WaterTestView;
+  lastKnown: LastKnown;
 }
 
 export interface WaterTestSaved {

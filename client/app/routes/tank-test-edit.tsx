@@ -23,7 +23,7 @@ export function Component() {
   const navigate = useNavigate();
   const [confirming, setConfirming] = useState(false);
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
-  const initial = useMemo(() => (test.data ? draftFromTest(test.data, me.user) : undefined), [test.data, me.user]);
+  const initial = useMemo(() => (test.data ? draftFromTest(test.data.waterTest, me.user) : undefined), [test.data, me.user]);
 
   if (tank.isError) throw tank.error;
   if (test.isError) throw test.error;
@@ -39,7 +39,7 @@ export function Component() {
         <Notice tone="warning">Only the keeper of this tank can change its tests{t.archivedAt ? ', and not while it is archived' : ''}.</Notice>
       ) : (
         <div className="space-y-6">
-          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} editing={test.data} submitLabel="Save changes" onSaved={back} />
+          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} editing={test.data.waterTest} lastKnown={test.data.lastKnown} submitLabel="Save changes" onSaved={back} />
           <div className="border-t border-tide-100 pt-4">
             <Button variant="ghost" className="text-ember-700" onClick={() => setConfirming(true)}>Delete this test</Button>
           </div>

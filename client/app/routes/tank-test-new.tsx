@@ -31,7 +31,7 @@ export function Component() {
             Fill in what you tested; leave the rest empty. Not a test?{' '}
             <Link to={`/tanks/${tankId}/entries/new`} className="font-bold text-tide-700 underline">Log a water change, a dose or what you saw</Link>.
           </p>
-          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })} />
+          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} lastKnown={t.lastKnown} onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })} />
         </>
       ) : (
         <Notice tone="warning">{t.archivedAt ? 'This tank is archived, so no new tests can be logged. Restore it from the tank page first.' : 'Only the keeper of this tank can log tests on it.'}</Notice>

@@ -10,7 +10,7 @@ import {
   type WaterTestInput,
 } from '@shared/care';
 import { resolveProfile } from '../care';
-import { careHistory, lastSourceNitrate, tankForCare, type TankForCare } from '../tanks';
+import { careHistory, lastKnownBefore, lastSourceNitrate, tankForCare, type TankForCare } from '../tanks';
 import { ConcernRow, TankReadiness } from './concern.entity';
 
 export interface Reevaluation {
@@ -52,6 +52,8 @@ export async function concernsFor(m: EntityManager, tank: TankForCare, profile: 
       ...evaluateReading(latest, profile, {
         tank: { volumeL: tank.volumeL, phase: tank.phase, systemType: tank.systemType, hasLivestock: tank.hasLivestock },
         history,
+        // The same last known values the test's stored free ammonia used, however old.
+        lastKnown: await lastKnownBefore(m, tank.id, latest),
         sourceWater: sourceNitrate === undefined ? undefined : { nitrate: sourceNitrate },
         now: now.toISOString(),
       }),

@@ -1,7 +1,7 @@
 import type { EntityManager } from 'typeorm';
-import type { ParameterKey } from '../../../shared/care/parameters';
-import { deriveFreeAmmonia, FREE_AMMONIA_INPUTS, type LastKnown } from '../../../shared/readings/free-ammonia';
-import type { DerivedInfo } from '../../../shared/readings/normalize-water-test';
+import { FREE_AMMONIA_INPUTS, lastKnownInputs, type LastKnown, type ParameterKey, type WaterTestInput } from '@shared/care';
+import { deriveFreeAmmonia } from '@shared/readings/free-ammonia';
+import type { DerivedInfo } from '@shared/readings/normalize-water-test';
 import type { Tank } from './tank.entity';
 import { chemistryOf, lastKnownBefore } from './water-test.context';
 
@@ -15,6 +15,10 @@ interface TimelineRow {
   freeAmmonia: number | null;
   derived: DerivedInfo;
 }
+
+/** Last known values as the one-reading tests they came from. */
+const testsOf = (known: LastKnown): WaterTestInput[] =>
+  Object.entries(known).map(([p, k]) => ({ id: k.testId, takenAt: k.takenAt, values: { [p]: k.value } }));
 
 /** JSON with sorted keys: jsonb reorders keys, so plain stringify would see changes that are not there. */
 function stable(value: unknown): string {
@@ -31,7 +35,7 @@ function stable(value: unknown): string {
  * Writes only the rows whose derived values actually changed, in one statement.
  */
 export async function recomputeDerivedFrom(tx: EntityManager, tank: Tank, from: Date | null): Promise<number> {
-  const known: LastKnown = from ? await lastKnownBefore(tx, tank.id, { at: from }) : {};
+  let known: LastKnown = from ? await lastKnownBefore(tx, tank.id, { takenAt: from.toISOString() }) : {};
   const rows: TimelineRow[] = await tx.query(
     `SELECT id, taken_at AS "takenAt", temperature_c AS temperature, ph AS "pH", salinity_psu AS salinity,
             ammonia_mg_l AS ammonia, free_ammonia_mg_l AS "freeAmmonia", derived
@@ -40,20 +44,20 @@ export async function recomputeDerivedFrom(tx: EntityManager, tank: Tank, from: 
   );
   const chemistry = await chemistryOf(tx, tank);
   const changes: { id: string; free: number | null; derived: DerivedInfo }[] = [];
+  let previous: WaterTestInput | undefined;
   for (const row of rows) {
     const takenAt = new Date(row.takenAt).toISOString();
+    const values: Partial<Record<ParameterKey, number>> = {};
+    for (const p of FREE_AMMONIA_INPUTS) if (row[p] !== null) values[p] = row[p];
+    // Walking the rows in order, what stood in before the previous row plus that row itself are all the rule needs.
+    if (previous) known = lastKnownInputs([...testsOf(known), previous], { takenAt, id: row.id });
     if (row.ammonia !== null) {
-      const values: Partial<Record<ParameterKey, number>> = { ammonia: row.ammonia };
-      for (const p of FREE_AMMONIA_INPUTS) if (row[p] !== null) values[p] = row[p];
-      const next = deriveFreeAmmonia({ id: row.id, takenAt, values }, known, chemistry);
+      const next = deriveFreeAmmonia({ id: row.id, takenAt, values: { ...values, ammonia: row.ammonia } }, known, chemistry);
       if (next && (stable(next) !== stable(row.derived.freeAmmonia) || next.value !== row.freeAmmonia)) {
         changes.push({ id: row.id, free: next.value, derived: { ...row.derived, freeAmmonia: next } });
       }
     }
-    for (const p of FREE_AMMONIA_INPUTS) {
-      const value = row[p];
-      if (value !== null) known[p] = { value, takenAt, testId: row.id };
-    }
+    previous = { id: row.id, takenAt, values };
   }
   if (changes.length) {
     await tx.query(

@@ -28,5 +28,5 @@ export { attachPhotos } from './tank-photo.service';
 export { createWaterTest } from './water-test.service';
 // The CSV import saves through the same steps as the form (until both share insertWaterTests).
 export { recomputeDerivedFrom } from './derived-refresh';
-export { chemistryOf } from './water-test.context';
+export { chemistryOf, lastKnownBefore } from './water-test.context';
 export { columnsOf } from './water-test.service';

@@ -1,6 +1,6 @@
 import { tankVolume, type TankVolumeInput } from '../../../shared/chemistry/tank-volume';
 import type { LivestockView, TankDetailView, TankView } from '../../../shared/schemas/tank-views';
-import type { LastKnown } from '../../../shared/readings/free-ammonia';
+import type { LastKnown } from '@shared/care';
 import type { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
 

@@ -1,23 +1,23 @@
 import type { EntityManager } from 'typeorm';
-import { FREE_AMMONIA_INPUTS, type LastKnown, type TankChemistryContext } from '../../../shared/readings/free-ammonia';
+import { FREE_AMMONIA_INPUTS, lastKnownInputs, type LastKnown, type TestPosition, type WaterTestInput } from '@shared/care';
+import type { TankChemistryContext } from '@shared/readings/free-ammonia';
 import { resolveProfile } from '../care';
-import type { Position } from './cursor';
 import type { Tank } from './tank.entity';
 import { VALUE_COLUMNS } from './water-test.entity';
 
 /**
- * The tank's latest temperature, pH and salinity before a position in (taken_at, id) order — or the latest of all.
- * Each may come from a different test.
+ * The tank's last known temperature, pH and salinity before a test (or of all its tests), by `lastKnownInputs`, the
+ * shared rule: the query only narrows the candidates to the newest test before the position measuring each.
  */
-export async function lastKnownBefore(manager: EntityManager, tankId: string, before?: Position | { at: Date }): Promise<LastKnown> {
-  const known: LastKnown = {};
+export async function lastKnownBefore(manager: EntityManager, tankId: string, before?: TestPosition): Promise<LastKnown> {
+  const candidates: WaterTestInput[] = [];
   for (const parameter of FREE_AMMONIA_INPUTS) {
     const column = VALUE_COLUMNS[parameter].column;
     const params: unknown[] = [tankId];
     let bound = '';
     if (before) {
-      params.push(before.at);
-      if ('id' in before) {
+      params.push(before.takenAt);
+      if (before.id !== undefined) {
         params.push(before.id);
         bound = 'AND (taken_at, id) < ($2, $3)';
       } else bound = 'AND taken_at < $2';
@@ -29,9 +29,9 @@ export async function lastKnownBefore(manager: EntityManager, tankId: string, be
       params,
     );
     const row = rows[0];
-    if (row) known[parameter] = { value: row.value, takenAt: new Date(row.takenAt).toISOString(), testId: row.id };
+    if (row) candidates.push({ id: row.id, takenAt: new Date(row.takenAt).toISOString(), values: { [parameter]: row.value } });
   }
-  return known;
+  return lastKnownInputs(candidates, before);
 }
 
 /** What free ammonia depends on besides the readings: the kind of tank and its care profile (a club's copy included). */

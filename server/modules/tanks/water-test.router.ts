@@ -2,6 +2,7 @@ import { Router } from 'express';
 import type { DataSource } from 'typeorm';
 import type { Deps } from '@server/deps';
 import { tankParams } from '@shared/schemas/tank.schema';
+import type { WaterTestDetailView } from '@shared/schemas/tank-views';
 import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, waterTestParams } from '@shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
@@ -10,6 +11,7 @@ import { audit } from '../audit';
 import { photosOf, removePhotoFiles } from '../photos';
 import { decodeCursor, pageOf } from './cursor';
 import { loadTank, ownedBy, requireActive } from './tank-access';
+import { lastKnownBefore } from './water-test.context';
 import { WaterTest } from './water-test.entity';
 import { presentWaterTest } from './water-test.presenter';
 import { createWaterTest, deleteWaterTest, updateWaterTest } from './water-test.service';
@@ -65,7 +67,9 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
     const test = await loadTest(dataSource.manager, tank.id, params.testId);
     const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: [test.id] });
-    res.json({ waterTest: presentWaterTest(test, photos) });
+    const lastKnown = await lastKnownBefore(dataSource.manager, tank.id, { takenAt: test.takenAt.toISOString(), id: test.id });
+    const view: WaterTestDetailView = { waterTest: presentWaterTest(test, photos), lastKnown };
+    res.json(view);
   });
 
   const update = { params: waterTestParams, body: updateWaterTestSchema };

@@ -30,7 +30,7 @@ function refuseErrors(n: NormalizedWaterTest): void {
 }
 
 async function normalizeFor(tx: EntityManager, tank: Tank, id: string, takenAt: string, entries: WaterTestEntries, now: Date): Promise<NormalizedWaterTest> {
-  const lastKnown = await lastKnownBefore(tx, tank.id, { at: new Date(takenAt), id });
+  const lastKnown = await lastKnownBefore(tx, tank.id, { takenAt, id });
   const normalized = normalizeWaterTest({ takenAt, entries }, { ...(await chemistryOf(tx, tank)), now: now.toISOString(), testId: id, lastKnown });
   refuseErrors(normalized);
   return normalized;

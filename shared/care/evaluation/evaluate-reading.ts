@@ -10,7 +10,7 @@ import {
   type WaterTestInput,
 } from '../types';
 import { classify } from './classify';
-import { computeFreeAmmonia } from './free-ammonia';
+import { computeFreeAmmonia, lastKnownInputs } from './free-ammonia';
 import { stepsFor, type StepContext } from './next-steps';
 import { trendConcerns } from './trend-rules';
 import { dilutionWaterChange } from './water-change';
@@ -91,7 +91,8 @@ function freeAmmoniaConcern(
   const total = reading.values.ammonia;
   const range = s.profile.ranges.freeAmmonia;
   if (total === undefined || total <= 0 || !range) return null;
-  const outcome = computeFreeAmmonia(reading, total, history, ctx.tank.systemType, s.profile);
+  const lastKnown = ctx.lastKnown ?? lastKnownInputs(history, reading);
+  const outcome = computeFreeAmmonia(reading, total, lastKnown, ctx.tank.systemType, s.profile);
   if (!outcome.ok) {
     return {
       parameter: 'freeAmmonia',

@@ -1,10 +1,33 @@
 import { freeAmmonia } from '@shared/chemistry';
-import { formatNumber, type ParameterKey } from '../parameters';
+import { formatNumber } from '../parameters';
 import type { CareProfile } from '../profiles/types';
-import { lastKnownValue } from '../readings';
+import { comesBefore, sortByTakenAt, type KnownValue, type TestPosition } from '../readings';
 import { isSaltwaterSystem, type SystemType } from '../system-types';
 import { isoDate } from '../time';
 import type { WaterTestInput } from '../types';
+
+/** The parameters free ammonia depends on, whose last known values may stand in for missing ones. */
+export const FREE_AMMONIA_INPUTS = ['temperature', 'pH', 'salinity'] as const;
+export type FreeAmmoniaInput = (typeof FREE_AMMONIA_INPUTS)[number];
+/** The tank's last known temperature, pH and salinity before a test (see lastKnownInputs). */
+export type LastKnown = Partial<Record<FreeAmmoniaInput, KnownValue>>;
+
+/**
+ * The one rule for what stands in for a temperature, pH or salinity a test lacks: per parameter, the latest value
+ * measured on a test before `position` in (takenAt, id) order, however long ago; without a position, the latest of
+ * all. The stored free ammonia, the concerns and the form's preview all take their last known values from here.
+ */
+export function lastKnownInputs(tests: readonly WaterTestInput[], position?: TestPosition): LastKnown {
+  const known: LastKnown = {};
+  for (const test of sortByTakenAt(tests)) {
+    if (position && !comesBefore(test, position)) continue;
+    for (const p of FREE_AMMONIA_INPUTS) {
+      const value = test.values[p];
+      if (value !== undefined && Number.isFinite(value)) known[p] = { value, takenAt: test.takenAt, testId: test.id };
+    }
+  }
+  return known;
+}
 
 export type InputSource = 'this-test' | 'last-known' | 'assumed';
 
@@ -26,25 +49,16 @@ export interface FreeAmmoniaResult {
 
 export type FreeAmmoniaOutcome = { ok: true; result: FreeAmmoniaResult } | { ok: false; why: string };
 
-function fromTestOrHistory(
-  parameter: ParameterKey,
-  reading: WaterTestInput,
-  history: readonly WaterTestInput[],
-): ResolvedInput | null {
+function fromTestOrLastKnown(parameter: FreeAmmoniaInput, reading: WaterTestInput, lastKnown: LastKnown): ResolvedInput | null {
   const own = reading.values[parameter];
   if (own !== undefined) return { value: own, source: 'this-test' };
-  const known = lastKnownValue(history, parameter, reading.takenAt, reading.id);
+  const known = lastKnown[parameter];
   return known ? { value: known.value, source: 'last-known', detail: isoDate(known.takenAt) } : null;
 }
 
-function resolveSalinity(
-  reading: WaterTestInput,
-  history: readonly WaterTestInput[],
-  systemType: SystemType,
-  profile: CareProfile,
-): ResolvedInput {
+function resolveSalinity(reading: WaterTestInput, lastKnown: LastKnown, systemType: SystemType, profile: CareProfile): ResolvedInput {
   if (!isSaltwaterSystem(systemType)) return { value: 0, source: 'assumed', detail: 'fresh water' };
-  const found = fromTestOrHistory('salinity', reading, history);
+  const found = fromTestOrLastKnown('salinity', reading, lastKnown);
   if (found) return found;
   const band = profile.ranges.salinity?.ideal ?? [35, 35];
   return {
@@ -75,21 +89,25 @@ function describeInputs(items: readonly { text: string; input: ResolvedInput }[]
     .join('; ');
 }
 
-/** Free (un-ionized) NH3 for a reading, using the tank's last known pH/temperature/salinity where the test lacks them. */
+/**
+ * Free (un-ionized) NH3 for a reading. The one place its inputs are decided: each of temperature, pH and salinity
+ * from the test itself, else the tank's last known value (`lastKnownInputs`), else, for salinity only, fresh water's
+ * 0 or the middle of the profile's band.
+ */
 export function computeFreeAmmonia(
   reading: WaterTestInput,
   totalAmmonia: number,
-  history: readonly WaterTestInput[],
+  lastKnown: LastKnown,
   systemType: SystemType,
   profile: CareProfile,
 ): FreeAmmoniaOutcome {
-  const tempC = fromTestOrHistory('temperature', reading, history);
-  const pH = fromTestOrHistory('pH', reading, history);
+  const tempC = fromTestOrLastKnown('temperature', reading, lastKnown);
+  const pH = fromTestOrLastKnown('pH', reading, lastKnown);
   if (!tempC || !pH) {
     const missing = [!pH && 'pH', !tempC && 'temperature'].filter(Boolean).join(' and ');
     return { ok: false, why: `no ${missing} has been recorded for this tank` };
   }
-  const salinity = resolveSalinity(reading, history, systemType, profile);
+  const salinity = resolveSalinity(reading, lastKnown, systemType, profile);
   try {
     const { nh3 } = freeAmmonia({
       total: totalAmmonia,

@@ -23,7 +23,8 @@ function renderForm(over: Partial<WaterTestFormProps> & { prefs?: UnitPrefs } = 
   save.onSave = onSave;
   const props: WaterTestFormProps = {
     clubId: 'club-1',
-    tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', lastKnown: {}, volumeL: 200, hasLivestock: true },
+    tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', volumeL: 200, hasLivestock: true },
+    lastKnown: {},
     profile: REEF_PROFILE,
     prefs,
     initial: newDraft(prefs, {}),
@@ -83,7 +84,7 @@ describe('water-test form', () => {
     const prefs: UnitPrefs = { temperatureUnit: 'F', volumeUnit: 'USgal', salinityDisplay: 'ppt' };
     const { user, onSave } = renderForm({
       prefs,
-      tank: { id: 'tank-2', systemType: 'tropical-freshwater', careProfileKey: 'tropical-freshwater', phase: 'established', lastKnown: {}, volumeL: 200, hasLivestock: true },
+      tank: { id: 'tank-2', systemType: 'tropical-freshwater', careProfileKey: 'tropical-freshwater', phase: 'established', volumeL: 200, hasLivestock: true },
       profile: TROPICAL_FRESHWATER_PROFILE,
       memory: { parameters: ['temperature'], entries: {} },
     });

@@ -1,6 +1,6 @@
 import { queryOptions, useMutation, useQuery } from '@tanstack/react-query';
 import type { CreateWaterTestInput, UpdateWaterTestInput } from '@shared/schemas/water-test.schema';
-import type { Page, WaterTestSaved, WaterTestView } from '@shared/schemas/tank-views';
+import type { Page, WaterTestDetailView, WaterTestSaved, WaterTestView } from '@shared/schemas/tank-views';
 import { api } from '@client/lib/api-client';
 import { useUploadPhotos } from '@client/lib/photos';
 import type { SavedNotice } from '@client/lib/saved-notice';
@@ -36,7 +36,7 @@ export const testsSinceQuery = (clubId: string, tankId: string, from: string | n
 export const waterTestQuery = (clubId: string, tankId: string, testId: string) =>
   queryOptions({
     queryKey: tankKeys.test(clubId, tankId, testId),
-    queryFn: ({ signal }) => api.get<{ waterTest: WaterTestView }>(`${base(clubId, tankId)}/${testId}`, signal).then((r) => r.waterTest),
+    queryFn: ({ signal }) => api.get<WaterTestDetailView>(`${base(clubId, tankId)}/${testId}`, signal),
   });
 
 export const useTestsSince = (clubId: string, tankId: string, from: string | null) => useQuery(testsSinceQuery(clubId, tankId, from));

@@ -1,5 +1,7 @@
+import { evaluateReading, type CareProfile, type Concern, type LastKnown } from '@shared/care';
 import { PARAMETER_KEYS, type ParameterKey } from '@shared/care/parameters';
 import { normalizeWaterTest, type NormalizeContext, type NormalizedWaterTest } from '@shared/readings/normalize-water-test';
+import type { TankDetailView } from '@shared/schemas/tank-views';
 import { ENTRY_SCHEMAS, type WaterTestEntries } from '@shared/schemas/water-test.schema';
 import type { UnitPrefs } from '@client/lib/display-units';
 import { localInputToIso } from '@client/lib/form-values';
@@ -49,3 +51,19 @@ export function previewDraft(draft: WaterTestDraft, prefs: UnitPrefs, ctx: Norma
 /** Messages of one kind for one parameter's fields (value, sample temperature…). */
 export const issuesFor = (issues: readonly { path: string; message: string }[], key: ParameterKey) =>
   issues.filter((i) => i.path.startsWith(`entries.${key}.`)).map((i) => i.message);
+
+export type PreviewTank = Pick<TankDetailView, 'systemType' | 'phase' | 'volumeL' | 'hasLivestock'>;
+
+/**
+ * What saving a previewed test will flag, by the evaluation the server runs on it, with the same last known
+ * temperature, pH and salinity. Trend and schedule rules need the stored history, so only the server adds those.
+ */
+export function previewConcerns(normalized: NormalizedWaterTest, p: { tank: PreviewTank; profile: CareProfile; lastKnown: LastKnown; now: string }): Concern[] {
+  const { tank } = p;
+  return evaluateReading({ id: 'preview', takenAt: normalized.takenAt || p.now, values: normalized.values }, p.profile, {
+    tank: { volumeL: tank.volumeL, phase: tank.phase, systemType: tank.systemType, hasLivestock: tank.hasLivestock },
+    history: [],
+    lastKnown: p.lastKnown,
+    now: p.now,
+  });
+}

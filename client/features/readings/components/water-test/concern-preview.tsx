@@ -1,21 +1,12 @@
-import { evaluateReading, type CareProfile, type WaterTestInput } from '@shared/care';
+import type { CareProfile, LastKnown } from '@shared/care';
 import type { NormalizedWaterTest } from '@shared/readings/normalize-water-test';
-import type { TankDetailView } from '@shared/schemas/tank-views';
 import { SeverityBadge } from '@client/components/ui/severity-badge';
+import { previewConcerns, type PreviewTank } from '../../lib/water-test-preview';
 
-/**
- * What saving these readings will flag, worked out in the browser by the same evaluation the server runs
- * (trend rules need the stored history, so only the server adds those).
- */
-export function ConcernPreview({ tank, profile, normalized }: { tank: Pick<TankDetailView, 'id' | 'systemType' | 'phase' | 'volumeL' | 'hasLivestock'>; profile: CareProfile; normalized: NormalizedWaterTest }) {
-  const values = Object.fromEntries(Object.entries(normalized.values).filter(([, v]) => typeof v === 'number')) as WaterTestInput['values'];
-  if (Object.keys(values).length === 0) return null;
-  const now = new Date().toISOString();
-  const concerns = evaluateReading({ id: 'preview', takenAt: normalized.takenAt || now, values }, profile, {
-    tank: { volumeL: tank.volumeL, phase: tank.phase, systemType: tank.systemType, hasLivestock: tank.hasLivestock },
-    history: [],
-    now,
-  }).filter((c) => c.severity !== 'info');
+/** What saving these readings will flag (see previewConcerns). */
+export function ConcernPreview({ tank, profile, normalized, lastKnown }: { tank: PreviewTank; profile: CareProfile; normalized: NormalizedWaterTest; lastKnown: LastKnown }) {
+  if (Object.keys(normalized.values).length === 0) return null;
+  const concerns = previewConcerns(normalized, { tank, profile, lastKnown, now: new Date().toISOString() }).filter((c) => c.severity !== 'info');
   return (
     <section aria-live="polite" aria-labelledby="preview-concerns" className="rounded-card bg-sand-50 p-4 ring-1 ring-sand-200">
       <h2 id="preview-concerns" className="text-sm font-extrabold uppercase tracking-wide text-tide-600">If you save this</h2>

@@ -2,6 +2,7 @@ import { useMemo, useState } from 'react';
 import { FormProvider, useForm, useWatch } from 'react-hook-form';
 import type { z } from 'zod';
 import { PARAMETER_KEYS, type ParameterKey } from '@shared/care/parameters';
+import type { LastKnown } from '@shared/care';
 import type { CareProfile } from '@shared/care/profiles';
 import { normalizeWaterTest, type NormalizeContext } from '@shared/readings/normalize-water-test';
 import type { TankDetailView, WaterTestView } from '@shared/schemas/tank-views';
@@ -26,7 +27,12 @@ export type WaterTestOutput = z.output<typeof createWaterTestSchema>;
 
 export interface WaterTestFormProps {
   clubId: string;
-  tank: Pick<TankDetailView, 'id' | 'systemType' | 'careProfileKey' | 'phase' | 'lastKnown' | 'volumeL' | 'hasLivestock'>;
+  tank: Pick<TankDetailView, 'id' | 'systemType' | 'careProfileKey' | 'phase' | 'volumeL' | 'hasLivestock'>;
+  /**
+   * What a temperature, pH or salinity the test lacks falls back on, as the server works it out: the tank's
+   * `lastKnown` for a new test, the test's own `lastKnown` (the values before it) for an edit.
+   */
+  lastKnown: LastKnown;
   profile: CareProfile;
   prefs: UnitPrefs;
   initial: WaterTestDraft;
@@ -43,11 +49,11 @@ export interface WaterTestFormProps {
  * store, and saving through `useSaveWaterTest` (the server's field errors land on the fields; a failed photo can be
  * sent again on its own).
  */
-export function WaterTestForm({ clubId, tank, profile, prefs, initial, memory, editing, submitLabel = 'Save test', onSaved }: WaterTestFormProps) {
+export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial, memory, editing, submitLabel = 'Save test', onSaved }: WaterTestFormProps) {
   const testId = editing?.id;
   const ctx = useMemo<Omit<NormalizeContext, 'now'>>(
-    () => ({ systemType: tank.systemType, careProfileKey: tank.careProfileKey, profile, lastKnown: tank.lastKnown, ...(testId ? { testId } : {}) }),
-    [tank.systemType, tank.careProfileKey, tank.lastKnown, profile, testId],
+    () => ({ systemType: tank.systemType, careProfileKey: tank.careProfileKey, profile, lastKnown, ...(testId ? { testId } : {}) }),
+    [tank.systemType, tank.careProfileKey, lastKnown, profile, testId],
   );
   const resolver = useMemo(
     () =>
@@ -96,7 +102,7 @@ export function WaterTestForm({ clubId, tank, profile, prefs, initial, memory, e
               {showAll ? 'Show only my usual readings' : `More readings (${hidden})`}
             </Button>
           ) : null}
-          <ConcernPreview tank={tank} profile={profile} normalized={preview.normalized} />
+          <ConcernPreview tank={tank} profile={profile} normalized={preview.normalized} lastKnown={lastKnown} />
           <TextAreaField label="Anything else about this test? (optional)" rows={2} error={form.formState.errors.note?.message} {...form.register('note')} />
         </fieldset>
         <PhotoPicker label="Photo (optional)" hint="For example the colour card next to the test tube, in daylight." files={photos} onChange={setPhotos} />
