@@ -13,6 +13,7 @@ import type { Deps } from './deps';
 import type { Mailer } from './mail/mailer';
 import { csrfProtection } from './middleware/csrf';
 import { createRateLimits } from './middleware/rate-limits';
+import { errWithoutValues } from './lib/logger';
 import { PostgresRateLimitStore } from './lib/rate-limit-store';
 import { rejectUnstorableText } from './middleware/storable-text';
 import { apiNotFound, errorHandler } from './middleware/errors';
@@ -99,6 +100,8 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
       serializers: {
         req: (r: { method: string; url: string }) => ({ method: r.method, url: redactTokens(r.url) }),
         res: (r: { statusCode: number }) => ({ statusCode: r.statusCode }),
+        // pino-http replaces the logger's own err serializer: give it the one that drops query values.
+        err: errWithoutValues,
       },
     }),
   );
