@@ -7,8 +7,8 @@ import {
   type CycleStageResult,
 } from './cycle-constants';
 import { formatNumber } from './parameters';
-import { sortByTakenAt } from './readings';
-import { DAY_MS, daysBetween, isoDate, toIso, toMs } from './time';
+import { indexTests, type TestTimeline } from './test-timeline';
+import { DAY_MS, isoDate, toIso, toMs } from './time';
 import type { WaterTestInput } from './types';
 
 interface Resolved {
@@ -22,6 +22,7 @@ interface Resolved {
 
 interface ZeroRun {
   start: string;
+  startMs: number;
   count: number;
   nitrate: number | undefined;
 }
@@ -88,7 +89,7 @@ function candidateFor(
   return s.stage;
 }
 
-function updateZeroRun(s: State, o: Resolved, t: WaterTestInput): void {
+function updateZeroRun(s: State, o: Resolved, t: WaterTestInput, ms: number): void {
   const { ammonia: a, nitrite: n, nitrate } = t.values;
   const detected = (a !== undefined && a > o.zeroA) || (n !== undefined && n > o.zeroN);
   if (detected) {
@@ -96,26 +97,26 @@ function updateZeroRun(s: State, o: Resolved, t: WaterTestInput): void {
     return;
   }
   if (a !== undefined && n !== undefined) {
-    s.zeroRun ??= { start: t.takenAt, count: 0, nitrate: undefined };
+    s.zeroRun ??= { start: t.takenAt, startMs: ms, count: 0, nitrate: undefined };
     s.zeroRun.count += 1;
   }
   if (s.zeroRun && nitrate !== undefined) s.zeroRun.nitrate = nitrate;
 }
 
-function isCycledNow(s: State, o: Resolved, at: string): boolean {
+function isCycledNow(s: State, o: Resolved, atMs: number): boolean {
   const run = s.zeroRun;
   return (
     run !== null &&
     run.count >= o.confirmTests &&
-    daysBetween(run.start, at) >= o.cycledAfterDays &&
+    (atMs - run.startMs) / DAY_MS >= o.cycledAfterDays &&
     run.nitrate !== undefined &&
     run.nitrate > 0
   );
 }
 
-function step(s: State, o: Resolved, t: WaterTestInput): void {
+function step(s: State, o: Resolved, t: WaterTestInput, ms: number): void {
   const { ammonia: a, nitrite: n } = t.values;
-  updateZeroRun(s, o, t);
+  updateZeroRun(s, o, t, ms);
   if (a === undefined && n === undefined) return;
   if (a !== undefined) {
     s.peakA = robustPeak(s.peakA, s.prevA, a);
@@ -125,7 +126,7 @@ function step(s: State, o: Resolved, t: WaterTestInput): void {
     s.peakN = robustPeak(s.peakN, s.prevN, n);
     s.prevN = n;
   }
-  const cycledNow = isCycledNow(s, o, t.takenAt);
+  const cycledNow = isCycledNow(s, o, ms);
   const candidate = candidateFor(s, o, a, n, cycledNow);
   if (candidate === s.stage) {
     if (s.pending) s.oneOffs.push(...s.pending.ids);
@@ -170,7 +171,7 @@ function project(s: State, o: Resolved, lastMs: number): CycleProjection | undef
   const week = 7 * DAY_MS;
   const w = CYCLE_DURATION_WEEKS;
   // The zero run still has to last cycledAfterDays, so nothing can finish before that.
-  const runStart = s.zeroRun ? toMs(s.zeroRun.start) : lastMs;
+  const runStart = s.zeroRun ? s.zeroRun.startMs : lastMs;
   const floor = Math.max(runStart + o.cycledAfterDays * DAY_MS, o.nowMs ?? lastMs);
   const earliest = Math.max(start + w.rangeMin * week, floor);
   const likely = Math.max(start + ((w.typicalMin + w.typicalMax) / 2) * week, earliest);
@@ -178,7 +179,7 @@ function project(s: State, o: Resolved, lastMs: number): CycleProjection | undef
   return { earliest: toIso(earliest), likely: toIso(likely), latest: toIso(latest) };
 }
 
-function evidence(s: State, o: Resolved, tests: readonly WaterTestInput[]): string[] {
+function evidence(s: State, o: Resolved, tests: readonly WaterTestInput[], lastMs: number): string[] {
   const out: string[] = [];
   const first = tests[0];
   const last = tests[tests.length - 1];
@@ -193,7 +194,7 @@ function evidence(s: State, o: Resolved, tests: readonly WaterTestInput[]): stri
   if (s.peakN > 0) out.push(`Nitrite peaked near ${formatNumber('nitrite', s.peakN)} mg/L.`);
   const run = s.zeroRun;
   if (run) {
-    const days = Math.floor(daysBetween(run.start, last.takenAt));
+    const days = Math.floor((lastMs - run.startMs) / DAY_MS);
     out.push(
       `Ammonia and nitrite read 0 on ${run.count} test(s) since ${isoDate(run.start)} (${days} of ${o.cycledAfterDays} days).`,
     );
@@ -212,16 +213,23 @@ function evidence(s: State, o: Resolved, tests: readonly WaterTestInput[]): stri
 
 /**
  * Where a tank is in its nitrogen cycle. Tests are sorted by takenAt, so input order never matters;
- * a stage changes only after `confirmTests` consecutive tests agree.
+ * a stage changes only after `confirmTests` consecutive tests agree. Takes a `TestTimeline` as well, so a
+ * history indexed once serves every engine function.
  */
 export function cycleStage(
-  history: readonly WaterTestInput[],
+  history: readonly WaterTestInput[] | TestTimeline,
   options: CycleStageOptions = {},
 ): CycleStageResult {
   const o = resolve(options);
-  const tests = sortByTakenAt(history).filter(
-    (t) => t.values.ammonia !== undefined || t.values.nitrite !== undefined || t.values.nitrate !== undefined,
-  );
+  const timeline = indexTests(history);
+  const tests: WaterTestInput[] = [];
+  const times: number[] = [];
+  timeline.tests.forEach((t, i) => {
+    if (t.values.ammonia === undefined && t.values.nitrite === undefined && t.values.nitrate === undefined)
+      return;
+    tests.push(t);
+    times.push(timeline.times[i] as number);
+  });
   const s: State = {
     stage: 'not-started',
     since: tests[0]?.takenAt ?? null,
@@ -237,10 +245,14 @@ export function cycleStage(
     cycledAt: null,
     setbackValue: null,
   };
-  for (const t of tests) step(s, o, t);
-  const last = tests[tests.length - 1];
-  const result: CycleStageResult = { stage: s.stage, since: s.since, evidence: evidence(s, o, tests) };
-  const projection = last ? project(s, o, toMs(last.takenAt)) : undefined;
+  tests.forEach((t, i) => step(s, o, t, times[i] as number));
+  const lastMs = times[times.length - 1];
+  const result: CycleStageResult = {
+    stage: s.stage,
+    since: s.since,
+    evidence: evidence(s, o, tests, lastMs ?? NaN),
+  };
+  const projection = lastMs === undefined ? undefined : project(s, o, lastMs);
   if (projection) result.projectedDoneAt = projection;
   return result;
 }

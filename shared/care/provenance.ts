@@ -48,4 +48,26 @@ export const SOURCES = {
       'Millero, Feistel, Wright & McDougall (2008), The composition of Standard Seawater and the definition of the Reference-Composition Salinity Scale, Deep-Sea Research I 55: 50–72',
     fromMemory: true,
   },
+  /**
+   * Seahorses have no true stomach and pass food quickly, so in aquariums they are fed several times a
+   * day and weaken fast when they stop eating. Recalled, not re-read for this code.
+   */
+  koldewey2005: {
+    kind: 'published',
+    short: 'Koldewey 2005',
+    citation:
+      'Koldewey, H. (2005), Syngnathid Husbandry in Public Aquariums: 2005 Manual, Project Seahorse and Zoological Society of London',
+    fromMemory: true,
+  },
+  /**
+   * Fish breathing hard or gasping at the surface is a sign of too little oxygen reaching the gills, most
+   * often from the water (low oxygen, ammonia, nitrite); and when several fish show signs together the
+   * environment is looked at first. Recalled, not re-read for this code.
+   */
+  noga2010: {
+    kind: 'published',
+    short: 'Noga 2010',
+    citation: 'Noga, E. J. (2010), Fish Disease: Diagnosis and Treatment, 2nd edition, Wiley-Blackwell',
+    fromMemory: true,
+  },
 } as const satisfies Record<string, Provenance>;

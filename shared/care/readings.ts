@@ -1,13 +1,5 @@
-import type { ParameterKey } from './parameters';
 import type { WaterTestInput } from './types';
 import { toMs } from './time';
-
-/** Oldest first; ties broken by id so shuffled input always gives the same order. */
-export function sortByTakenAt(tests: readonly WaterTestInput[]): WaterTestInput[] {
-  return [...tests].sort(
-    (a, b) => toMs(a.takenAt) - toMs(b.takenAt) || (a.id < b.id ? -1 : a.id > b.id ? 1 : 0),
-  );
-}
 
 export interface KnownValue {
   value: number;
@@ -30,42 +22,46 @@ export function comesBefore(test: Pick<WaterTestInput, 'id' | 'takenAt'>, positi
   return position.id !== undefined && test.id < position.id;
 }
 
-/** The most recent value of a parameter among tests taken at or before `at`. */
-export function lastKnownValue(
-  tests: readonly WaterTestInput[],
-  parameter: ParameterKey,
-  at: string,
-  excludeId?: string,
-): KnownValue | null {
-  const limit = toMs(at);
-  let best: KnownValue | null = null;
-  for (const test of sortByTakenAt(tests)) {
-    if (test.id === excludeId || toMs(test.takenAt) > limit) continue;
-    const value = test.values[parameter];
-    if (value === undefined || !Number.isFinite(value)) continue;
-    best = { value, takenAt: test.takenAt, testId: test.id };
-  }
-  return best;
-}
-
 export interface SeriesPoint {
   ms: number;
   value: number;
 }
 
-/** Values of one parameter, oldest first, from tests inside [fromMs, toMs]. */
-export function seriesOf(
-  tests: readonly WaterTestInput[],
-  parameter: ParameterKey,
-  fromMs: number,
-  untilMs: number,
-): SeriesPoint[] {
-  const points: SeriesPoint[] = [];
-  for (const test of sortByTakenAt(tests)) {
-    const ms = toMs(test.takenAt);
-    const value = test.values[parameter];
-    if (ms < fromMs || ms > untilMs || value === undefined || !Number.isFinite(value)) continue;
-    points.push({ ms, value });
+/** Oldest first, then by id: the one order every engine function reads tests in. */
+export function compareTests(aMs: number, aId: string, bMs: number, bId: string): number {
+  return aMs - bMs || (aId < bId ? -1 : aId > bId ? 1 : 0);
+}
+
+/**
+ * Indices of `tests` in engine order, with each timestamp parsed once. Array.prototype.sort is stable, so
+ * tests equal in time and id keep their input order.
+ */
+export function engineOrder(tests: readonly WaterTestInput[]): { order: number[]; times: number[] } {
+  const times = tests.map((t) => toMs(t.takenAt));
+  const order = tests.map((_, i) => i);
+  let sorted = true;
+  for (let i = 1; i < tests.length && sorted; i++) {
+    sorted =
+      compareTests(
+        times[i - 1] as number,
+        (tests[i - 1] as WaterTestInput).id,
+        times[i] as number,
+        (tests[i] as WaterTestInput).id,
+      ) <= 0;
   }
-  return points;
+  if (!sorted)
+    order.sort((a, b) =>
+      compareTests(
+        times[a] as number,
+        (tests[a] as WaterTestInput).id,
+        times[b] as number,
+        (tests[b] as WaterTestInput).id,
+      ),
+    );
+  return { order, times };
+}
+
+/** Oldest first; ties broken by id so shuffled input always gives the same order. */
+export function sortByTakenAt(tests: readonly WaterTestInput[]): WaterTestInput[] {
+  return engineOrder(tests).order.map((i) => tests[i] as WaterTestInput);
 }

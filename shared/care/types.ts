@@ -1,6 +1,7 @@
 import type { AnyParameterKey, ParameterKey } from './parameters';
 import type { SystemType } from './system-types';
 import type { LastKnown } from './evaluation/free-ammonia';
+import type { TestTimeline } from './test-timeline';
 
 /** One water test as the member entered it, already converted to canonical units. */
 export interface WaterTestInput {
@@ -42,8 +43,11 @@ export interface TankContext {
 
 export interface EvaluationContext {
   tank: TankContext;
-  /** Earlier tests of the same tank, any order. May include the reading itself; it is ignored. */
-  history: readonly WaterTestInput[];
+  /**
+   * Earlier tests of the same tank, any order. May include the reading itself; it is ignored. Pass a
+   * `TestTimeline` (`indexTests(tests)`) when judging the same history more than once: it is read once.
+   */
+  history: readonly WaterTestInput[] | TestTimeline;
   /**
    * The tank's last known temperature, pH and salinity before the reading, when the caller has them from the whole
    * record (the server and the form's preview do); otherwise they are looked up in `history` by the same rule.

@@ -2,7 +2,8 @@ import type { SystemType } from '../care/system-types';
 import type { TankPhase } from '../care/types';
 import type { TankShape } from '../chemistry/tank-volume';
 import type { TestMethod } from '../readings/entry-units';
-import type { DOSE_UNITS, EQUIPMENT_CHANGES, OBSERVATION_CHECKS, OBSERVATION_SCALES, SOURCE_WATER_TYPES, TankEventKind } from '../schemas/tank-event.schema';
+import type { ObservationAffected, ObservationCheck, ObservationScale, ObservationValue } from '../care/observations/vocabulary';
+import type { DOSE_UNITS, EQUIPMENT_CHANGES, SOURCE_WATER_TYPES, TankEventKind } from '../schemas/tank-event.schema';
 
 /** Words shown for the tank lists in shared/: one table each, keyed by the lists so none can be missed. */
 export const SYSTEM_TYPE_LABELS: Record<SystemType, string> = {
@@ -71,14 +72,12 @@ export const EQUIPMENT_CHANGE_LABELS: Record<(typeof EQUIPMENT_CHANGES)[number],
   failed: 'Stopped working',
 };
 
-type ObservationScale = keyof typeof OBSERVATION_SCALES;
-type ObservationValue = (typeof OBSERVATION_SCALES)[ObservationScale][number];
-
 export const OBSERVATION_SCALE_LABELS: Record<ObservationScale, string> = {
   feedingResponse: 'Feeding',
   breathing: 'Breathing (gills)',
   colour: 'Colour',
-  buoyancy: 'Swimming level',
+  buoyancy: 'Position and posture',
+  bodyCondition: 'Body shape',
   spots: 'Spots or film on the body',
   fins: 'Fins',
   hiding: 'Hiding',
@@ -89,7 +88,7 @@ export const OBSERVATION_VALUE_LABELS: Record<ObservationValue, string> = {
   normal: 'As usual',
   slow: 'Slow to eat',
   'spat-out': 'Spat food out',
-  'ignored-food': 'Ignored food',
+  'ignored-food': 'Did not eat',
   fast: 'Fast',
   laboured: 'Laboured',
   'at-surface': 'Gasping at the surface',
@@ -99,6 +98,8 @@ export const OBSERVATION_VALUE_LABELS: Record<ObservationValue, string> = {
   floating: 'Floating up',
   sinking: 'Sinking',
   tilted: 'Tilted',
+  thin: 'Thin (belly pinched in)',
+  'very-thin': 'Very thin (bones or spine show)',
   none: 'None',
   'fine-white-grains': 'Fine white grains, like salt',
   'dusty-film': 'Dusty gold or grey film',
@@ -112,7 +113,7 @@ export const OBSERVATION_VALUE_LABELS: Record<ObservationValue, string> = {
   always: 'All the time',
 };
 
-export const OBSERVATION_CHECK_LABELS: Record<(typeof OBSERVATION_CHECKS)[number], string> = {
+export const OBSERVATION_CHECK_LABELS: Record<ObservationCheck, string> = {
   scratching: 'Rubbing or scratching on rock or sand',
   lethargic: 'Listless, not moving much',
   restingOnBottom: 'Resting on the bottom',
@@ -121,4 +122,11 @@ export const OBSERVATION_CHECK_LABELS: Record<(typeof OBSERVATION_CHECKS)[number
   wounds: 'Wounds or sores',
   stringyWaste: 'Stringy white waste',
   polypsRetracted: 'Coral polyps pulled in',
+  stayingAtSurface: 'Staying at the surface',
+};
+
+export const OBSERVATION_AFFECTED_LABELS: Record<ObservationAffected, string> = {
+  one: 'One animal',
+  some: 'Some of them',
+  all: 'All of them',
 };

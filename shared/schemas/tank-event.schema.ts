@@ -1,5 +1,6 @@
 import { z } from 'zod';
 import { uuid } from './common';
+import { healthObservationSchema } from './health-observation.schema';
 import { cursor, isoDateTime, MAX_TANK_VOLUME_L, tankParams } from './tank.schema';
 import { nitrateEntrySchema, salinityEntrySchema } from './water-test.schema';
 
@@ -20,26 +21,8 @@ export const SOURCE_WATER_TYPES = ['natural-sea-water', 'mixed-salt', 'ro-di-fre
 export const DOSE_UNITS = ['mL', 'L', 'g', 'mg', 'drops', 'capsules', 'scoops', 'tsp'] as const;
 export const EQUIPMENT_CHANGES = ['added', 'removed', 'replaced', 'adjusted', 'cleaned', 'failed'] as const;
 
-/** What a keeper sees when watching the animals; each scale starts at "normal". */
-export const OBSERVATION_SCALES = {
-  feedingResponse: ['eager', 'normal', 'slow', 'spat-out', 'ignored-food'],
-  breathing: ['normal', 'fast', 'laboured', 'at-surface'],
-  colour: ['normal', 'faded', 'darker', 'patchy'],
-  buoyancy: ['normal', 'floating', 'sinking', 'tilted'],
-  spots: ['none', 'fine-white-grains', 'dusty-film', 'larger-white', 'dark', 'red'],
-  fins: ['normal', 'clamped', 'frayed', 'reddened'],
-  hiding: ['normal', 'more-than-usual', 'always'],
-} as const;
-export const OBSERVATION_CHECKS = [
-  'scratching',
-  'lethargic',
-  'restingOnBottom',
-  'swollenBelly',
-  'cloudyEyes',
-  'wounds',
-  'stringyWaste',
-  'polypsRetracted',
-] as const;
+/** The observation vocabulary lives with the rules that read it; re-exported for the forms that list it. */
+export { OBSERVATION_CHECKS, OBSERVATION_SCALES } from '../care/observations/vocabulary';
 
 const text = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters.`);
 const label = (what: string) => z.string({ message: `Say which ${what}.` }).trim().min(1, `Say which ${what}.`).max(120, 'Keep it under 120 characters.');
@@ -74,28 +57,7 @@ export const equipmentChangeDetailsSchema = z
   .object({ equipment: label('equipment'), change: z.enum(EQUIPMENT_CHANGES, { message: `Choose what happened: ${EQUIPMENT_CHANGES.join(', ')}.` }) })
   .strict();
 
-const scale = <K extends keyof typeof OBSERVATION_SCALES>(k: K) => z.enum(OBSERVATION_SCALES[k]).optional();
-export const observationDetailsSchema = z
-  .object({
-    /** Which animals, in the keeper's words, and optionally the livestock entry. */
-    animal: text(120).optional(),
-    livestockId: uuid.optional(),
-    feedingResponse: scale('feedingResponse'),
-    breathing: scale('breathing'),
-    breathsPerMinute: z.number().int().min(0).max(400).optional(),
-    colour: scale('colour'),
-    buoyancy: scale('buoyancy'),
-    spots: scale('spots'),
-    fins: scale('fins'),
-    hiding: scale('hiding'),
-    checks: z.partialRecord(z.enum(OBSERVATION_CHECKS), z.boolean()).optional(),
-    text: text(4000).optional(),
-  })
-  .strict()
-  .refine(
-    ({ animal: _a, livestockId: _l, ...seen }) => Object.values(seen).some((v) => v !== undefined && v !== ''),
-    'Record at least one thing you saw.',
-  );
+export const observationDetailsSchema = healthObservationSchema;
 
 export const livestockAddedDetailsSchema = z.object({ livestockId: uuid, speciesCommonName: z.string(), count: z.number().int() }).strict();
 export const livestockRemovedDetailsSchema = livestockAddedDetailsSchema.extend({ reason: z.string().nullable() }).strict();

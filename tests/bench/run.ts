@@ -3,19 +3,12 @@
  * performance goals are tracked here, not in timed unit tests.
  */
 import { performance } from 'node:perf_hooks';
-import { cycleStage, evaluateReading, rankTanks, SEAHORSE_LARGE_PROFILE, type TankState, type WaterTestInput } from '../../shared/care';
+import { rankTanks, type TankState } from '../../shared/care';
 import { salinityFromSpecificGravity, unionizedAmmoniaFraction } from '../../shared/chemistry';
+import { printEngineFigures, runEngineBench } from './engine';
 
 const DAY = 86_400_000;
 const NOW = Date.parse('2026-12-01T12:00:00Z');
-
-function history(days: number): WaterTestInput[] {
-  return Array.from({ length: days }, (_, i) => ({
-    id: `t${i}`,
-    takenAt: new Date(NOW - (days - i) * DAY).toISOString(),
-    values: { temperature: 24, salinity: 33, pH: 8.1, ammonia: Math.max(0, 2 - Math.abs(i - 8) / 4), nitrite: Math.max(0, 2.5 - Math.abs(i - 18) / 5), nitrate: Math.max(0, i - 10) },
-  }));
-}
 
 function bench(name: string, runs: number, fn: () => unknown): void {
   for (let i = 0; i < Math.min(200, runs); i++) fn();
@@ -25,9 +18,6 @@ function bench(name: string, runs: number, fn: () => unknown): void {
   console.log(`${name.padEnd(52)} ${(ms / runs).toFixed(4).padStart(10)} ms/op  ${Math.round((runs / ms) * 1000).toString().padStart(10)} op/s`);
 }
 
-const h60 = history(60);
-const latest = h60.at(-1)!;
-const ctx = { tank: { volumeL: 200, phase: 'established' as const, systemType: 'seahorse' as const, hasLivestock: true }, history: h60, now: new Date(NOW).toISOString() };
 const states: TankState[] = Array.from({ length: 1500 }, (_, i) => ({
   tankId: `tank-${i}`,
   createdAt: new Date(NOW - (i % 90) * DAY).toISOString(),
@@ -41,6 +31,6 @@ const states: TankState[] = Array.from({ length: 1500 }, (_, i) => ({
 console.log(`node ${process.version}, ${new Date().toISOString()}`);
 bench('unionizedAmmoniaFraction (seawater)', 200_000, () => unionizedAmmoniaFraction({ tempC: 24, pH: 8.1, salinity: 33 }));
 bench('salinityFromSpecificGravity (solver)', 50_000, () => salinityFromSpecificGravity({ sg: 1.0245, sampleTempC: 25, referenceTempC: 25 }));
-bench('evaluateReading (seahorse, 60-day history)', 5_000, () => evaluateReading(latest, SEAHORSE_LARGE_PROFILE, ctx));
-bench('cycleStage (60 daily tests)', 5_000, () => cycleStage(h60));
 bench('rankTanks (1,500 tank states)', 200, () => rankTanks(states, new Date(NOW).toISOString()));
+
+printEngineFigures(await runEngineBench());

@@ -15,7 +15,7 @@ export { timelineRouter } from './timeline.router';
 export { waterTestRouter } from './water-test.router';
 
 export { NOTHING_NEW, TankChanges, type JudgedConcern, type TankChange, type TankChangeCause, type TankChangeListener, type TankJudge, type TankVerdict } from './tank-changed';
-export { findTank, loadTank, ownedBy, requireActive } from './tank-access';
+export { findTank, loadTank, lockTank, ownedBy, requireActive } from './tank-access';
 export { listTanks, tankForCare, tankRef, type TankForCare, type TankRef } from './tank.queries';
 export { careHistory } from './water-test.queries';
 export { lastSourceNitrate } from './tank-event.queries';
@@ -25,8 +25,6 @@ export { addLivestock } from './livestock.service';
 export { createTankEvent } from './tank-event.service';
 export { createTank } from './tank.service';
 export { attachPhotos } from './tank-photo.service';
-export { createWaterTest } from './water-test.service';
-// The CSV import saves through the same steps as the form (until both share insertWaterTests).
-export { recomputeDerivedFrom } from './derived-refresh';
+export { createWaterTest, insertWaterTests, type NewWaterTest } from './water-test.service';
 export { chemistryOf, lastKnownBefore } from './water-test.context';
-export { columnsOf } from './water-test.service';
+export { takenAtsOf } from './water-test.queries';

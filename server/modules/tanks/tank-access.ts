@@ -24,3 +24,8 @@ export function ownedBy(tank: Pick<Tank, 'clubId' | 'ownerId'>): OwnedInClub {
 export function requireActive(tank: Tank): void {
   if (tank.archivedAt) throw errors.conflict('This tank is archived. Restore it to make changes.');
 }
+
+/** Holds the tank's row until the transaction ends: two imports of one file cannot both pass the duplicate check. */
+export async function lockTank(tx: EntityManager, tankId: string): Promise<void> {
+  await tx.findOne(Tank, { where: { id: tankId }, select: { id: true }, lock: { mode: 'pessimistic_write' } });
+}

@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
 import type { ParameterKey, WaterTestInput } from '@shared/care';
-import { VALUE_COLUMNS } from './water-test.entity';
+import { VALUE_COLUMNS, WaterTest } from './water-test.entity';
 
 /** The tank's tests of the last `days` days up to `now`, oldest first, as the care engine reads them (canonical units). */
 export async function careHistory(m: EntityManager, tankId: string, now: Date, days = 120): Promise<WaterTestInput[]> {
@@ -19,4 +19,10 @@ export async function careHistory(m: EntityManager, tankId: string, now: Date, d
     }
     return { id: r.id, takenAt: new Date(r.takenAt).toISOString(), values };
   });
+}
+
+/** When each of the tank's tests was taken: what an import checks its rows against for duplicates. */
+export async function takenAtsOf(m: EntityManager, tankId: string): Promise<Set<number>> {
+  const rows = await m.find(WaterTest, { where: { tankId }, select: { takenAt: true } });
+  return new Set(rows.map((r) => r.takenAt.getTime()));
 }

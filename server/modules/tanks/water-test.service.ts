@@ -1,12 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import { PARAMETER_KEYS } from '../../../shared/care/parameters';
-import type { ReadingIssue } from '../../../shared/readings/issues';
-import { normalizeWaterTest, type NormalizedWaterTest } from '../../../shared/readings/normalize-water-test';
-import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '../../../shared/schemas/water-test.schema';
-import { errors } from '../../lib/app-error';
 import type { Deps } from '@server/deps';
+import { PARAMETER_KEYS } from '@shared/care/parameters';
+import type { ReadingIssue } from '@shared/readings/issues';
+import { normalizeWaterTest, type NormalizedWaterTest } from '@shared/readings/normalize-water-test';
+import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '@shared/schemas/water-test.schema';
+import { errors } from '../../lib/app-error';
 import { storageKeysOf } from '../photos';
 import { recomputeDerivedFrom } from './derived-refresh';
 import type { Tank } from './tank.entity';
@@ -38,6 +38,38 @@ async function normalizeFor(tx: EntityManager, tank: Tank, id: string, takenAt: 
 
 type Changes = Pick<Deps, 'tankChanges'>;
 
+/** Rows per INSERT: well under PostgreSQL's 65,535 parameters per statement. */
+const BATCH_ROWS = 500;
+
+export interface NewWaterTest {
+  normalized: NormalizedWaterTest;
+  note: string;
+}
+
+/**
+ * The one way water tests are stored, one from the form or many from a spreadsheet, inside the caller's
+ * transaction: the rows go in (in batches), free ammonia is worked out again from the earliest of them on (later
+ * tests may lean on their temperature, pH or salinity), and the tank-changed seam hears of it once.
+ * Returns the new tests' ids, in the order given.
+ */
+export async function insertWaterTests(
+  tx: EntityManager,
+  deps: Changes,
+  tank: Tank,
+  tests: readonly (NewWaterTest & { id?: string })[],
+  p: { origin: WaterTest['origin']; actorId: string },
+): Promise<string[]> {
+  if (tests.length === 0) return [];
+  const rows = tests.map((t) => ({ id: t.id ?? randomUUID(), tankId: tank.id, ...columnsOf(t.normalized), note: t.note, origin: p.origin, createdById: p.actorId }));
+  for (let i = 0; i < rows.length; i += BATCH_ROWS) {
+    await tx.createQueryBuilder().insert().into(WaterTest).values(rows.slice(i, i + BATCH_ROWS)).updateEntity(false).execute();
+  }
+  await recomputeDerivedFrom(tx, tank, new Date(Math.min(...rows.map((r) => r.takenAt!.getTime()))));
+  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
+  return rows.map((r) => r.id);
+}
+
+/** A test typed into the form: normalized against the tank's record (last known values included), then stored. */
 export async function createWaterTest(
   tx: EntityManager,
   deps: Changes,
@@ -48,12 +80,8 @@ export async function createWaterTest(
 ): Promise<SavedWaterTest> {
   const id = randomUUID();
   const normalized = await normalizeFor(tx, tank, id, input.takenAt, input.entries, now);
-  await tx.insert(WaterTest, { id, tankId: tank.id, ...columnsOf(normalized), note: input.note, origin: 'form', createdById: actorId });
-  // Later tests may lean on this one's temperature, pH or salinity.
-  await recomputeDerivedFrom(tx, tank, new Date(input.takenAt));
-  const test = await tx.findOneByOrFail(WaterTest, { id });
-  await deps.tankChanges.publish(tx, tank.id, 'water-tests');
-  return { test, warnings: normalized.warnings };
+  await insertWaterTests(tx, deps, tank, [{ id, normalized, note: input.note }], { origin: 'form', actorId });
+  return { test: await tx.findOneByOrFail(WaterTest, { id }), warnings: normalized.warnings };
 }
 
 /** Merges the edit into the stored entries, then normalizes the whole test again (derived values included). */

@@ -1,6 +1,6 @@
 import { PARAMETER_KEYS, formatNumber, formatReading, parameterInfo, type ParameterKey } from '../parameters';
 import type { CareProfile, ParameterRange } from '../profiles/types';
-import { sortByTakenAt } from '../readings';
+import { indexTests, type TestTimeline } from '../test-timeline';
 import { isSaltwaterSystem } from '../system-types';
 import {
   severityRank,
@@ -84,7 +84,7 @@ function shortCitation(range: ParameterRange): string {
 
 function freeAmmoniaConcern(
   reading: WaterTestInput,
-  history: readonly WaterTestInput[],
+  history: TestTimeline,
   ctx: EvaluationContext,
   s: Situation,
 ): Concern | null {
@@ -150,7 +150,8 @@ export function evaluateReading(
 ): Concern[] {
   const { tank } = context;
   const hasLivestock = tank.hasLivestock ?? tank.phase === 'established';
-  const history = context.history.filter((t) => t.id !== reading.id);
+  // Read once; tests with the reading's own id are left out by each lookup.
+  const history = indexTests(context.history);
   const nitrateRange = profile.ranges.nitrate;
   const s: Situation = {
     profile,
@@ -173,6 +174,6 @@ export function evaluateReading(
   }
   const free = freeAmmoniaConcern(reading, history, context, s);
   if (free) concerns.push(free);
-  concerns.push(...trendConcerns(sortByTakenAt([...history, reading]), reading, profile, tank.phase));
+  concerns.push(...trendConcerns(history, reading, profile, tank.phase));
   return dedupeConcerns(concerns);
 }

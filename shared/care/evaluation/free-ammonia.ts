@@ -1,10 +1,12 @@
 import { freeAmmonia } from '@shared/chemistry';
 import { formatNumber } from '../parameters';
 import type { CareProfile } from '../profiles/types';
-import { comesBefore, sortByTakenAt, type KnownValue, type TestPosition } from '../readings';
+import { comesBefore, type KnownValue, type TestPosition } from '../readings';
 import { isSaltwaterSystem, type SystemType } from '../system-types';
-import { isoDate } from '../time';
+import { indexTests, type TestTimeline } from '../test-timeline';
+import { isoDate, toMs } from '../time';
 import type { WaterTestInput } from '../types';
+import { listOf } from './wording';
 
 /** The parameters free ammonia depends on, whose last known values may stand in for missing ones. */
 export const FREE_AMMONIA_INPUTS = ['temperature', 'pH', 'salinity'] as const;
@@ -17,13 +19,27 @@ export type LastKnown = Partial<Record<FreeAmmoniaInput, KnownValue>>;
  * measured on a test before `position` in (takenAt, id) order, however long ago; without a position, the latest of
  * all. The stored free ammonia, the concerns and the form's preview all take their last known values from here.
  */
-export function lastKnownInputs(tests: readonly WaterTestInput[], position?: TestPosition): LastKnown {
+export function lastKnownInputs(
+  tests: readonly WaterTestInput[] | TestTimeline,
+  position?: TestPosition,
+): LastKnown {
+  const timeline = indexTests(tests);
   const known: LastKnown = {};
-  for (const test of sortByTakenAt(tests)) {
+  let missing = FREE_AMMONIA_INPUTS.length;
+  // Walk back from the newest test that may count; each parameter takes the first finite value it meets.
+  let i = timeline.length - 1;
+  if (position) {
+    const limit = toMs(position.takenAt);
+    while (i >= 0 && (timeline.times[i] as number) > limit) i--;
+  }
+  for (; i >= 0 && missing > 0; i--) {
+    const test = timeline.tests[i] as WaterTestInput;
     if (position && !comesBefore(test, position)) continue;
     for (const p of FREE_AMMONIA_INPUTS) {
       const value = test.values[p];
-      if (value !== undefined && Number.isFinite(value)) known[p] = { value, takenAt: test.takenAt, testId: test.id };
+      if (known[p] || value === undefined || !Number.isFinite(value)) continue;
+      known[p] = { value, takenAt: test.takenAt, testId: test.id };
+      missing--;
     }
   }
   return known;
@@ -80,13 +96,7 @@ function describeInputs(items: readonly { text: string; input: ResolvedInput }[]
           : `assumed (${input.detail})`;
     groups.set(where, [...(groups.get(where) ?? []), text]);
   }
-  return [...groups]
-    .map(([where, texts]) => {
-      const list =
-        texts.length > 1 ? `${texts.slice(0, -1).join(', ')} and ${texts[texts.length - 1]}` : texts.join('');
-      return `${list} ${where}`;
-    })
-    .join('; ');
+  return [...groups].map(([where, texts]) => `${listOf(texts)} ${where}`).join('; ');
 }
 
 /**

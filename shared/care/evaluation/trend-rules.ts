@@ -1,6 +1,7 @@
 import { formatNumber, type ParameterKey } from '../parameters';
 import type { CareProfile } from '../profiles/types';
-import { seriesOf, type SeriesPoint } from '../readings';
+import type { SeriesPoint } from '../readings';
+import type { TestTimeline } from '../test-timeline';
 import { DAY_MS, toMs } from '../time';
 import type { Concern, TankPhase, WaterTestInput } from '../types';
 import { mentorStep } from './wording';
@@ -32,12 +33,13 @@ function slopePerWeek(points: readonly SeriesPoint[]): number {
 }
 
 function window(
-  tests: readonly WaterTestInput[],
+  history: TestTimeline,
+  reading: WaterTestInput,
   parameter: ParameterKey,
   endMs: number,
   days: number,
 ): SeriesPoint[] {
-  return seriesOf(tests, parameter, endMs - days * DAY_MS, endMs);
+  return history.seriesWith(parameter, endMs - days * DAY_MS, endMs, reading, endMs);
 }
 
 function spanDays(points: readonly SeriesPoint[]): number {
@@ -53,9 +55,9 @@ function range(points: readonly SeriesPoint[]): { min: number; max: number; risi
   return { min: Math.min(...values), max: Math.max(...values), risingNow: last >= first };
 }
 
-/** Trend concerns for the tests up to and including `reading`. `tests` must already include the reading. */
+/** Trend concerns for the tank's tests up to and including `reading` (tests in `history` with its id are left out). */
 export function trendConcerns(
-  tests: readonly WaterTestInput[],
+  history: TestTimeline,
   reading: WaterTestInput,
   profile: CareProfile,
   phase: TankPhase,
@@ -64,7 +66,7 @@ export function trendConcerns(
   const out: Concern[] = [];
 
   const nr = TREND_RULES.nitrateRising;
-  const nitrate = window(tests, 'nitrate', end, nr.windowDays);
+  const nitrate = window(history, reading, 'nitrate', end, nr.windowDays);
   // While cycling, nitrate is meant to rise: that is the bacteria working.
   if (phase === 'established' && nitrate.length >= nr.minTests && spanDays(nitrate) >= nr.minSpanDays) {
     const perWeek = slopePerWeek(nitrate);
@@ -86,7 +88,7 @@ export function trendConcerns(
   }
 
   const sd = TREND_RULES.salinityDrift;
-  const salinity = window(tests, 'salinity', end, sd.windowDays);
+  const salinity = window(history, reading, 'salinity', end, sd.windowDays);
   if (profile.ranges.salinity && salinity.length >= 2) {
     const r = range(salinity);
     if (r.max - r.min > sd.maxRange) {
@@ -113,7 +115,7 @@ export function trendConcerns(
   }
 
   const pf = TREND_RULES.pHFalling;
-  const pH = window(tests, 'pH', end, pf.windowDays);
+  const pH = window(history, reading, 'pH', end, pf.windowDays);
   if (profile.ranges.pH && pH.length >= pf.minTests && spanDays(pH) >= pf.minSpanDays) {
     const perWeek = slopePerWeek(pH);
     if (perWeek < pf.perWeek) {
@@ -134,7 +136,7 @@ export function trendConcerns(
   }
 
   const ts = TREND_RULES.temperatureSwing;
-  const temps = seriesOf(tests, 'temperature', end - ts.windowHours * 3_600_000, end);
+  const temps = history.seriesWith('temperature', end - ts.windowHours * 3_600_000, end, reading, end);
   if (temps.length >= 2) {
     const r = range(temps);
     if (r.max - r.min > ts.maxRange) {

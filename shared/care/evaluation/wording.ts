@@ -44,3 +44,14 @@ export function mentorStep(severity: 'info' | 'caution' | 'urgent'): string {
   if (severity === 'caution') return 'Tell your mentor if it is still the same at the next test.';
   return 'Ask your mentor if anything is unclear.';
 }
+
+/** "a", "a and b", "a, b and c". */
+export function listOf(words: readonly string[]): string {
+  return words.length > 1
+    ? `${words.slice(0, -1).join(', ')} and ${words[words.length - 1]}`
+    : (words[0] ?? '');
+}
+
+export function capitalised(text: string): string {
+  return text.charAt(0).toUpperCase() + text.slice(1);
+}
