@@ -110,9 +110,10 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   const { middleware: sessionMiddleware } = createSessionMiddleware(config, infra.sessionPool);
   const api = express.Router();
   // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
-  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }));
+  // The import checks its file's content itself (binary data, broken UTF-8) and says so in the file's terms.
+  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }), rejectUnstorableText({ ownRules: ['csv'] }));
   api.use(express.json({ limit: '200kb' }));
-  api.use(rejectUnstorableText);
+  api.use(rejectUnstorableText());
   api.use(healthRouter(deps));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
   api.use(unsubscribeRouter(deps));

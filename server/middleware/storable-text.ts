@@ -45,11 +45,21 @@ function unstorablePathSegments(path: string): string[] {
 
 /**
  * One rule for every route, before any handler sees the input: text the database cannot store is a 400 naming the
- * field, never a failed query answered with a 500 (ASVS 1.2.x, 2.2.1).
+ * field, never a failed query answered with a 500 (ASVS 1.2.x, 2.2.1). `ownRules` names top-level body fields whose
+ * route checks them with a more helpful message of its own (a CSV file's binary content); mounted on that route's
+ * prefix first, it marks the request checked so the app-wide guard passes it by.
  */
-export const rejectUnstorableText: RequestHandler = (req, _res, next) => {
-  const paths = [...unstorablePathSegments(req.path), ...unstorableTextPaths(req.body, ''), ...unstorableTextPaths(req.query, 'query')];
-  if (!paths.length) return next();
-  const issues: FieldIssue[] = [...new Set(paths)].map((path) => ({ path, message: UNSTORABLE }));
-  next(errors.badRequest('Some fields need attention.', issues));
-};
+export function rejectUnstorableText(options: { ownRules?: string[] } = {}): RequestHandler {
+  const own = new Set(options.ownRules ?? []);
+  return (req, res, next) => {
+    if (res.locals.storableTextChecked) return next();
+    res.locals.storableTextChecked = true;
+    const body = req.body !== null && typeof req.body === 'object' && !Array.isArray(req.body) && own.size
+      ? Object.fromEntries(Object.entries(req.body as Record<string, unknown>).filter(([k]) => !own.has(k)))
+      : req.body;
+    const paths = [...unstorablePathSegments(req.path), ...unstorableTextPaths(body, ''), ...unstorableTextPaths(req.query, 'query')];
+    if (!paths.length) return next();
+    const issues: FieldIssue[] = [...new Set(paths)].map((path) => ({ path, message: UNSTORABLE }));
+    next(errors.badRequest('Some fields need attention.', issues));
+  };
+}

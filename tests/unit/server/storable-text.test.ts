@@ -21,11 +21,21 @@ describe('text PostgreSQL cannot store', () => {
   it('when a path segment decodes to NUL, then the request is refused naming the params; a malformed escape is left to the router', () => {
     const outcome = (path: string) => {
       let passed: unknown = 'not called';
-      rejectUnstorableText({ path, body: undefined, query: {} } as unknown as Request, {} as never, (err?: unknown) => (passed = err));
+      rejectUnstorableText()({ path, body: undefined, query: {} } as unknown as Request, { locals: {} } as never, (err?: unknown) => (passed = err));
       return passed as { status?: number; issues?: { path: string }[] } | undefined;
     };
     expect(outcome('/clubs/x/care-profiles/%00')).toMatchObject({ status: 400, issues: [{ path: 'params' }] });
     expect(outcome('/clubs/x/care-profiles/%E0%A4%A')).toBeUndefined();
     expect(outcome('/clubs/x/care-profiles/reef%20tank')).toBeUndefined();
+  });
+
+  it('when a route checks a field itself, then the guard leaves that field to it and still checks the others', () => {
+    const outcome = (body: unknown) => {
+      let passed: unknown = 'not called';
+      rejectUnstorableText({ ownRules: ['csv'] })({ path: '/x', body, query: {} } as unknown as Request, { locals: {} } as never, (err?: unknown) => (passed = err));
+      return passed as { issues?: { path: string }[] } | undefined;
+    };
+    expect(outcome({ csv: 'date,pH\u0000\n' })).toBeUndefined();
+    expect(outcome({ csv: 'date,pH\n', timeZone: 'a\u0000' })).toMatchObject({ issues: [{ path: 'timeZone' }] });
   });
 });
