@@ -4,14 +4,13 @@ import { packAbilityRules } from '@shared/abilities';
 import { requestPasswordResetSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '@shared/schemas/auth.schema';
 import { hashPassword } from '../../lib/passwords';
 import { csrfTokenFor } from '../../middleware/csrf';
-import { resetRequestLimiters, signInLimiters, tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
 import { findUser, presentUser } from '../users';
 import { checkCredentials, confirmPasswordReset, requestPasswordReset, signedOut, updateOwnProfile } from './auth.service';
 import { destroySession, startSignedInSession } from './sessions';
 
-export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub'>): Router {
+export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub' | 'rateLimits'>): Router {
   const { dataSource, config, hub } = deps;
   const router = Router();
 
@@ -21,7 +20,7 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const signIn = { body: signInSchema };
-  router.post('/session', ...signInLimiters(), validate(signIn), async (req, res) => {
+  router.post('/session', ...deps.rateLimits.signIn(), validate(signIn), async (req, res) => {
     const { email, password } = inputOf(res, signIn).body;
     const user = await checkCredentials(dataSource.manager, email, password);
     const csrfToken = await startSignedInSession(req, user.id);
@@ -53,14 +52,14 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const resetRequest = { body: requestPasswordResetSchema };
-  router.post('/password-resets', ...resetRequestLimiters(), validate(resetRequest), async (req, res) => {
+  router.post('/password-resets', ...deps.rateLimits.resetRequest(), validate(resetRequest), async (req, res) => {
     await requestPasswordReset(deps, inputOf(res, resetRequest).body.email);
     // The same answer whether or not the address has an account (ASVS 6.3.8).
     res.status(202).json({ message: 'If that address has an account, a reset link is on its way.' });
   });
 
   const resetConfirm = { body: resetPasswordSchema };
-  router.post('/password-resets/confirm', tokenLimiter('reset-confirm'), validate(resetConfirm), async (req, res) => {
+  router.post('/password-resets/confirm', deps.rateLimits.token('reset-confirm'), validate(resetConfirm), async (req, res) => {
     const { token, password } = inputOf(res, resetConfirm).body;
     const passwordHash = await hashPassword(password);
     const userId = await dataSource.transaction((tx) => confirmPasswordReset(tx, token, passwordHash));

@@ -5,7 +5,6 @@ import { createInviteSchema, inviteParams } from '@shared/schemas/club.schema';
 import { clubIdParams } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { hashPassword } from '../../lib/passwords';
-import { tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
 import { startSignedInSession } from '../auth';
@@ -13,7 +12,7 @@ import { presentUser } from '../users';
 import { findInvite, pendingInvites } from './invite.queries';
 import { acceptInvite, invitePreview, presentInvite, revokeInvite, sendInvite, sendInviteAgain } from './invite.service';
 
-export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>): Router {
+export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'rateLimits'>): Router {
   const { dataSource } = deps;
   const router = Router();
   const club = [requireSignIn, validate({ params: clubIdParams }), requireClubMember];
@@ -55,12 +54,12 @@ export function inviteRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'
   });
 
   // Public: what the accept page shows before the invitee commits to anything.
-  router.get('/invites/:token', tokenLimiter('invite-preview', 60), async (req, res) => {
+  router.get('/invites/:token', deps.rateLimits.token('invite-preview', 60), async (req, res) => {
     res.json(await invitePreview(dataSource.manager, String(req.params.token)));
   });
 
   const accept = { body: acceptInviteSchema };
-  router.post('/invites/accept', tokenLimiter('invite-accept'), validate(accept), async (req, res) => {
+  router.post('/invites/accept', deps.rateLimits.token('invite-accept'), validate(accept), async (req, res) => {
     const { token, displayName, password } = inputOf(res, accept).body;
     const passwordHash = password ? await hashPassword(password) : undefined;
     const signedInId = req.viewer?.user.id ?? req.session?.userId;
