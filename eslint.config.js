@@ -52,6 +52,64 @@ const clientWalls = [
   },
 ];
 
+/**
+ * The server's walls: a module under server/modules is used only through its index.ts, by other modules and by the
+ * rest of the server alike (inside a module, files import each other directly); imports on the server may not go round
+ * in a circle; shared/ imports nothing from client/ or server/. Type-only imports are no dependency at run time, so
+ * no-cycle lets them pass (the deps object's type names every module).
+ */
+const modules = readdirSync(new URL('server/modules', import.meta.url), { withFileTypes: true })
+  .filter((d) => d.isDirectory())
+  .map((d) => d.name);
+const onlyThroughIndex = (except) => [...except, ...modules.map((m) => `./${m}/index.ts`)];
+const importSettings = {
+  'import-x/extensions': ['.ts', '.tsx', '.js'],
+  'import-x/parsers': { '@typescript-eslint/parser': ['.ts', '.tsx'] },
+  'import-x/resolver-next': [createTypeScriptImportResolver({ project: `${root}tsconfig.json` })],
+};
+const serverWalls = [
+  {
+    files: ['server/**/*.ts'],
+    plugins: { 'import-x': importX },
+    settings: importSettings,
+    rules: {
+      'import-x/no-restricted-paths': [
+        'error',
+        {
+          basePath: root,
+          zones: [
+            ...modules.map((module) => ({
+              target: `./server/modules/${module}`,
+              from: './server/modules',
+              except: onlyThroughIndex([`./${module}`]),
+              message: `Server modules use each other only through their index.ts: import from '../<module>', and export what ${module} needs there.`,
+            })),
+            {
+              target: ['./server/*.ts', './server/config', './server/db', './server/lib', './server/mail', './server/middleware', './server/realtime', './server/types'],
+              from: './server/modules',
+              except: onlyThroughIndex([]),
+              message: 'Outside server/modules, a module is used only through its index.ts.',
+            },
+            { target: './server', from: './client', message: 'The server never imports the client; shared code lives in shared/.' },
+          ],
+        },
+      ],
+      'import-x/no-cycle': ['error', { ignoreExternal: true }],
+    },
+  },
+  {
+    files: ['shared/**/*.ts'],
+    plugins: { 'import-x': importX },
+    settings: importSettings,
+    rules: {
+      'import-x/no-restricted-paths': [
+        'error',
+        { basePath: root, zones: [{ target: './shared', from: ['./client', './server'], message: 'shared/ is used by client and server: it imports nothing from client/ or server/.' }] },
+      ],
+    },
+  },
+];
+
 export default tseslint.config(
   { ignores: ['dist/**', 'node_modules/**', '.data/**', 'tests/e2e/artifacts/**', 'coverage/**'] },
   js.configs.recommended,
@@ -69,15 +127,6 @@ export default tseslint.config(
     plugins: { 'react-hooks': reactHooks },
     rules: { ...reactHooks.configs.recommended.rules },
   },
-  {
-    // shared/ is used by client and server: it may import neither.
-    files: ['shared/**/*.ts'],
-    rules: {
-      'no-restricted-imports': [
-        'error',
-        { patterns: [{ group: ['@client/*', '@server/*', '**/client/**', '**/server/**'], message: 'shared/ imports nothing from client/ or server/.' }] },
-      ],
-    },
-  },
   ...clientWalls,
+  ...serverWalls,
 );

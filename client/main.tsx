@@ -1,3 +1,4 @@
+import '@client/lib/strict-csp';
 import '@fontsource/nunito/400.css';
 import '@fontsource/nunito/600.css';
 import '@fontsource/nunito/700.css';

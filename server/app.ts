@@ -12,6 +12,10 @@ import { enableAfterCommit } from './db/after-commit';
 import type { Deps } from './deps';
 import type { Mailer } from './mail/mailer';
 import { csrfProtection } from './middleware/csrf';
+import { createRateLimits } from './middleware/rate-limits';
+import { errWithoutValues } from './lib/logger';
+import { PostgresRateLimitStore } from './lib/rate-limit-store';
+import { rejectUnstorableText } from './middleware/storable-text';
 import { apiNotFound, errorHandler } from './middleware/errors';
 import { attachViewer } from './middleware/viewer';
 import { authRouter } from './modules/auth';
@@ -21,6 +25,7 @@ import { concernRouter, judgeConcerns } from './modules/concerns';
 import { csvExportRouter, csvImportRouter, IMPORT_ROUTES_PREFIX } from './modules/csv';
 import { deskRouter } from './modules/desk';
 import { healthRouter } from './modules/health';
+import { homeRouter } from './modules/home';
 import { inviteRouter } from './modules/invites';
 import { outboxRouter } from './modules/mail';
 import { calendarFeedRouter, meetupsRouter } from './modules/meetups';
@@ -51,7 +56,8 @@ export function buildDeps(infra: Pick<AppInfrastructure, 'config' | 'dataSource'
   enableAfterCommit(dataSource);
   const notify = createNotifier({ hub, mailer, config });
   const tankChanges = new TankChanges(judgeConcerns).listen(tellMentorsOfConcerns(notify)).listen(announceTankChanges(hub));
-  return { config, dataSource, mailer, hub, notify, tankChanges };
+  const rateLimits = createRateLimits((identifier) => new PostgresRateLimitStore(dataSource, identifier));
+  return { config, dataSource, mailer, hub, notify, tankChanges, rateLimits };
 }
 
 export interface CreatedApp {
@@ -88,7 +94,7 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   const deps = buildDeps(infra);
   const app = express();
   app.disable('x-powered-by');
-  app.set('trust proxy', false);
+  app.set('trust proxy', config.trustProxy);
   app.use(
     pinoHttp({
       logger,
@@ -97,6 +103,8 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
       serializers: {
         req: (r: { method: string; url: string }) => ({ method: r.method, url: redactTokens(r.url) }),
         res: (r: { statusCode: number }) => ({ statusCode: r.statusCode }),
+        // pino-http replaces the logger's own err serializer: give it the one that drops query values.
+        err: errWithoutValues,
       },
     }),
   );
@@ -105,8 +113,10 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   const { middleware: sessionMiddleware } = createSessionMiddleware(config, infra.sessionPool);
   const api = express.Router();
   // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
-  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }));
+  // The import checks its file's content itself (binary data, broken UTF-8) and says so in the file's terms.
+  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }), rejectUnstorableText({ ownRules: ['csv'] }));
   api.use(express.json({ limit: '200kb' }));
+  api.use(rejectUnstorableText());
   api.use(healthRouter(deps));
   // Before the session and CSRF check: the signed token in the e-mail link is the only credential it takes.
   api.use(unsubscribeRouter(deps));
@@ -116,7 +126,7 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   api.use(attachViewer(deps.dataSource));
   for (const router of [
     authRouter, clubRouter, inviteRouter, assignmentRouter, mentorRequestRouter, mentorCapacityRouter, notificationRouter,
-    careProfileRouter, concernRouter, deskRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
+    careProfileRouter, concernRouter, deskRouter, homeRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
     timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter, meetupsRouter,
   ]) {
     api.use(router(deps));

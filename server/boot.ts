@@ -8,10 +8,12 @@ import type { Config } from './config/env';
 import type { Deps } from './deps';
 import { openDataSource } from './db/data-source';
 import { guardPool, POOL_DEFAULTS } from './db/pool-errors';
+import { answerUnreadableRequests } from './lib/client-error';
 import { createLogger } from './lib/logger';
+import { pruneRateLimitHits } from './lib/rate-limit-store';
 import { startMail } from './mail/start-mail';
 import { startMeetupReminders } from './modules/meetups';
-import { startDigestScheduler } from './modules/notifications/digest-scheduler';
+import { startDigestScheduler } from './modules/notifications';
 import { RealtimeHub } from './realtime/hub';
 import { startRealtime } from './realtime/realtime';
 
@@ -39,6 +41,7 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const { app, sessionMiddleware, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
   const reminders = await startMeetupReminders({ deps, logger });
   const server = createServer(app);
+  answerUnreadableRequests(server);
   // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
   const adapterPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }), logger, 'socket-adapter');
   const io = startRealtime({ httpServer: server, sessionMiddleware, hub, dataSource, adapterPool, config, logger });
@@ -47,10 +50,13 @@ export async function startServer(config: Config): Promise<RunningServer> {
     server.listen(config.port, config.host, () => resolve());
   });
   const { port } = server.address() as AddressInfo;
+  // Every instance may prune: the DELETE only removes windows that ended an hour ago.
+  const pruning = setInterval(() => void pruneRateLimitHits(dataSource).catch(() => undefined), 3_600_000).unref();
 
   let closing: Promise<void> | undefined;
   const close = () =>
     (closing ??= (async () => {
+      clearInterval(pruning);
       await new Promise<void>((resolve) => io.close(() => resolve()));
       await new Promise<void>((resolve) => {
         server.close(() => resolve());

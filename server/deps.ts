@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
 import type { Config } from './config/env';
 import type { Mailer } from './mail/mailer';
+import type { RateLimits } from './middleware/rate-limits';
 import type { Notify } from './modules/notifications';
 import type { TankChanges } from './modules/tanks';
 import type { RealtimeHub } from './realtime/hub';
@@ -18,4 +19,6 @@ export interface Deps {
   notify: Notify;
   /** The tank-changed seam: publish every change to a tank here, inside its transaction. */
   tankChanges: TankChanges;
+  /** Rate limiters whose counters every instance shares. */
+  rateLimits: RateLimits;
 }

@@ -1,4 +1,4 @@
-import { ROLE_LABELS } from '../../shared/constants/roles';
+import { ROLE_LABELS } from '@shared/constants/roles';
 import { DEMO_CLUBS, DEMO_PASSWORD, DEMO_PEOPLE } from '../../server/db/seeds/demo-people';
 
 const url = `http://127.0.0.1:${process.env.PORT ?? 3000}`;

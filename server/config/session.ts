@@ -1,7 +1,7 @@
 import connectPgSimple from 'connect-pg-simple';
 import session from 'express-session';
 import type { Pool } from 'pg';
-import { SESSION_ABSOLUTE_HOURS, SESSION_IDLE_MINUTES } from '../../shared/constants/security';
+import { SESSION_ABSOLUTE_HOURS, SESSION_IDLE_MINUTES } from '@shared/constants/security';
 import type { Config } from './env';
 
 declare module 'express-session' {
@@ -34,7 +34,10 @@ export function createSessionMiddleware(config: Config, pool: Pool) {
     resave: false,
     saveUninitialized: false,
     rolling: true, // every request pushes the idle expiry forward
-    unset: 'destroy',
+    // 'keep', not 'destroy': when loading the session fails (the database is down), req.session is unset and
+    // 'destroy' would delete the stored session at the end of that request, signing the person out. Sign-out
+    // and password resets end sessions explicitly (sessions.ts).
+    unset: 'keep',
     cookie: {
       httpOnly: true,
       sameSite: 'lax',

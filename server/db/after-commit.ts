@@ -8,21 +8,25 @@ interface Task {
   depth: number;
   run: () => void;
 }
-const pending = new WeakMap<QueryRunner, Task[]>();
-const enabled = new WeakSet<DataSource>();
+/** The queue rides on the query runner's own scratch space (`data`, which TypeORM keeps for subscribers). */
+const KEY = 'shoalwise.afterCommit';
+const queued = (qr: QueryRunner): Task[] => (qr.data as Record<string, Task[] | undefined>)[KEY] ?? [];
+const setQueued = (qr: QueryRunner, tasks: Task[] | undefined) => {
+  (qr.data as Record<string, Task[] | undefined>)[KEY] = tasks;
+};
 
 // TypeORM keeps the savepoint depth to itself; it tells which queued work a rolled-back savepoint takes with it.
 const depthOf = (qr: QueryRunner) => (qr as unknown as { transactionDepth?: number }).transactionDepth ?? 1;
 
 function settle(queryRunner: QueryRunner, committed: boolean): void {
-  const tasks = pending.get(queryRunner) ?? [];
+  const tasks = queued(queryRunner);
   if (queryRunner.isTransactionActive) {
     // A savepoint ended inside the transaction: a rollback drops what was queued within it; a release hands it to the parent.
     const depth = depthOf(queryRunner);
-    pending.set(queryRunner, committed ? tasks.map((t) => ({ ...t, depth: Math.min(t.depth, depth) })) : tasks.filter((t) => t.depth <= depth));
+    setQueued(queryRunner, committed ? tasks.map((t) => ({ ...t, depth: Math.min(t.depth, depth) })) : tasks.filter((t) => t.depth <= depth));
     return;
   }
-  pending.delete(queryRunner);
+  setQueued(queryRunner, undefined);
   if (!committed) return;
   for (const { run } of tasks) {
     try {
@@ -40,9 +44,7 @@ const afterTransaction: EntitySubscriberInterface = {
 
 /** Once per data source (createApp does it). */
 export function enableAfterCommit(dataSource: DataSource): void {
-  if (enabled.has(dataSource)) return;
-  enabled.add(dataSource);
-  dataSource.subscribers.push(afterTransaction);
+  if (!dataSource.subscribers.includes(afterTransaction)) dataSource.subscribers.push(afterTransaction);
 }
 
 /** Runs `task` once the manager's transaction commits (never if it rolls back); at once outside a transaction. */
@@ -56,5 +58,5 @@ export function afterCommit(manager: EntityManager, task: () => void): void {
     }
     return;
   }
-  pending.set(qr, [...(pending.get(qr) ?? []), { depth: depthOf(qr), run: task }]);
+  setQueued(qr, [...queued(qr), { depth: depthOf(qr), run: task }]);
 }

@@ -1,5 +1,5 @@
-import { ROLE_LABELS, type Role } from '../../shared/constants/roles';
-import { INVITE_VALID_DAYS, PASSWORD_RESET_VALID_MINUTES } from '../../shared/constants/security';
+import { ROLE_LABELS, type Role } from '@shared/constants/roles';
+import { INVITE_VALID_DAYS, PASSWORD_RESET_VALID_MINUTES } from '@shared/constants/security';
 
 export interface RenderedMail {
   subject: string;

@@ -1,13 +1,19 @@
 import type { Request, RequestHandler } from 'express';
-import { ipKeyGenerator, rateLimit, type Options } from 'express-rate-limit';
+import { ipKeyGenerator, rateLimit, type Options, type Store } from 'express-rate-limit';
 import { errors } from '../lib/app-error';
+
+/** A fresh store for one limiter (express-rate-limit refuses one store shared by two limiters). */
+export type RateLimitStoreFor = (identifier: string) => Store;
 
 const FIFTEEN_MINUTES = 15 * 60_000;
 
-function limiter(options: Partial<Options> & Pick<Options, 'limit' | 'windowMs' | 'keyGenerator'>): RequestHandler {
+type LimiterOptions = Partial<Options> & Pick<Options, 'limit' | 'windowMs' | 'keyGenerator' | 'identifier'>;
+
+function limiter(storeFor: RateLimitStoreFor, options: LimiterOptions): RequestHandler {
   return rateLimit({
     standardHeaders: 'draft-7',
     legacyHeaders: false,
+    store: storeFor(String(options.identifier)),
     ...options,
     handler: (req, _res, next, used) => {
       const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
@@ -18,32 +24,43 @@ function limiter(options: Partial<Options> & Pick<Options, 'limit' | 'windowMs' 
   });
 }
 
-/** The socket address only: `trust proxy` is off, so a forged X-Forwarded-For changes nothing. */
-const byAddress = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
-const byAccount = (req: Request) => String((req.body as { email?: unknown })?.email ?? '').trim().toLowerCase();
-
 /**
- * Sign-in throttling (ASVS 6.3.x). Only failures count. Three layers so that one address cannot hammer one account,
- * one address cannot spray many accounts, and many addresses cannot brute-force one account; the per-account layer
- * is generous so a victim is slowed, not locked out for long.
+ * The client's address as Express works it out: the socket's, or behind TRUST_PROXY the nearest address no trusted
+ * proxy added, so a forged X-Forwarded-For changes nothing either way.
  */
-export function signInLimiters(): RequestHandler[] {
-  return [
-    limiter({ identifier: 'sign-in:account+address', windowMs: FIFTEEN_MINUTES, limit: 10, skipSuccessfulRequests: true, keyGenerator: (r) => `${byAccount(r)}|${byAddress(r)}` }),
-    limiter({ identifier: 'sign-in:address', windowMs: FIFTEEN_MINUTES, limit: 50, skipSuccessfulRequests: true, keyGenerator: byAddress }),
-    limiter({ identifier: 'sign-in:account', windowMs: 60 * 60_000, limit: 100, skipSuccessfulRequests: true, keyGenerator: byAccount }),
-  ];
+const byAddress = (req: Request) => ipKeyGenerator(req.ip ?? 'unknown');
+/** The e-mail as sent, when it is text: the limiter runs before validation, and String() of a hostile object throws. */
+const byAccount = (req: Request) => {
+  const email = (req.body as { email?: unknown } | undefined)?.email;
+  return typeof email === 'string' ? email.trim().toLowerCase() : '';
+};
+
+export interface RateLimits {
+  /**
+   * Sign-in throttling (ASVS 6.3.x). Only failures count. Three layers so that one address cannot hammer one account,
+   * one address cannot spray many accounts, and many addresses cannot brute-force one account; the per-account layer
+   * is generous so a victim is slowed, not locked out for long.
+   */
+  signIn(): RequestHandler[];
+  /** Invite acceptance and reset confirmations: per address, every attempt counts. */
+  token(identifier: string, limit?: number): RequestHandler;
+  /** Reset e-mails to one address: at most a few per hour, however many addresses ask. */
+  resetRequest(): RequestHandler[];
 }
 
-/** Invite acceptance and reset requests: per address, every attempt counts. */
-export function tokenLimiter(identifier: string, limit = 20): RequestHandler {
-  return limiter({ identifier, windowMs: FIFTEEN_MINUTES, limit, keyGenerator: byAddress });
-}
-
-/** Reset e-mails to one address: at most a few per hour, however many addresses ask. */
-export function resetRequestLimiters(): RequestHandler[] {
-  return [
-    tokenLimiter('reset-request:address', 10),
-    limiter({ identifier: 'reset-request:account', windowMs: 60 * 60_000, limit: 5, keyGenerator: byAccount }),
-  ];
+/** The app's limiters, counting in the stores `storeFor` makes (PostgreSQL in the app, shared by every instance). */
+export function createRateLimits(storeFor: RateLimitStoreFor): RateLimits {
+  const token = (identifier: string, limit = 20) => limiter(storeFor, { identifier, windowMs: FIFTEEN_MINUTES, limit, keyGenerator: byAddress });
+  return {
+    signIn: () => [
+      limiter(storeFor, { identifier: 'sign-in:account+address', windowMs: FIFTEEN_MINUTES, limit: 10, skipSuccessfulRequests: true, keyGenerator: (r) => `${byAccount(r)}|${byAddress(r)}` }),
+      limiter(storeFor, { identifier: 'sign-in:address', windowMs: FIFTEEN_MINUTES, limit: 50, skipSuccessfulRequests: true, keyGenerator: byAddress }),
+      limiter(storeFor, { identifier: 'sign-in:account', windowMs: 60 * 60_000, limit: 100, skipSuccessfulRequests: true, keyGenerator: byAccount }),
+    ],
+    token,
+    resetRequest: () => [
+      token('reset-request:address', 10),
+      limiter(storeFor, { identifier: 'reset-request:account', windowMs: 60 * 60_000, limit: 5, keyGenerator: byAccount }),
+    ],
+  };
 }

@@ -1,10 +1,10 @@
 import { ForbiddenError } from '@casl/ability';
 import type { NextFunction, Request, RequestHandler, Response } from 'express';
 import type { DataSource } from 'typeorm';
-import { asSubject, type Action, type SubjectMap, type SubjectType } from '../../shared/abilities';
+import { asSubject, type Action, type SubjectMap, type SubjectType } from '@shared/abilities';
 import { ABSOLUTE_MS } from '../config/session';
 import { errors } from '../lib/app-error';
-import { loadViewer, type ViewerContext } from '../modules/access/viewer.service';
+import { loadViewer, type ViewerContext } from '../modules/access';
 
 export type { ViewerContext };
 

@@ -1,7 +1,7 @@
 import type { Server } from 'socket.io';
-import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '../../shared/events/socket-events';
+import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '@shared/events/socket-events';
 
-export type IoServer = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, { userId: string }>;
+export type IoServer = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, { userId: string; sessionId: string }>;
 
 /**
  * The app's handle on live connections. Created before the HTTP server exists (routers hold it),

@@ -5,9 +5,11 @@ import type { Pool } from 'pg';
 import type { Logger } from 'pino';
 import { Server } from 'socket.io';
 import type { DataSource } from 'typeorm';
-import { rooms } from '../../shared/events/socket-events';
+import { rooms } from '@shared/events/socket-events';
 import type { Config } from '../config/env';
+import { releaseDroppedListenClients } from './adapter-pool';
 import type { IoServer, RealtimeHub } from './hub';
+import { watchSocketSessions } from './session-watch';
 
 /** Browsers always send Origin on a WebSocket (ASVS 4.4.1); only our own origins may open one. */
 export function allowedOrigins(config: Config): Set<string> {
@@ -32,6 +34,7 @@ function originAllowed(origin: string | undefined, host: string | undefined, ori
 
 interface SessionRequest extends IncomingMessage {
   session?: { userId?: string };
+  sessionID?: string;
 }
 
 export function startRealtime(p: {
@@ -50,19 +53,21 @@ export function startRealtime(p: {
     allowRequest: (req, callback) => {
       callback(null, originAllowed(req.headers.origin, req.headers.host, origins));
     },
-    adapter: createAdapter(p.adapterPool, { tableName: 'socket_io_attachments' }),
+    adapter: createAdapter(releaseDroppedListenClients(p.adapterPool) as Pool, { tableName: 'socket_io_attachments' }),
   });
   // The same express-session as the HTTP API: no second sign-in, no token in the URL.
   io.engine.use(p.sessionMiddleware);
   io.use(async (socket, next) => {
-    const userId = (socket.request as SessionRequest).session?.userId;
-    if (!userId) return next(new Error('unauthenticated'));
+    const { session, sessionID } = socket.request as SessionRequest;
+    const userId = session?.userId;
+    if (!userId || !sessionID) return next(new Error('unauthenticated'));
     try {
       const clubs: { clubId: string }[] = await p.dataSource.query(
         `SELECT club_id AS "clubId" FROM membership WHERE user_id = $1 AND status = 'active'`,
         [userId],
       );
       socket.data.userId = userId;
+      socket.data.sessionId = sessionID;
       await socket.join([rooms.user(userId), ...clubs.map((c) => rooms.club(c.clubId))]);
       next();
     } catch (err) {
@@ -71,5 +76,7 @@ export function startRealtime(p: {
     }
   });
   p.hub.attach(io);
+  const stopWatching = watchSocketSessions({ io, dataSource: p.dataSource, intervalMs: p.config.socketSessionCheckSeconds * 1000, logger: p.logger });
+  p.httpServer.once('close', stopWatching);
   return io;
 }

@@ -9,6 +9,7 @@ import {
 import { packRules, unpackRules, type PackRule } from '@casl/ability/extra';
 import { PAST_MENTEE_READ_DAYS, type MembershipStatus, type Role } from '../constants/roles';
 import type { Action, SubjectMap, SubjectType } from './subjects';
+import { DAY_MS } from '../care/time';
 
 export type TaggedSubjects = { [K in SubjectType]: K | (SubjectMap[K] & ForcedSubject<K>) }[SubjectType];
 /** A tagged object (not a type name): what per-object checks and `<Can this={…}>` take. */
@@ -38,7 +39,6 @@ export interface Viewer {
 }
 
 const LOGGED_ON_TANK = ['Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern'] as const;
-const DAY_MS = 86_400_000;
 
 type Builder = AbilityBuilder<AppAbility>;
 
@@ -80,7 +80,6 @@ function adminRules({ can, cannot }: Builder, clubId: string, userId: string): v
   for (const s of LOGGED_ON_TANK) can('read', s, { clubId });
   can('watch', 'Tank', { clubId });
   can(['read', 'answer'], 'Question', { clubId });
-  can('read', 'AuditEvent', { clubId });
   can('manage', 'Attendance', { clubId });
   // Writing onto a member's tank is the clinic host's alone: 'manage' must not let every admin do it.
   cannot('recordResults', 'Meetup', { clubId, hostId: { $ne: userId } });

@@ -12,7 +12,6 @@ export interface MeetupSubject { clubId: string; hostId?: string | null }
 /** One member's meetup attendance in one club. */
 export interface AttendanceSubject { clubId: string; userId: string }
 export interface CareProfileSubject { clubId: string | null }
-export interface AuditEventSubject { clubId: string | null }
 export interface MentorRequestSubject { id?: string; clubId: string; requesterId: string }
 /** A mentor's own settings in one club (e.g. how many mentees they take on). */
 export interface MentorSettingsSubject { clubId: string; mentorId: string }
@@ -32,7 +31,6 @@ export interface SubjectMap {
   Meetup: MeetupSubject;
   Attendance: AttendanceSubject;
   CareProfile: CareProfileSubject;
-  AuditEvent: AuditEventSubject;
   MentorRequest: MentorRequestSubject;
   MentorSettings: MentorSettingsSubject;
 }
@@ -40,7 +38,7 @@ export interface SubjectMap {
 export type SubjectType = keyof SubjectMap;
 export const SUBJECT_TYPES = [
   'Club', 'Membership', 'Invite', 'MentorAssignment', 'User', 'Tank', 'WaterTest', 'TankEvent', 'Photo', 'Concern',
-  'Question', 'Meetup', 'Attendance', 'CareProfile', 'AuditEvent', 'MentorRequest', 'MentorSettings',
+  'Question', 'Meetup', 'Attendance', 'CareProfile', 'MentorRequest', 'MentorSettings',
 ] as const satisfies readonly SubjectType[];
 
 export const ACTIONS = [

@@ -9,6 +9,7 @@ export { MAX_WATER_CHANGE_FRACTION } from './evaluation/water-change';
 export * from './cycle-constants';
 export { cycleStage } from './cycle-stage';
 export * from './due-tests';
+export * from './due-by-day';
 export * from './triage';
 export * from './stocking-readiness';
 export { sortByTakenAt, type KnownValue, type SeriesPoint, type TestPosition } from './readings';

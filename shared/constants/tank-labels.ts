@@ -1,3 +1,4 @@
+import type { CycleStage } from '../care/cycle-constants';
 import type { SystemType } from '../care/system-types';
 import type { TankPhase } from '../care/types';
 import type { TankShape } from '../chemistry/tank-volume';
@@ -18,6 +19,16 @@ export const SYSTEM_TYPE_LABELS: Record<SystemType, string> = {
 export const TANK_PHASE_LABELS: Record<TankPhase, { label: string; hint: string }> = {
   cycling: { label: 'Still cycling', hint: 'The filter bacteria are still growing: ammonia or nitrite still show up.' },
   established: { label: 'Established', hint: 'Ammonia and nitrite stay at zero and the tank is ready for (or has) animals.' },
+};
+
+/** Where a tank is in the nitrogen cycle, in a few words (the desk's rows, the home's tank cards). */
+export const CYCLE_STAGE_WORDS: Record<CycleStage, string> = {
+  'not-started': 'cycle not started',
+  'ammonia-rising': 'cycling: ammonia',
+  'nitrite-rising': 'cycling: nitrite up',
+  'nitrite-falling': 'cycling: nitrite down',
+  cycled: 'cycled',
+  setback: 'setback',
 };
 
 export const TANK_SHAPE_LABELS: Record<TankShape, string> = {

@@ -12,11 +12,10 @@ export interface TankChangedPayload {
 
 /** Socket event names and payloads, shared by the server and the browser. Sockets notify; queries stay the store. */
 export interface ServerToClientEvents {
-  /** Something the viewer may see changed; the client refetches the named query groups. */
-  changed: (payload: { scope: string; clubId?: string; id?: string }) => void;
   /**
-   * A tank's readings or concerns changed. Sent only to people who may read that tank, checked when it is sent;
-   * the desk and the tank page refetch.
+   * Something about a tank changed: its readings, animals, settings, concerns or questions. Sent after the commit to
+   * the people who may watch that tank, checked when it is sent. The desk, the question list and thread, and the
+   * ask-about-a-reading panel refetch on it; the tank page refreshes after its own saves.
    */
   tankChanged: (payload: TankChangedPayload) => void;
   /** Concerns on a tank were raised, worsened or cleared (same audience as tankChanged): for highlights and sounds. */

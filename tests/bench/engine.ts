@@ -12,7 +12,7 @@ import {
   SEAHORSE_LARGE_PROFILE,
   type EvaluationContext,
   type WaterTestInput,
-} from '../../shared/care';
+} from '@shared/care';
 import { generateHistory } from '../unit/care/histories';
 
 export interface EngineFigure {

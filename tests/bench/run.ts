@@ -3,11 +3,11 @@
  * performance goals are tracked here, not in timed unit tests.
  */
 import { performance } from 'node:perf_hooks';
-import { rankTanks, type TankState } from '../../shared/care';
-import { salinityFromSpecificGravity, unionizedAmmoniaFraction } from '../../shared/chemistry';
+import { rankTanks, type TankState } from '@shared/care';
+import { salinityFromSpecificGravity, unionizedAmmoniaFraction } from '@shared/chemistry';
 import { printEngineFigures, runEngineBench } from './engine';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY = 86_400_000;
 const NOW = Date.parse('2026-12-01T12:00:00Z');
 
 function bench(name: string, runs: number, fn: () => unknown): void {
@@ -20,9 +20,9 @@ function bench(name: string, runs: number, fn: () => unknown): void {
 
 const states: TankState[] = Array.from({ length: 1500 }, (_, i) => ({
   tankId: `tank-${i}`,
-  createdAt: new Date(NOW - (i % 90) * DAY).toISOString(),
-  lastTestAt: i % 7 ? new Date(NOW - (i % 20) * DAY).toISOString() : null,
-  openConcerns: Array.from({ length: i % 4 }, (_, j) => ({ severity: (['info', 'caution', 'urgent'] as const)[(i + j) % 3]!, raisedAt: new Date(NOW - j * DAY).toISOString() })),
+  createdAt: new Date(NOW - (i % 90) * DAY_MS).toISOString(),
+  lastTestAt: i % 7 ? new Date(NOW - (i % 20) * DAY_MS).toISOString() : null,
+  openConcerns: Array.from({ length: i % 4 }, (_, j) => ({ severity: (['info', 'caution', 'urgent'] as const)[(i + j) % 3]!, raisedAt: new Date(NOW - j * DAY_MS).toISOString() })),
   risingTrends: i % 3,
   unansweredQuestions: i % 5 === 0 ? 1 : 0,
   phase: i % 4 ? 'established' : 'cycling',

@@ -1,7 +1,7 @@
 import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { reevaluateTank } from '../../server/modules/concerns/reevaluate-tank';
+import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
 import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot, signInOn } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';

@@ -1,7 +1,7 @@
 import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { MentorAssignment } from '../../server/modules/mentorship/mentor-assignment.entity';
+import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
 import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot, signInOn } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';

@@ -1,14 +1,14 @@
 import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
-import { reevaluateTank } from '../../server/modules/concerns/reevaluate-tank';
+import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
 import { ARTIFACTS, DESK, expectAccessible, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank, insertWaterTest } from '../helpers/tank-rows';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY = 86_400_000;
 
 
 describe('questions on a reading in the browser', () => {
@@ -32,7 +32,7 @@ describe('questions on a reading in the browser', () => {
     tankId = await insertTank(ds, { clubId: club.id, ownerId: keeper.user.id, systemType: 'seahorse', phase: 'established', volumeL: 200, name: 'Seahorse corner' });
     // A week of nitrate creeping up, ending in the test she asks about.
     for (const [daysAgo, nitrate] of [[9, 10], [7, 15], [5, 20], [3, 30], [1, 40]] as const) {
-      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY), { nitrate, pH: 8.1, temperature: 24.5, salinity: 33 });
+      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY_MS), { nitrate, pH: 8.1, temperature: 24.5, salinity: 33 });
     }
     await ds.transaction((tx) => reevaluateTank(tx, tankId));
   });

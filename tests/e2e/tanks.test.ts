@@ -6,8 +6,8 @@ import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank } from '../helpers/tank-rows';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY = 86_400_000;
 const pad = (n: number) => String(n).padStart(2, '0');
 const dmy = (d: Date) => `${pad(d.getDate())}/${pad(d.getMonth() + 1)}/${d.getFullYear()}`;
 const round = (n: number) => Number(n.toFixed(2));
@@ -21,9 +21,9 @@ function cyclingLog(): { csv: string; good: number } {
     const ammonia = day < 12 ? Math.min(2, 0.25 + day * 0.2) : Math.max(0, 2 - (day - 12) * 0.3);
     const nitrite = day < 8 ? 0 : day < 24 ? Math.min(3, (day - 8) * 0.4) : Math.max(0, 3 - (day - 24) * 0.6);
     const nitrate = day < 14 ? 0 : Math.min(40, (day - 14) * 2.5);
-    lines.push(`${dmy(new Date(Date.now() - d * DAY))},18:30,25.${d % 3},1.025,8.1,${round(ammonia)},${round(nitrite)},${round(nitrate)},${day === 0 ? 'Dosed ammonia to 2 ppm' : ''}`);
+    lines.push(`${dmy(new Date(Date.now() - d * DAY_MS))},18:30,25.${d % 3},1.025,8.1,${round(ammonia)},${round(nitrite)},${round(nitrate)},${day === 0 ? 'Dosed ammonia to 2 ppm' : ''}`);
   }
-  const bad = new Date(Date.now() - 3 * DAY);
+  const bad = new Date(Date.now() - 3 * DAY_MS);
   lines.push(`${dmy(bad)},07:00,25.1,1.025,80,0.25,0.5,10,typo`);
   lines.push(`31/02/${bad.getFullYear()},07:00,25.1,1.025,8.1,0.25,0.5,10,`);
   lines.push(`${dmy(bad)},08:00,25.1,1.025,8.1,lots,0.5,10,`);

@@ -1,6 +1,6 @@
 import type { TestProject } from 'vitest/node';
-import { createLogger } from '../../server/lib/logger';
-import { openDataSource } from '../../server/db/data-source';
+import { createLogger } from '@server/lib/logger';
+import { openDataSource } from '@server/db/data-source';
 import { testDatabaseUrl } from './test-database-url';
 
 declare module 'vitest' {

@@ -1,7 +1,7 @@
 import { existsSync } from 'node:fs';
 import type { TestProject } from 'vitest/node';
-import { startServer, type RunningServer } from '../../server/boot';
-import { loadConfig } from '../../server/config/env';
+import { startServer, type RunningServer } from '@server/boot';
+import { loadConfig } from '@server/config/env';
 import { ensureDatabase, testDatabaseUrl } from './test-database-url';
 
 declare module 'vitest' {

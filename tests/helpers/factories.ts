@@ -1,11 +1,12 @@
 import { randomUUID } from 'node:crypto';
 import type { DataSource } from 'typeorm';
-import type { MembershipStatus, Role } from '../../shared/constants/roles';
-import { hashPassword } from '../../server/lib/passwords';
-import { Club } from '../../server/modules/clubs/club.entity';
-import { Membership } from '../../server/modules/clubs/membership.entity';
-import { MentorAssignment } from '../../server/modules/mentorship/mentor-assignment.entity';
-import { User } from '../../server/modules/users/user.entity';
+import type { MembershipStatus, Role } from '@shared/constants/roles';
+import { hashPassword } from '@server/lib/passwords';
+import { Club } from '@server/modules/clubs/club.entity';
+import { Membership } from '@server/modules/clubs/membership.entity';
+import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
+import { User } from '@server/modules/users/user.entity';
+import { DAY_MS } from '@shared/care/time';
 
 export const TEST_PASSWORD = 'correct horse battery';
 let cachedHash: Promise<string> | undefined;
@@ -26,5 +27,5 @@ export async function makeMember(ds: DataSource, club: Club, name: string, role:
 }
 
 export async function assignMentor(ds: DataSource, club: Club, mentor: User, mentee: User, endedAt: Date | null = null) {
-  return ds.getRepository(MentorAssignment).save({ clubId: club.id, mentorId: mentor.id, menteeId: mentee.id, startedAt: new Date(Date.now() - 90 * 86_400_000), endedAt, createdById: null });
+  return ds.getRepository(MentorAssignment).save({ clubId: club.id, mentorId: mentor.id, menteeId: mentee.id, startedAt: new Date(Date.now() - 90 * DAY_MS), endedAt, createdById: null });
 }

@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { CapturedMail } from '../../server/modules/mail/captured-mail.entity';
+import { CapturedMail } from '@server/modules/mail/captured-mail.entity';
 
 /** Waits until the fake SMTP server has stored a message to `to` (it arrives through the real queue and SMTP). */
 export async function waitForMail(ds: DataSource, to: string, timeoutMs = 8_000): Promise<CapturedMail> {

@@ -1,6 +1,7 @@
 import type { DataSource } from 'typeorm';
-import { defaultProfileFor, type ParameterKey, type SystemType } from '../../shared/care';
-import { VALUE_COLUMNS } from '../../server/modules/tanks/water-test.entity';
+import { defaultProfileFor, type ParameterKey, type SystemType } from '@shared/care';
+import { VALUE_COLUMNS } from '@server/modules/tanks/water-test.entity';
+import { DAY_MS } from '@shared/care/time';
 
 
 /** A tank row straight into the database, for tests about what happens around tanks rather than their API. */
@@ -12,7 +13,7 @@ export async function insertTank(
   const rows: { id: string }[] = await ds.query(
     `INSERT INTO tank (club_id, owner_id, name, system_type, volume_l, volume_source, phase, care_profile_key, created_at)
      VALUES ($1, $2, $3, $4, $5, 'entered', $6, $7, $8) RETURNING id`,
-    [p.clubId, p.ownerId, p.name ?? 'Test tank', systemType, p.volumeL ?? 200, p.phase ?? 'established', defaultProfileFor(systemType).key, (p.createdAt ?? new Date(Date.now() - 90 * 86_400_000)).toISOString()],
+    [p.clubId, p.ownerId, p.name ?? 'Test tank', systemType, p.volumeL ?? 200, p.phase ?? 'established', defaultProfileFor(systemType).key, (p.createdAt ?? new Date(Date.now() - 90 * DAY_MS)).toISOString()],
   );
   return rows[0]!.id;
 }

@@ -60,7 +60,7 @@ export function Component() {
             {ability.can('update', subject) ? <Button variant="secondary" className="ml-2" busy={restore.isPending} onClick={() => restore.mutate(false)}>Restore it</Button> : null}
           </Notice>
         ) : null}
-        <TankCarePanel clubId={clubId} tankId={t.id} ownerId={t.owner.id} phase={t.phase} />
+        <TankCarePanel clubId={clubId} tankId={t.id} ownerId={t.owner.id} phase={t.phase} timeZone={me.user.timeZone} />
         <TankHistory clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} cycling={t.phase === 'cycling'} editable={canLog} />
         <Section title={t.owner.id === me.user.id ? 'Ask your mentor' : 'Questions'}>
           <Card><AskAboutRecent clubId={clubId} tankId={t.id} ownerId={t.owner.id} prefs={me.user} canAsk={active && ability.can('create', asSubject('Question', { clubId: t.clubId, askerId: t.owner.id }))} /></Card>

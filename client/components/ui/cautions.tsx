@@ -4,7 +4,7 @@ import { TONES } from './badge';
 /** The trade's usual cautions, worded once, shown beside the actions they belong to. */
 export const CAUTIONS = {
   fishlessCycling:
-    'Cycling with bottled ammonia? Use plain ammonia with no soap, scent or colour. It burns eyes and lungs: wear gloves and eye protection, keep air moving, store it away from children and never mix it with bleach.',
+    'Cycling with bottled ammonia? Use plain ammonia with no soap, scent or colour. It burns eyes and lungs: wear gloves and eye protection, keep air moving, store it away from children and never mix it with bleach. Follow the safety advice on its label.',
   dosing:
     'Dosing chemicals: follow the label, dissolve away from the animals and never raise a value faster than its daily limit. Keep products labelled and out of reach.',
   electricity:

@@ -1,9 +1,8 @@
 import type { DataSource } from 'typeorm';
 import { hashPassword } from '../../lib/passwords';
-import { Club } from '../../modules/clubs/club.entity';
-import { Membership } from '../../modules/clubs/membership.entity';
-import { MentorAssignment } from '../../modules/mentorship/mentor-assignment.entity';
-import { User } from '../../modules/users/user.entity';
+import { Club, Membership } from '../../modules/clubs';
+import { MentorAssignment } from '../../modules/mentorship';
+import { User } from '../../modules/users';
 import { DEMO_CLUBS, DEMO_PASSWORD, DEMO_PEOPLE } from './demo-people';
 import { seedDemoMeetups } from './demo-meetups';
 import { seedDemoTanks } from './demo-tanks';

@@ -1,4 +1,4 @@
-import type { Role } from '../../../shared/constants/roles';
+import type { Role } from '@shared/constants/roles';
 
 /** The invented demo clubs and people. Every name here is made up; the addresses use the reserved .example domain. */
 export const DEMO_PASSWORD = 'tidepool-demo-26';

@@ -4,14 +4,14 @@ import { createLivestockSchema, createTankSchema, type CreateTankInput } from '@
 import { createWaterTestSchema } from '@shared/schemas/water-test.schema';
 import { judgeConcerns } from '../../modules/concerns';
 import { addLivestock, createTank, createTankEvent, createWaterTest, TankChanges, type Tank } from '../../modules/tanks';
+import { DAY_MS } from '@shared/care/time';
 
 /**
  * Invented histories for the demo club, written through the same services the API uses, so derived values and
  * concerns are exactly what a real keeper would see. Numbers are shaped like a typical course, not taken from anyone.
  */
-const DAY = 86_400_000;
 /** An evening-ish moment `daysAgo` days back, never in the future (tests taken later than now are refused). */
-const at = (daysAgo: number) => new Date(Date.now() - daysAgo * DAY - 3 * 3_600_000).toISOString();
+const at = (daysAgo: number) => new Date(Date.now() - daysAgo * DAY_MS - 3 * 3_600_000).toISOString();
 const round = (n: number, dp = 2) => Math.round(n * 10 ** dp) / 10 ** dp;
 const bump = (day: number, start: number, peak: number, end: number, height: number) =>
   day <= start || day >= end ? 0 : day <= peak ? (height * (day - start)) / (peak - start) : (height * (end - day)) / (end - peak);

@@ -1,6 +1,6 @@
 import { rulesToAST } from '@casl/ability/extra';
 import { Brackets, type SelectQueryBuilder, type WhereExpressionBuilder } from 'typeorm';
-import type { Action, AppAbility, SubjectType } from '../../../shared/abilities';
+import type { Action, AppAbility, SubjectType } from '@shared/abilities';
 
 interface FieldCondition {
   operator: string;

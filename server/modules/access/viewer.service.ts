@@ -1,6 +1,6 @@
 import type { EntityManager } from 'typeorm';
-import { defineAbilityFor, type AppAbility, type Viewer } from '../../../shared/abilities';
-import { PAST_MENTEE_READ_DAYS } from '../../../shared/constants/roles';
+import { defineAbilityFor, type AppAbility, type Viewer } from '@shared/abilities';
+import { PAST_MENTEE_READ_DAYS } from '@shared/constants/roles';
 import type { User } from '../users';
 
 export interface MembershipView {

@@ -1,26 +1,17 @@
 import { Router } from 'express';
 import type { Deps } from '@server/deps';
-import { packAbilityRules } from '../../../shared/abilities';
-import { PASSWORD_RESET_VALID_MINUTES } from '../../../shared/constants/security';
-import { requestPasswordResetSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '../../../shared/schemas/auth.schema';
-import { errors } from '../../lib/app-error';
-import { hashPassword, verifyPassword } from '../../lib/passwords';
-import { hashToken, newToken } from '../../lib/tokens';
-import { passwordResetMail } from '../../mail/templates';
+import { packAbilityRules } from '@shared/abilities';
+import { requestPasswordResetSchema, resetPasswordSchema, signInSchema, updateProfileSchema } from '@shared/schemas/auth.schema';
+import { hashPassword } from '../../lib/passwords';
 import { csrfTokenFor } from '../../middleware/csrf';
-import { resetRequestLimiters, signInLimiters, tokenLimiter } from '../../middleware/rate-limits';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit';
-import { presentUser, User } from '../users';
-import { PasswordReset } from './password-reset.entity';
-import { destroySession, endSessionsOfUser, startSignedInSession } from './sessions';
+import { findUser, presentUser } from '../users';
+import { checkCredentials, confirmPasswordReset, requestPasswordReset, signedOut, updateOwnProfile } from './auth.service';
+import { destroySession, startSignedInSession } from './sessions';
 
-const BAD_CREDENTIALS = 'That e-mail and password do not match an account.';
-
-export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub'>): Router {
-  const { dataSource, mailer, config, hub } = deps;
-  const users = dataSource.getRepository(User);
+export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' | 'hub' | 'rateLimits'>): Router {
+  const { dataSource, config, hub } = deps;
   const router = Router();
 
   router.get('/csrf', (req, res) => {
@@ -29,16 +20,10 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
   });
 
   const signIn = { body: signInSchema };
-  router.post('/session', ...signInLimiters(), validate(signIn), async (req, res) => {
+  router.post('/session', ...deps.rateLimits.signIn(), validate(signIn), async (req, res) => {
     const { email, password } = inputOf(res, signIn).body;
-    const user = await users.createQueryBuilder('u').where('lower(u.email) = :email', { email }).getOne();
-    const ok = await verifyPassword(user?.passwordHash, password);
-    if (!user || !ok || user.disabledAt) {
-      await audit(dataSource.manager, { actorId: user?.id ?? null, action: 'sign-in.failed', details: { known: Boolean(user) } });
-      throw errors.unauthenticated(BAD_CREDENTIALS);
-    }
+    const user = await checkCredentials(dataSource.manager, email, password);
     const csrfToken = await startSignedInSession(req, user.id);
-    await audit(dataSource.manager, { actorId: user.id, action: 'sign-in' });
     res.json({ user: presentUser(user), csrfToken });
   });
 
@@ -46,10 +31,7 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
     const userId = req.session?.userId;
     await destroySession(req);
     res.clearCookie(config.isProduction ? '__Host-shoalwise' : 'shoalwise.sid', { path: '/' });
-    if (userId) {
-      hub.disconnectUser(userId);
-      await audit(dataSource.manager, { actorId: userId, action: 'sign-out' });
-    }
+    if (userId) await signedOut(deps, userId);
     res.status(204).end();
   });
 
@@ -65,53 +47,24 @@ export function authRouter(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config' |
 
   const profile = { body: updateProfileSchema };
   router.patch('/me', requireSignIn, validate(profile), async (req, res) => {
-    const { user } = viewerOf(req);
-    await users.update({ id: user.id }, inputOf(res, profile).body);
-    const fresh = await users.findOneByOrFail({ id: user.id });
+    const fresh = await updateOwnProfile(dataSource.manager, viewerOf(req).user.id, inputOf(res, profile).body);
     res.json({ user: presentUser(fresh) });
   });
 
   const resetRequest = { body: requestPasswordResetSchema };
-  router.post('/password-resets', ...resetRequestLimiters(), validate(resetRequest), async (req, res) => {
-    const { email } = inputOf(res, resetRequest).body;
-    const user = await users.createQueryBuilder('u').where('lower(u.email) = :email', { email }).getOne();
-    if (user && !user.disabledAt) {
-      const { token, hash } = newToken();
-      await dataSource.getRepository(PasswordReset).insert({
-        userId: user.id,
-        tokenHash: hash,
-        expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_MINUTES * 60_000),
-      });
-      const link = `${config.baseUrl}/reset-password?token=${encodeURIComponent(token)}`;
-      await mailer.enqueue({ to: user.email, ...passwordResetMail({ clubName: 'Shoalwise', link }) });
-      await audit(dataSource.manager, { actorId: user.id, action: 'password-reset.requested' });
-    }
+  router.post('/password-resets', ...deps.rateLimits.resetRequest(), validate(resetRequest), async (req, res) => {
+    await requestPasswordReset(deps, inputOf(res, resetRequest).body.email);
     // The same answer whether or not the address has an account (ASVS 6.3.8).
     res.status(202).json({ message: 'If that address has an account, a reset link is on its way.' });
   });
 
   const resetConfirm = { body: resetPasswordSchema };
-  router.post('/password-resets/confirm', tokenLimiter('reset-confirm'), validate(resetConfirm), async (req, res) => {
+  router.post('/password-resets/confirm', deps.rateLimits.token('reset-confirm'), validate(resetConfirm), async (req, res) => {
     const { token, password } = inputOf(res, resetConfirm).body;
     const passwordHash = await hashPassword(password);
-    const userId = await dataSource.transaction(async (tx) => {
-      const reset = await tx
-        .getRepository(PasswordReset)
-        .createQueryBuilder('r')
-        .setLock('pessimistic_write')
-        .where('r.token_hash = :hash', { hash: hashToken(token) })
-        .getOne();
-      if (!reset) throw errors.notFound('That reset link');
-      if (reset.usedAt) throw errors.gone('That reset link was already used. Ask for a new one.');
-      if (reset.expiresAt.getTime() < Date.now()) throw errors.gone('That reset link has expired. Ask for a new one.');
-      await tx.update(PasswordReset, { id: reset.id }, { usedAt: new Date() });
-      await tx.update(User, { id: reset.userId }, { passwordHash });
-      await endSessionsOfUser(tx, reset.userId);
-      await audit(tx, { actorId: reset.userId, action: 'password-reset.completed' });
-      return reset.userId;
-    });
+    const userId = await dataSource.transaction((tx) => confirmPasswordReset(tx, token, passwordHash));
     hub.disconnectUser(userId);
-    const user = await users.findOneByOrFail({ id: userId });
+    const user = (await findUser(dataSource.manager, userId))!;
     const csrfToken = await startSignedInSession(req, userId);
     res.json({ user: presentUser(user), csrfToken });
   });

@@ -1,5 +1,6 @@
 import { randomBytes } from 'node:crypto';
 import type { EntityManager } from 'typeorm';
+import type { Deps } from '@server/deps';
 import { BUILT_IN_PROFILES, builtInProfile, careProfileSchema, type CareProfile } from '@shared/care';
 import { errors } from '../../lib/app-error';
 import { audit } from '../audit';
@@ -42,14 +43,28 @@ export async function listProfiles(manager: EntityManager, clubId: string): Prom
 
 /** The profile a tank of this club follows: a built-in by key, or the club's copy at its newest version. */
 export async function resolveProfile(manager: EntityManager, clubId: string, key: string): Promise<CareProfile | undefined> {
-  const builtIn = builtInProfile(key);
-  if (builtIn) return builtIn;
-  const row = await manager
+  return (await resolveProfiles(manager, clubId, [key])).get(key);
+}
+
+/** `resolveProfile` for several keys in at most one query: built-in profiles need none; unknown keys are left out. */
+export async function resolveProfiles(manager: EntityManager, clubId: string, keys: readonly string[]): Promise<Map<string, CareProfile>> {
+  const found = new Map<string, CareProfile>();
+  const clubKeys: string[] = [];
+  for (const key of new Set(keys)) {
+    const builtIn = builtInProfile(key);
+    if (builtIn) found.set(key, builtIn);
+    else clubKeys.push(key);
+  }
+  if (!clubKeys.length) return found;
+  const rows: { key: string; definition: CareProfile }[] = await manager
     .createQueryBuilder(ClubCareProfileVersion, 'v')
     .innerJoin(ClubCareProfile, 'p', 'p.id = v.profile_id AND p.current_version = v.version')
-    .where('p.club_id = :clubId AND p.key = :key', { clubId, key })
-    .getOne();
-  return row?.definition;
+    .select('p.key', 'key')
+    .addSelect('v.definition', 'definition')
+    .where('p.club_id = :clubId AND p.key IN (:...clubKeys)', { clubId, clubKeys })
+    .getRawMany();
+  for (const row of rows) found.set(row.key, row.definition);
+  return found;
 }
 
 export async function loadClubProfile(manager: EntityManager, clubId: string, profileId: string) {
@@ -71,8 +86,11 @@ export async function copyProfile(tx: EntityManager, p: { clubId: string; basedO
   return profile;
 }
 
-/** Stores an edited definition as the next version, noting who changed what. Concurrent edits: the later one gets 409. */
-export async function updateProfile(tx: EntityManager, p: { clubId: string; profileId: string; definition: unknown; note: string; actorId: string; expectedVersion?: number }) {
+/**
+ * Stores an edited definition as the next version, noting who changed what. Concurrent edits: the later one gets 409.
+ * Every tank that follows the profile is judged again by the new version, in the same transaction.
+ */
+export async function updateProfile(tx: EntityManager, deps: Pick<Deps, 'tankChanges'>, p: { clubId: string; profileId: string; definition: unknown; note: string; actorId: string; expectedVersion?: number }) {
   const { profile, versions } = await loadClubProfile(tx, p.clubId, p.profileId);
   const current = versions[0]!.definition;
   const next = careProfileSchema.parse({ ...(p.definition as object), key: profile.key, version: profile.currentVersion + 1 }) as CareProfile;
@@ -87,5 +105,21 @@ export async function updateProfile(tx: EntityManager, p: { clubId: string; prof
   if (bumped.affected !== 1) throw errors.conflict('Someone else changed this profile meanwhile. Reload it and make your change again.');
   await tx.insert(ClubCareProfileVersion, { profileId: profile.id, version: next.version, definition: next, changes, note: p.note, changedById: p.actorId });
   await audit(tx, { actorId: p.actorId, clubId: p.clubId, action: 'care-profile.changed', targetType: 'CareProfile', targetId: profile.id, details: { version: next.version, changes: changes.length } });
+  await deps.tankChanges.publishForProfile(tx, p.clubId, profile.key);
   return { profile: { ...profile, currentVersion: next.version }, definition: next, changes };
+}
+
+/** A profile by key with where it comes from and, for a club's copy, every version with who changed what. */
+export async function profileDetail(manager: EntityManager, clubId: string, key: string) {
+  const profile = await resolveProfile(manager, clubId, key);
+  if (!profile) return null;
+  const clubRow = await manager.findOneBy(ClubCareProfile, { clubId, key });
+  const history = clubRow ? (await loadClubProfile(manager, clubId, clubRow.id)).versions : [];
+  return {
+    profile,
+    source: clubRow ? ('club' as const) : ('built-in' as const),
+    id: clubRow?.id,
+    basedOnKey: clubRow?.basedOnKey,
+    history: history.map((v) => ({ version: v.version, note: v.note, changes: v.changes, changedById: v.changedById, changedAt: v.changedAt.toISOString() })),
+  };
 }

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { MembershipStatus, Role } from '../../../shared/constants/roles';
+import type { MembershipStatus, Role } from '@shared/constants/roles';
 import { User } from '../users';
 import { Club } from './club.entity';
 

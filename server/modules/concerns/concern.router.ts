@@ -1,4 +1,4 @@
-import { Router, type Request } from 'express';
+import { Router, type Request, type Response } from 'express';
 import type { EntityManager } from 'typeorm';
 import type { Deps } from '@server/deps';
 import { concernActionSchema, concernListQuery, concernParams, readinessChecklistSchema, signOffSchema } from '@shared/schemas/concern.schema';
@@ -6,12 +6,11 @@ import { clubIdParams, uuid } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access';
-import { audit } from '../audit';
 import { tankForCare } from '../tanks';
 import { careSummary } from './care-summary';
-import { ConcernRow, TankReadiness } from './concern.entity';
 import { presentConcern } from './concern.presenter';
+import { concernsOfTank, lockConcern } from './concern.queries';
+import { handleConcern, saveChecklist, signOff, withdrawSignOff } from './concern.service';
 
 const tankParams = clubIdParams.extend({ tankId: uuid });
 
@@ -23,7 +22,7 @@ async function tankInClub(m: EntityManager, clubId: string, tankId: string) {
 }
 
 export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
-  const { dataSource, tankChanges } = deps;
+  const { dataSource } = deps;
   const router = Router();
   const guard = [requireSignIn];
 
@@ -32,10 +31,7 @@ export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): R
     const { params, query } = inputOf(res, list);
     const tank = await tankInClub(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'Tank', tank);
-    const qb = dataSource.getRepository(ConcernRow).createQueryBuilder('c').where('c.tank_id = :tankId', { tankId: tank.id });
-    whereAllowed(qb, viewerOf(req).ability, 'read', 'Concern', { clubId: 'c.club_id', ownerId: 'c.owner_id' });
-    if (query.status === 'live') qb.andWhere("c.status <> 'resolved'");
-    const rows = await qb.orderBy('c.raised_at', 'DESC').limit(500).getMany();
+    const rows = await concernsOfTank(dataSource.manager, viewerOf(req).ability, tank.id, query.status);
     res.json({ concerns: rows.map(presentConcern) });
   });
 
@@ -47,23 +43,12 @@ export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): R
   });
 
   const act = { params: concernParams, body: concernActionSchema };
-  const changeConcern = (action: 'acknowledge' | 'resolve') => async (req: Request, res: import('express').Response) => {
+  const changeConcern = (action: 'acknowledge' | 'resolve') => async (req: Request, res: Response) => {
     const { params, body } = inputOf(res, act);
-    const actorId = viewerOf(req).user.id;
     const row = await dataSource.transaction(async (tx) => {
-      const c = await tx.createQueryBuilder(ConcernRow, 'c').setLock('pessimistic_write').where('c.id = :id AND c.club_id = :clubId', { id: params.concernId, clubId: params.clubId }).getOne();
-      if (!c) throw errors.notFound('That concern');
+      const c = await lockConcern(tx, params.clubId, params.concernId);
       authorize(req, action, 'Concern', c);
-      if (c.status === 'resolved') throw errors.conflict('That concern is already resolved.');
-      const now = new Date();
-      const patch =
-        action === 'acknowledge'
-          ? { status: 'acknowledged' as const, acknowledgedById: actorId, acknowledgedAt: now, acknowledgeNote: body.note || null }
-          : { status: 'resolved' as const, resolvedById: actorId, resolvedAt: now, resolveNote: body.note || null, resolvedByTest: false };
-      await tx.update(ConcernRow, { id: c.id }, patch);
-      await audit(tx, { actorId, clubId: c.clubId, action: `concern.${action}d`, targetType: 'Concern', targetId: c.id });
-      await tankChanges.publish(tx, c.tankId, 'concern');
-      return { ...c, ...patch };
+      return handleConcern(tx, deps, c, action, { actorId: viewerOf(req).user.id, note: body.note });
     });
     res.json({ concern: presentConcern(row) });
   };
@@ -75,26 +60,16 @@ export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): R
     const { params, body } = inputOf(res, checklist);
     const tank = await tankInClub(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'update', 'Tank', tank);
-    await dataSource.getRepository(TankReadiness).upsert({ tankId: tank.id, ...body }, ['tankId']);
+    await saveChecklist(dataSource.manager, tank.id, body);
     res.json(await careSummary(dataSource.manager, tank));
   });
 
-  const signOff = { params: tankParams, body: signOffSchema };
-  router.post('/clubs/:clubId/tanks/:tankId/sign-off', ...guard, validate(signOff), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, signOff);
+  const signOffRoute = { params: tankParams, body: signOffSchema };
+  router.post('/clubs/:clubId/tanks/:tankId/sign-off', ...guard, validate(signOffRoute), requireClubMember, async (req, res) => {
+    const { params, body } = inputOf(res, signOffRoute);
     const tank = await tankInClub(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'signOff', 'Tank', tank);
-    const summary = await careSummary(dataSource.manager, tank);
-    const missing = summary.readiness.items.filter((i) => i.key !== 'mentor-sign-off' && !i.met);
-    if (missing.length) {
-      throw errors.conflict(`Not ready to sign off yet: ${missing.map((i) => i.label.toLowerCase()).join('; ')}.`);
-    }
-    const actorId = viewerOf(req).user.id;
-    await dataSource.transaction(async (tx) => {
-      await tx.getRepository(TankReadiness).upsert({ tankId: tank.id, signedOffById: actorId, signedOffAt: new Date(), signOffNote: body.note }, ['tankId']);
-      await audit(tx, { actorId, clubId: tank.clubId, action: 'tank.signed-off', targetType: 'Tank', targetId: tank.id });
-      await tankChanges.publish(tx, tank.id, 'sign-off');
-    });
+    await dataSource.transaction((tx) => signOff(tx, deps, tank, { actorId: viewerOf(req).user.id, note: body.note }));
     res.json(await careSummary(dataSource.manager, tank));
   });
 
@@ -102,11 +77,7 @@ export function concernRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): R
     const { params } = inputOf(res, { params: tankParams });
     const tank = await tankInClub(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'signOff', 'Tank', tank);
-    await dataSource.transaction(async (tx) => {
-      await tx.getRepository(TankReadiness).update({ tankId: tank.id }, { signedOffById: null, signedOffAt: null, signOffNote: null });
-      await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'tank.sign-off-withdrawn', targetType: 'Tank', targetId: tank.id });
-      await tankChanges.publish(tx, tank.id, 'sign-off');
-    });
+    await dataSource.transaction((tx) => withdrawSignOff(tx, deps, tank, viewerOf(req).user.id));
     res.json(await careSummary(dataSource.manager, tank));
   });
 

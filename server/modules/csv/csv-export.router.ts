@@ -3,7 +3,7 @@ import type { Deps } from '@server/deps';
 import { tankParams } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn } from '../../middleware/viewer';
-import { loadTank, ownedBy, TankEvent, WaterTest } from '../tanks';
+import { allTankEvents, allWaterTests, loadTank, ownedBy } from '../tanks';
 import { exportCsv } from './csv-export';
 
 const fileSlug = (name: string) => name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-|-$/g, '').slice(0, 40) || 'tank';
@@ -18,10 +18,7 @@ export function csvExportRouter(deps: Pick<Deps, 'dataSource'>): Router {
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
     authorize(req, 'read', 'TankEvent', ownedBy(tank));
-    const [tests, events] = await Promise.all([
-      dataSource.manager.find(WaterTest, { where: { tankId: tank.id }, order: { takenAt: 'ASC', id: 'ASC' } }),
-      dataSource.manager.find(TankEvent, { where: { tankId: tank.id }, order: { occurredAt: 'ASC', id: 'ASC' } }),
-    ]);
+    const [tests, events] = await Promise.all([allWaterTests(dataSource.manager, tank.id), allTankEvents(dataSource.manager, tank.id)]);
     const filename = `${fileSlug(tank.name)}-${new Date().toISOString().slice(0, 10)}.csv`;
     res
       .status(200)

@@ -4,7 +4,6 @@ import { csvImportSchema } from '@shared/schemas/csv-import.schema';
 import { tankParams } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit';
 import { loadTank, ownedBy, requireActive } from '../tanks';
 import { analyzeForTank, commitImport } from './csv-import.service';
 
@@ -33,9 +32,7 @@ export function csvImportRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>):
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'create', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      const outcome = await commitImport(tx, deps, tank, body, user.timeZone, user.id);
-      await audit(tx, { actorId: user.id, clubId: tank.clubId, action: 'water-tests.imported', targetType: 'Tank', targetId: tank.id, details: { imported: outcome.imported } });
-      return outcome;
+      return commitImport(tx, deps, tank, body, user.timeZone, user.id);
     });
     res.json(result);
   });

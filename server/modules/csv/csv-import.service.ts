@@ -5,6 +5,7 @@ import { CsvProblem } from '@shared/readings/csv-layout';
 import type { CsvImportRequest } from '@shared/schemas/csv-import.schema';
 import type { ImportCommitResult } from '@shared/schemas/tank-views';
 import { errors } from '../../lib/app-error';
+import { audit } from '../audit';
 import { chemistryOf, insertWaterTests, lockTank, takenAtsOf, type Tank } from '../tanks';
 
 /** Reads the file against the tank's existing tests; a file that cannot be read at all is a 400 naming the problem. */
@@ -30,6 +31,7 @@ export async function commitImport(tx: EntityManager, deps: Pick<Deps, 'tankChan
     throw errors.badRequest('No row of the file can be saved.', [{ path: 'csv', message: `${preview.invalid} rows have errors and ${preview.duplicates} are already on the tank.` }]);
   }
   await insertWaterTests(tx, deps, tank, rows, { origin: 'import', actorId });
+  await audit(tx, { actorId, clubId: tank.clubId, action: 'water-tests.imported', targetType: 'Tank', targetId: tank.id, details: { imported: rows.length } });
   const times = rows.map((r) => Date.parse(r.normalized.takenAt));
   return {
     imported: rows.length,

@@ -6,8 +6,8 @@ import { abilityCondition } from '../access';
 import { ConcernRow } from '../concerns';
 import { unansweredCountsByTank } from '../questions';
 import { careHistory } from '../tanks';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY_MS = 86_400_000;
 const SPARK_DAYS = 14;
 
 export interface DeskFilters {

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn } from 'typeorm';
-import type { Role } from '../../../shared/constants/roles';
+import type { Role } from '@shared/constants/roles';
 import { Club } from '../clubs';
 
 @Entity({ name: 'invite' })

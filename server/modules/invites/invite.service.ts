@@ -1,16 +1,17 @@
 import { IsNull, type EntityManager } from 'typeorm';
-import type { Role } from '../../../shared/constants/roles';
-import { INVITE_VALID_DAYS } from '../../../shared/constants/security';
+import type { Deps } from '@server/deps';
+import type { Role } from '@shared/constants/roles';
+import { INVITE_VALID_DAYS } from '@shared/constants/security';
 import { errors } from '../../lib/app-error';
 import { hashToken, newToken } from '../../lib/tokens';
 import { inviteMail } from '../../mail/templates';
 import type { OutgoingMail } from '../../mail/mailer';
 import { audit } from '../audit';
 import { Club, Membership } from '../clubs';
-import { User } from '../users';
+import { User, userByEmail } from '../users';
 import { Invite } from './invite.entity';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY_MS = 86_400_000;
 
 export interface IssuedInvite {
   invite: Invite;
@@ -28,7 +29,7 @@ export async function issueInvite(
   p: { clubId: string; email: string; role: Role; inviter: User; baseUrl: string },
 ): Promise<IssuedInvite> {
   const club = await tx.findOneByOrFail(Club, { id: p.clubId });
-  const existingUser = await tx.createQueryBuilder(User, 'u').where('lower(u.email) = :e', { e: p.email }).getOne();
+  const existingUser = await userByEmail(tx, p.email);
   if (existingUser) {
     const member = await tx.findOneBy(Membership, { clubId: p.clubId, userId: existingUser.id });
     if (member) throw errors.conflict(`${p.email} is already a member of ${club.name}.`);
@@ -72,4 +73,61 @@ export async function findUsableInvite(tx: EntityManager, token: string, lock = 
 export function presentInvite(i: Invite) {
   const state = i.acceptedAt ? 'accepted' : i.revokedAt ? 'revoked' : i.expiresAt.getTime() < Date.now() ? 'expired' : 'pending';
   return { id: i.id, clubId: i.clubId, email: i.email, role: i.role, state, expiresAt: i.expiresAt.toISOString(), lastSentAt: i.lastSentAt.toISOString(), createdAt: i.createdAt.toISOString() };
+}
+
+/** Issues (or refreshes) an invite and queues its e-mail once it is committed. */
+export async function sendInvite(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>, p: { clubId: string; email: string; role: Role; inviter: User }): Promise<Invite> {
+  const issued = await deps.dataSource.transaction((tx) => issueInvite(tx, { ...p, baseUrl: deps.config.baseUrl }));
+  await deps.mailer.enqueue(issued.mail);
+  return issued.invite;
+}
+
+/** A new link for a pending invite, e-mailed once it is committed. */
+export async function sendInviteAgain(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>, p: { invite: Invite; inviter: User }): Promise<Invite> {
+  const issued = await deps.dataSource.transaction((tx) => resendInvite(tx, { ...p, baseUrl: deps.config.baseUrl }));
+  await deps.mailer.enqueue(issued.mail);
+  return issued.invite;
+}
+
+/** Withdraws a pending invite (audited); withdrawing twice changes nothing, an accepted one cannot be. */
+export async function revokeInvite(m: EntityManager, invite: Invite, actorId: string): Promise<void> {
+  if (invite.acceptedAt) throw errors.conflict('That invitation was already accepted.');
+  if (invite.revokedAt) return;
+  await m.update(Invite, { id: invite.id }, { revokedAt: new Date() });
+  await audit(m, { actorId, clubId: invite.clubId, action: 'invite.revoked', targetType: 'Invite', targetId: invite.id });
+}
+
+/** What the accept page shows before the invitee commits to anything. */
+export async function invitePreview(m: EntityManager, token: string) {
+  const invite = await findUsableInvite(m, token);
+  const club = await m.findOneByOrFail(Club, { id: invite.clubId });
+  const account = await userByEmail(m, invite.email);
+  return { clubName: club.name, email: invite.email, role: invite.role, accountExists: account !== null, expiresAt: invite.expiresAt.toISOString() };
+}
+
+/**
+ * Accepts an invite: the invitee's existing account (they must be signed in as it) or a new one joins the club with
+ * the invite's role. Returns who to sign in and into which club.
+ */
+export async function acceptInvite(
+  tx: EntityManager,
+  p: { token: string; displayName?: string; passwordHash?: string; signedInId?: string },
+): Promise<{ user: User; clubId: string }> {
+  const invite = await findUsableInvite(tx, p.token, true);
+  let user = await userByEmail(tx, invite.email);
+  if (user) {
+    if (p.signedInId !== user.id) throw errors.unauthenticated(`Sign in as ${invite.email} first, then open the link again.`);
+  } else {
+    const issues = [
+      ...(!p.displayName ? [{ path: 'displayName', message: 'Enter your name.' }] : []),
+      ...(!p.passwordHash ? [{ path: 'password', message: 'Choose a password.' }] : []),
+    ];
+    if (issues.length) throw errors.badRequest('Some fields need attention.', issues);
+    user = await tx.save(tx.create(User, { email: invite.email, displayName: p.displayName!, passwordHash: p.passwordHash!, disabledAt: null }));
+  }
+  const existing = await tx.findOneBy(Membership, { clubId: invite.clubId, userId: user.id });
+  if (!existing) await tx.insert(Membership, { clubId: invite.clubId, userId: user.id, role: invite.role, status: 'active', mentorCapacity: null });
+  await tx.update(Invite, { id: invite.id }, { acceptedAt: new Date() });
+  await audit(tx, { actorId: user.id, clubId: invite.clubId, action: 'invite.accepted', targetType: 'Invite', targetId: invite.id });
+  return { user, clubId: invite.clubId };
 }

@@ -1,6 +1,6 @@
 import { Router } from 'express';
 import type { Deps } from '@server/deps';
-import { CapturedMail } from './captured-mail.entity';
+import { capturedMails } from './captured-mail.queries';
 
 const escapeHtml = (s: string) =>
   s.replace(/[&<>"']/g, (c) => ({ '&': '&amp;', '<': '&lt;', '>': '&gt;', '"': '&quot;', "'": '&#39;' })[c]!);
@@ -8,16 +8,16 @@ const linkify = (escaped: string) => escaped.replace(/https?:\/\/[^\s<]+/g, (u) 
 
 /** Development-only: what the fake SMTP server caught. Never mounted in production. */
 export function outboxRouter(deps: Pick<Deps, 'dataSource'>): Router {
-  const repo = deps.dataSource.getRepository(CapturedMail);
+  const m = deps.dataSource.manager;
   const router = Router();
 
   router.get('/api/dev/outbox', async (_req, res) => {
-    const mails = await repo.find({ order: { receivedAt: 'DESC' }, take: 200 });
+    const mails = await capturedMails(m, 200);
     res.json({ mails });
   });
 
   router.get('/dev/outbox', async (_req, res) => {
-    const mails = await repo.find({ order: { receivedAt: 'DESC' }, take: 100 });
+    const mails = await capturedMails(m, 100);
     const items = mails
       .map(
         (m) => `<article><h2>${escapeHtml(m.subject)}</h2>

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
 import type { MeetupKind, MeetupStatus, RsvpStatus } from '../../../shared/constants/meetups';
-import { Club } from '../clubs/club.entity';
-import { User } from '../users/user.entity';
+import { Club } from '../clubs';
+import { User } from '../users';
 
 @Entity({ name: 'meetup' })
 @Index('idx_meetup_club_starts', ['clubId', 'startsAt'])

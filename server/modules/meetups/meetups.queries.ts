@@ -4,7 +4,7 @@ import type { RsvpStatus } from '../../../shared/constants/meetups';
 import type { MeetupListWhen } from '../../../shared/schemas/meetup.schema';
 import type { AttendanceRowView } from '../../../shared/schemas/meetup-views';
 import { errors } from '../../lib/app-error';
-import { whereAllowed } from '../access/ability-sql';
+import { whereAllowed } from '../access';
 import { Meetup, MeetupRsvp } from './meetup.entity';
 
 const LIST_LIMIT = 100;

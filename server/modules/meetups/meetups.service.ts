@@ -5,7 +5,7 @@ import { clubTimeToUtc, describeClubTime, utcToClubTime } from '../../../shared/
 import { meetupRuleIssues, type CreateMeetupValues, type updateMeetupSchema } from '../../../shared/schemas/meetup.schema';
 import type { createWaterTestSchema } from '../../../shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
-import { audit } from '../audit/audit';
+import { audit } from '../audit';
 import type { Deps } from '../../deps';
 import { createWaterTest, loadTank, requireActive, type SavedWaterTest } from '../tanks';
 import { Meetup, MeetupRsvp } from './meetup.entity';

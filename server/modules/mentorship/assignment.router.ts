@@ -5,29 +5,17 @@ import { clubIdParams } from '@shared/schemas/common';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access';
-import { audit } from '../audit';
-import { assignMentor } from './assignment.service';
-import { MentorAssignment } from './mentor-assignment.entity';
-
-export const presentAssignment = (a: MentorAssignment) => ({
-  id: a.id,
-  clubId: a.clubId,
-  mentorId: a.mentorId,
-  menteeId: a.menteeId,
-  startedAt: a.startedAt.toISOString(),
-  endedAt: a.endedAt?.toISOString() ?? null,
-});
+import { presentAssignment } from './assignment.presenter';
+import { assignMentor, endAssignment } from './assignment.service';
+import { assignmentsOf, findAssignment } from './mentorship.queries';
 
 export function assignmentRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): Router {
   const { dataSource } = deps;
   const router = Router();
 
   router.get('/clubs/:clubId/mentor-assignments', requireSignIn, validate({ params: clubIdParams }), requireClubMember, async (req, res) => {
-    const clubId = req.params.clubId as string;
-    const qb = dataSource.getRepository(MentorAssignment).createQueryBuilder('a').where('a.club_id = :clubId', { clubId });
-    whereAllowed(qb, viewerOf(req).ability, 'read', 'MentorAssignment', { clubId: 'a.club_id', mentorId: 'a.mentor_id', menteeId: 'a.mentee_id' });
-    const rows = await qb.orderBy('a.started_at', 'DESC').getMany();
+    const { clubId } = inputOf(res, { params: clubIdParams }).params;
+    const rows = await assignmentsOf(dataSource.manager, viewerOf(req).ability, clubId);
     res.json({ assignments: rows.map(presentAssignment) });
   });
 
@@ -42,15 +30,10 @@ export function assignmentRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): Rou
   const one = { params: assignmentParams };
   router.post('/clubs/:clubId/mentor-assignments/:assignmentId/end', requireSignIn, validate(one), requireClubMember, async (req, res) => {
     const { params } = inputOf(res, one);
-    const row = await dataSource.getRepository(MentorAssignment).findOneBy({ id: params.assignmentId, clubId: params.clubId });
+    const row = await findAssignment(dataSource.manager, params.clubId, params.assignmentId);
     if (!row) throw errors.notFound('That assignment');
     authorize(req, 'update', 'MentorAssignment', row);
-    if (!row.endedAt) {
-      row.endedAt = new Date();
-      await dataSource.getRepository(MentorAssignment).update({ id: row.id }, { endedAt: row.endedAt });
-      await audit(dataSource.manager, { actorId: viewerOf(req).user.id, clubId: row.clubId, action: 'mentor-assignment.ended', targetType: 'MentorAssignment', targetId: row.id });
-    }
-    res.json({ assignment: presentAssignment(row) });
+    res.json({ assignment: presentAssignment(await endAssignment(dataSource.manager, row, viewerOf(req).user.id)) });
   });
 
   return router;

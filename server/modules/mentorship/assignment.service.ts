@@ -87,3 +87,30 @@ export async function assignMentor(tx: EntityManager, { notify }: Pick<Deps, 'no
   }
   return { assignment, previous, answeredRequestIds: answered.map((r) => r.id) };
 }
+
+/** Ends a pairing now (audited); ending one that already ended changes nothing. */
+export async function endAssignment(m: EntityManager, row: MentorAssignment, actorId: string): Promise<MentorAssignment> {
+  if (row.endedAt) return row;
+  const ended = { ...row, endedAt: new Date() };
+  await m.update(MentorAssignment, { id: row.id }, { endedAt: ended.endedAt });
+  await audit(m, { actorId, clubId: row.clubId, action: 'mentor-assignment.ended', targetType: 'MentorAssignment', targetId: row.id });
+  return ended;
+}
+
+/** How many mentees a mentor takes on in the club (audited), with how many they have now. */
+export async function setMentorCapacity(tx: EntityManager, p: { clubId: string; mentorId: string; capacity: number; actorId: string }) {
+  const m = await tx.findOne(Membership, { where: { clubId: p.clubId, userId: p.mentorId }, lock: { mode: 'pessimistic_write' } });
+  if (!m) throw errors.notFound('That mentor');
+  if (m.role === 'member' || m.status !== 'active') throw errors.conflict('Only active mentors and admins take on mentees.');
+  await tx.update(Membership, { id: m.id }, { mentorCapacity: p.capacity });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: p.clubId,
+    action: 'mentor.capacity-changed',
+    targetType: 'Membership',
+    targetId: m.id,
+    details: { mentorId: p.mentorId, from: m.mentorCapacity, to: p.capacity },
+  });
+  const menteeCount = await tx.countBy(MentorAssignment, { clubId: p.clubId, mentorId: p.mentorId, endedAt: IsNull() });
+  return { mentorId: p.mentorId, capacity: p.capacity, menteeCount };
+}

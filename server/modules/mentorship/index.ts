@@ -4,4 +4,4 @@ export { MentorRequest } from './mentor-request.entity';
 export { assignmentRouter } from './assignment.router';
 export { mentorCapacityRouter } from './mentor-capacity.router';
 export { mentorRequestRouter } from './mentor-request.router';
-export { currentMentorsOf } from './mentor-assignment.queries';
+export { currentMentorsOf } from './mentorship.queries';

@@ -8,15 +8,11 @@ import {
   listMentorRequestsQuery,
   mentorRequestParams,
 } from '@shared/schemas/mentor-request.schema';
-import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { whereAllowed } from '../access';
-import { Membership } from '../clubs';
-import { presentAssignment } from './assignment.router';
-import { assignMentor } from './assignment.service';
-import { MentorRequest } from './mentor-request.entity';
-import { createMentorRequest, declineMentorRequest, lockOpenRequest, myMentorRequest, presentRequests } from './mentor-request.service';
+import { presentAssignment } from './assignment.presenter';
+import { acceptMentorRequest, createMentorRequest, declineMentorRequest, lockOpenRequest, myMentorRequest, presentRequests } from './mentor-request.service';
+import { mentorRequestsOf } from './mentorship.queries';
 
 export function mentorRequestRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): Router {
   const { dataSource } = deps;
@@ -34,20 +30,14 @@ export function mentorRequestRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): 
   const list = { params: clubIdParams, query: listMentorRequestsQuery };
   router.get('/clubs/:clubId/mentor-requests', requireSignIn, validate(list), requireClubMember, async (req, res) => {
     const { params, query } = inputOf(res, list);
-    const { ability } = viewerOf(req);
     // The club's queue of requests is for the people who answer them.
     authorize(req, 'update', 'MentorRequest', { clubId: params.clubId, requesterId: '' });
-    const qb = dataSource
-      .getRepository(MentorRequest)
-      .createQueryBuilder('r')
-      .where('r.club_id = :clubId AND r.state = :state', { clubId: params.clubId, state: query.state });
-    whereAllowed(qb, ability, 'read', 'MentorRequest', { clubId: 'r.club_id', requesterId: 'r.requester_id' });
-    const rows = await qb.orderBy('r.created_at', query.state === 'open' ? 'ASC' : 'DESC').limit(200).getMany();
+    const rows = await mentorRequestsOf(dataSource.manager, viewerOf(req).ability, params.clubId, query.state);
     res.json({ requests: await presentRequests(dataSource.manager, rows) });
   });
 
   router.get('/clubs/:clubId/mentor-requests/mine', requireSignIn, validate({ params: clubIdParams }), requireClubMember, async (req, res) => {
-    const clubId = req.params.clubId as string;
+    const { clubId } = inputOf(res, { params: clubIdParams }).params;
     const { user } = viewerOf(req);
     authorize(req, 'read', 'MentorRequest', { clubId, requesterId: user.id });
     res.json(await myMentorRequest(dataSource.manager, clubId, user.id));
@@ -61,12 +51,7 @@ export function mentorRequestRouter(deps: Pick<Deps, 'dataSource' | 'notify'>): 
     const result = await dataSource.transaction(async (tx) => {
       const request = await lockOpenRequest(tx, params.clubId, params.requestId);
       authorize(req, 'update', 'MentorRequest', request);
-      const mentorId = body.mentorId ?? request.preferredMentorId;
-      if (!mentorId) throw errors.badRequest('Choose a mentor for this member.', [{ path: 'mentorId', message: 'Choose a mentor.' }]);
-      const requester = await tx.findOneBy(Membership, { clubId: params.clubId, userId: request.requesterId });
-      if (requester?.status !== 'active') throw errors.conflict('That member is no longer active in the club. Decline the request instead.');
-      const { assignment } = await assignMentor(tx, deps, { clubId: params.clubId, mentorId, menteeId: request.requesterId, actorId });
-      return { assignment, request: await tx.findOneByOrFail(MentorRequest, { id: request.id }) };
+      return acceptMentorRequest(tx, deps, { request, mentorId: body.mentorId, actorId });
     });
     res.json({ request: (await presentRequests(dataSource.manager, [result.request]))[0], assignment: presentAssignment(result.assignment) });
   });

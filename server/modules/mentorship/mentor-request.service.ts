@@ -6,6 +6,7 @@ import { audit } from '../audit';
 import { Membership } from '../clubs';
 import { User } from '../users';
 import { MentorAssignment } from './mentor-assignment.entity';
+import { assignMentor } from './assignment.service';
 import { MentorRequest } from './mentor-request.entity';
 
 /** Requests with the names of the people in them. */
@@ -104,4 +105,19 @@ export async function myMentorRequest(manager: EntityManager, clubId: string, us
     request: latest ? (await presentRequests(manager, [latest]))[0]! : null,
     mentor: mentor ? { userId: mentor.id, displayName: mentor.displayName } : null,
   };
+}
+
+/** An admin answers a request with a pairing: the chosen mentor, or the one the member asked for. */
+export async function acceptMentorRequest(
+  tx: EntityManager,
+  deps: Pick<Deps, 'notify'>,
+  p: { request: MentorRequest; mentorId?: string; actorId: string },
+): Promise<{ assignment: MentorAssignment; request: MentorRequest }> {
+  const { request } = p;
+  const mentorId = p.mentorId ?? request.preferredMentorId;
+  if (!mentorId) throw errors.badRequest('Choose a mentor for this member.', [{ path: 'mentorId', message: 'Choose a mentor.' }]);
+  const requester = await tx.findOneBy(Membership, { clubId: request.clubId, userId: request.requesterId });
+  if (requester?.status !== 'active') throw errors.conflict('That member is no longer active in the club. Decline the request instead.');
+  const { assignment } = await assignMentor(tx, deps, { clubId: request.clubId, mentorId, menteeId: request.requesterId, actorId: p.actorId });
+  return { assignment, request: await tx.findOneByOrFail(MentorRequest, { id: request.id }) };
 }

@@ -1,5 +1,5 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import { DEFAULT_EMAIL_MODES, DIGEST_LATEST_LOCAL_HOUR, DIGEST_LOCAL_HOUR, DIGEST_LOOKBACK_DAYS } from '../../../shared/constants/notifications';
+import { DEFAULT_EMAIL_MODES, DIGEST_LATEST_LOCAL_HOUR, DIGEST_LOCAL_HOUR, DIGEST_LOOKBACK_DAYS } from '@shared/constants/notifications';
 import type { Mailer } from '../../mail/mailer';
 import { localDayAndHour } from './local-day';
 import { digestMail, type MailLinks, type Recipient } from './notification-mail';

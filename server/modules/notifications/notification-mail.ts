@@ -1,4 +1,4 @@
-import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '../../../shared/constants/notifications';
+import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '@shared/constants/notifications';
 import { escapeHtml } from '../../mail/templates';
 import type { OutgoingMail } from '../../mail/mailer';
 import type { Notification } from './notification.entity';

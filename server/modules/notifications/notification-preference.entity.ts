@@ -1,5 +1,5 @@
 import { Column, Entity, PrimaryColumn, UpdateDateColumn } from 'typeorm';
-import type { EmailMode, NotificationKind } from '../../../shared/constants/notifications';
+import type { EmailMode, NotificationKind } from '@shared/constants/notifications';
 
 /** One row per kind the person changed; a missing row means the default in DEFAULT_EMAIL_MODES. */
 @Entity({ name: 'notification_preference' })

@@ -1,5 +1,5 @@
 import { Column, CreateDateColumn, Entity, Index, PrimaryGeneratedColumn } from 'typeorm';
-import type { NotificationKind } from '../../../shared/constants/notifications';
+import type { NotificationKind } from '@shared/constants/notifications';
 
 @Entity({ name: 'notification' })
 @Index('idx_notification_user_created', ['userId', 'createdAt', 'id'])

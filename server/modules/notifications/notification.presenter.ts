@@ -1,4 +1,4 @@
-import type { NotificationView } from '../../../shared/schemas/notification-views';
+import type { NotificationView } from '@shared/schemas/notification-views';
 import type { Notification } from './notification.entity';
 
 export function presentNotification(n: Notification, clubName: string): NotificationView {

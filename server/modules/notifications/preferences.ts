@@ -5,7 +5,8 @@ import {
   type EmailMode,
   type NotificationKind,
   type UnsubscribeScope,
-} from '../../../shared/constants/notifications';
+} from '@shared/constants/notifications';
+import { audit } from '../audit';
 import { NotificationPreference } from './notification-preference.entity';
 
 export type EmailModes = Record<NotificationKind, EmailMode>;
@@ -31,11 +32,19 @@ export async function setEmailModes(manager: EntityManager, userId: string, chan
   return emailModesOf(manager, userId);
 }
 
-/** What an unsubscribe link turns off: one kind, every kind now in the digest, or every kind. */
+/** The person changes their e-mail choices (audited). */
+export async function changeEmailModes(tx: EntityManager, userId: string, changes: Partial<EmailModes>): Promise<EmailModes> {
+  const saved = await setEmailModes(tx, userId, changes);
+  await audit(tx, { actorId: userId, action: 'notification-preferences.changed', targetType: 'User', targetId: userId, details: { changes } });
+  return saved;
+}
+
+/** What an unsubscribe link turns off (audited): one kind, every kind now in the digest, or every kind. */
 export async function unsubscribe(manager: EntityManager, userId: string, scope: UnsubscribeScope): Promise<NotificationKind[]> {
   const current = await emailModesOf(manager, userId);
   const kinds =
     scope === 'all' ? [...NOTIFICATION_KINDS] : scope === 'digest' ? NOTIFICATION_KINDS.filter((k) => current[k] === 'digest') : [scope];
   await setEmailModes(manager, userId, Object.fromEntries(kinds.map((k) => [k, 'off'])));
+  await audit(manager, { actorId: userId, action: 'notification-preferences.unsubscribed', targetType: 'User', targetId: userId, details: { scope, kinds } });
   return kinds;
 }

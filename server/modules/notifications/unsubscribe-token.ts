@@ -1,5 +1,5 @@
 import { createHmac } from 'node:crypto';
-import { UNSUBSCRIBE_SCOPES, type UnsubscribeScope } from '../../../shared/constants/notifications';
+import { UNSUBSCRIBE_SCOPES, type UnsubscribeScope } from '@shared/constants/notifications';
 import { safeEqual } from '../../lib/tokens';
 
 export interface UnsubscribeClaim {

@@ -1,9 +1,8 @@
 import { Router, type Request, type Response } from 'express';
 import type { Deps } from '@server/deps';
-import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '../../../shared/constants/notifications';
-import { unsubscribeQuery } from '../../../shared/schemas/notification.schema';
-import { audit } from '../audit';
-import { User } from '../users';
+import { NOTIFICATION_KIND_LABELS, type UnsubscribeScope } from '@shared/constants/notifications';
+import { unsubscribeQuery } from '@shared/schemas/notification.schema';
+import { findUser } from '../users';
 import { unsubscribe } from './preferences';
 import { unsubscribePage } from './unsubscribe-page';
 import { verifyUnsubscribeToken, type UnsubscribeClaim } from './unsubscribe-token';
@@ -31,7 +30,7 @@ export function unsubscribeRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Ro
     if (!parsed.success) return null;
     const claim = verifyUnsubscribeToken(config.sessionSecret, parsed.data.token);
     if (!claim) return null;
-    const user = await dataSource.getRepository(User).findOneBy({ id: claim.userId });
+    const user = await findUser(dataSource.manager, claim.userId);
     return user ? { claim, token: parsed.data.token } : null;
   };
 
@@ -51,11 +50,7 @@ export function unsubscribeRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Ro
     const found = await claimOf(req);
     if (!found) return refuse(res);
     const { userId, scope } = found.claim;
-    const kinds = await dataSource.transaction(async (tx) => {
-      const off = await unsubscribe(tx, userId, scope);
-      await audit(tx, { actorId: userId, action: 'notification-preferences.unsubscribed', targetType: 'User', targetId: userId, details: { scope, kinds: off } });
-      return off;
-    });
+    const kinds = await dataSource.transaction((tx) => unsubscribe(tx, userId, scope));
     res.type('html').send(
       unsubscribePage({
         title: 'Done: e-mails stopped',

@@ -1,6 +1,6 @@
 import { fileTypeFromBuffer } from 'file-type';
 import sharp from 'sharp';
-import { PHOTO_ACCEPTED_TYPES, PHOTO_FULL_PX, PHOTO_THUMB_PX } from '../../../shared/constants/photos';
+import { PHOTO_ACCEPTED_TYPES, PHOTO_FULL_PX, PHOTO_THUMB_PX } from '@shared/constants/photos';
 import { errors } from '../../lib/app-error';
 
 type AcceptedType = (typeof PHOTO_ACCEPTED_TYPES)[number];

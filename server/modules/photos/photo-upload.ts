@@ -1,6 +1,6 @@
 import type { RequestHandler } from 'express';
 import multer from 'multer';
-import { PHOTO_FIELD, PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '../../../shared/constants/photos';
+import { PHOTO_FIELD, PHOTO_MAX_BYTES, PHOTO_MAX_FILES } from '@shared/constants/photos';
 import { AppError, errors } from '../../lib/app-error';
 
 const MAX_TEXT_FIELDS = 8;

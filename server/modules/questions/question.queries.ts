@@ -6,8 +6,8 @@ import { whereAllowed } from '../access';
 import { valuesOf, WaterTest } from '../tanks';
 import { Question } from './question.entity';
 import type { SummaryRow } from './question.presenter';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY_MS = 86_400_000;
 /** How far either side of the test the question's chart reaches. */
 export const CHART_WINDOW_DAYS = 14;
 const LIST_LIMIT = 200;

@@ -16,8 +16,8 @@ export { waterTestRouter } from './water-test.router';
 
 export { NOTHING_NEW, TankChanges, type JudgedConcern, type TankChange, type TankChangeCause, type TankChangeListener, type TankJudge, type TankVerdict } from './tank-changed';
 export { findTank, loadTank, lockTank, ownedBy, requireActive } from './tank-access';
-export { listTanks, tankForCare, tankRef, type TankForCare, type TankRef } from './tank.queries';
-export { careHistory } from './water-test.queries';
+export { listTanks, tankForCare, tankRef, type TankForCare, type TankListRow, type TankRef } from './tank.queries';
+export { careHistories, careHistory } from './water-test.queries';
 export { lastSourceNitrate } from './tank-event.queries';
 export { presentWaterTest, valuesOf } from './water-test.presenter';
 
@@ -27,4 +27,5 @@ export { createTank } from './tank.service';
 export { attachPhotos } from './tank-photo.service';
 export { createWaterTest, insertWaterTests, type NewWaterTest, type SavedWaterTest } from './water-test.service';
 export { chemistryOf, lastKnownBefore } from './water-test.context';
-export { takenAtsOf } from './water-test.queries';
+export { allWaterTests, takenAtsOf } from './water-test.queries';
+export { allTankEvents } from './tank-event.queries';

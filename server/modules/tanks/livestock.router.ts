@@ -4,7 +4,7 @@ import { createLivestockSchema, livestockListQuery, livestockParams, tankParams,
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
 import { removePhotoFiles } from '../photos';
-import { Livestock } from './livestock.entity';
+import { livestockOf } from './livestock.queries';
 import { addLivestock, deleteLivestock, editLivestock, loadLivestock } from './livestock.service';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { presentLivestock } from './tank.presenter';
@@ -21,9 +21,7 @@ export function livestockRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'Tank', ownedBy(tank));
-    const qb = dataSource.getRepository(Livestock).createQueryBuilder('l').where('l.tank_id = :tankId', { tankId: tank.id });
-    if (!query.includeRemoved) qb.andWhere('l.removed_on IS NULL');
-    const rows = await qb.orderBy('l.added_on', 'ASC').addOrderBy('l.id', 'ASC').getMany();
+    const rows = await livestockOf(dataSource.manager, tank.id, query);
     res.json({ livestock: rows.map(presentLivestock) });
   });
 

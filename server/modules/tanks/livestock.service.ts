@@ -5,6 +5,7 @@ import type { createLivestockSchema, updateLivestockSchema } from '@shared/schem
 import { errors } from '../../lib/app-error';
 import { storageKeysOf } from '../photos';
 import { Livestock } from './livestock.entity';
+import { findLivestock } from './livestock.queries';
 import type { Tank } from './tank.entity';
 import { TankEvent } from './tank-event.entity';
 
@@ -71,7 +72,7 @@ export async function deleteLivestock(tx: EntityManager, deps: Changes, row: Liv
 }
 
 export async function loadLivestock(manager: EntityManager, tankId: string, livestockId: string): Promise<Livestock> {
-  const row = await manager.findOneBy(Livestock, { id: livestockId, tankId });
+  const row = await findLivestock(manager, tankId, livestockId);
   if (!row) throw errors.notFound('That livestock entry');
   return row;
 }

@@ -5,10 +5,10 @@ import { photoParams, photoUploadFieldsSchema, tankParams, tankPhotoListQuery } 
 import { errors } from '../../lib/app-error';
 import { inputOf, parseInput, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { deletePhotoRow, ensureUploadsDir, findPhoto, photoPath, photosOfTank, presentPhoto, receivePhotos, removePhotoFiles, type PhotoSize } from '../photos';
+import { ensureUploadsDir, findPhoto, photoPath, photosOfTank, presentPhoto, receivePhotos, type PhotoSize } from '../photos';
 import { findTank, loadTank, ownedBy, requireActive } from './tank-access';
 import type { Tank } from './tank.entity';
-import { attachPhotos } from './tank-photo.service';
+import { attachPhotos, deletePhoto } from './tank-photo.service';
 
 /** Photos of a tank, a water test or an event, served only to people who may read the tank. */
 export function photoRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
@@ -80,8 +80,7 @@ export function photoRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
     const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
     authorize(req, 'delete', 'Photo', ownedBy(tank));
     requireActive(tank);
-    await deletePhotoRow(dataSource.manager, row.id);
-    await removePhotoFiles(uploadsDir, [row.storageKey]);
+    await deletePhoto(dataSource.manager, uploadsDir, row);
     res.status(204).end();
   });
 

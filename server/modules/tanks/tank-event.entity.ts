@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import type { TankEventKind } from '../../../shared/schemas/tank-event.schema';
-import type { TankEventView } from '../../../shared/schemas/tank-views';
+import type { TankEventKind } from '@shared/schemas/tank-event.schema';
+import type { TankEventView } from '@shared/schemas/tank-views';
 import { Livestock } from './livestock.entity';
 import { Tank } from './tank.entity';
 

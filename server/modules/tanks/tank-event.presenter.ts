@@ -1,5 +1,5 @@
-import type { TankEventDetails } from '../../../shared/schemas/tank-event.schema';
-import type { TankEventView } from '../../../shared/schemas/tank-views';
+import type { TankEventDetails } from '@shared/schemas/tank-event.schema';
+import type { TankEventView } from '@shared/schemas/tank-views';
 import type { PhotosByOwner } from '../photos';
 import type { TankEvent } from './tank-event.entity';
 

@@ -6,11 +6,10 @@ import { tankParams } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit';
 import { photosOf, removePhotoFiles } from '../photos';
-import { decodeCursor, pageOf } from './cursor';
+import { decodeCursor } from './cursor';
 import { loadTank, ownedBy, requireActive } from './tank-access';
-import { TankEvent } from './tank-event.entity';
+import { findTankEvent, tankEventPage } from './tank-event.queries';
 import { presentTankEvent } from './tank-event.presenter';
 import { createTankEvent, deleteTankEvent, updateTankEvent } from './tank-event.service';
 
@@ -22,7 +21,7 @@ export function tankEventRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Rout
   const base = '/clubs/:clubId/tanks/:tankId/events';
 
   const loadEvent = async (manager: EntityManager, tankId: string, eventId: string) => {
-    const event = await manager.findOneBy(TankEvent, { id: eventId, tankId });
+    const event = await findTankEvent(manager, tankId, eventId);
     if (!event) throw errors.notFound('That entry');
     return event;
   };
@@ -32,12 +31,7 @@ export function tankEventRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Rout
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'TankEvent', ownedBy(tank));
-    const qb = dataSource.getRepository(TankEvent).createQueryBuilder('e').where('e.tank_id = :tankId', { tankId: tank.id });
-    if (query.kind) qb.andWhere('e.kind = :kind', { kind: query.kind });
-    const before = decodeCursor(query.before);
-    if (before) qb.andWhere('(e.occurred_at, e.id) < (:at, :id)', { at: before.at, id: before.id });
-    const rows = await qb.orderBy('e.occurred_at', 'DESC').addOrderBy('e.id', 'DESC').limit(query.limit + 1).getMany();
-    const page = pageOf(rows, query.limit, (e) => ({ at: e.occurredAt, id: e.id }));
+    const page = await tankEventPage(dataSource.manager, tank.id, { ...query, before: decodeCursor(query.before) });
     const photos = await photosOf(dataSource.manager, tank.clubId, { eventIds: page.items.map((e) => e.id) });
     res.json({ items: page.items.map((e) => presentTankEvent(e, photos)), nextCursor: page.nextCursor });
   });
@@ -74,10 +68,7 @@ export function tankEventRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Rout
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'delete', 'TankEvent', ownedBy(tank));
       requireActive(tank);
-      const event = await loadEvent(tx, tank.id, params.eventId);
-      const keys = await deleteTankEvent(tx, event);
-      await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'tank-event.deleted', targetType: 'TankEvent', targetId: event.id, details: { tankId: tank.id, kind: event.kind } });
-      return keys;
+      return deleteTankEvent(tx, tank, await loadEvent(tx, tank.id, params.eventId), viewerOf(req).user.id);
     });
     await removePhotoFiles(uploadsDir, photoKeys);
     res.status(204).end();

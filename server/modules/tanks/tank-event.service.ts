@@ -1,8 +1,8 @@
 import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
-import { FUTURE_TOLERANCE_MS } from '../../../shared/readings/normalize-water-test';
-import { isLinearEntry, toCanonical } from '../../../shared/readings/convert-entry';
-import { salinityFromEntry } from '../../../shared/readings/salinity';
+import { FUTURE_TOLERANCE_MS } from '@shared/readings/normalize-water-test';
+import { isLinearEntry, toCanonical } from '@shared/readings/convert-entry';
+import { salinityFromEntry } from '@shared/readings/salinity';
 import {
   LIVESTOCK_EVENT_KINDS,
   TANK_EVENT_DETAILS_SCHEMAS,
@@ -10,9 +10,10 @@ import {
   type TankEventDetails,
   type TankEventKind,
   type updateTankEventSchema,
-} from '../../../shared/schemas/tank-event.schema';
+} from '@shared/schemas/tank-event.schema';
 import { errors } from '../../lib/app-error';
 import { parseInput } from '../../middleware/validate';
+import { audit } from '../audit';
 import { storageKeysOf } from '../photos';
 import { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
@@ -80,10 +81,11 @@ export async function updateTankEvent(tx: EntityManager, tank: Tank, event: Tank
   return tx.findOneByOrFail(TankEvent, { id: event.id });
 }
 
-/** Deletes for good; returns the photo files to remove once committed. */
-export async function deleteTankEvent(tx: EntityManager, event: TankEvent): Promise<string[]> {
+/** Deletes for good, audited; returns the photo files to remove once committed. */
+export async function deleteTankEvent(tx: EntityManager, tank: Tank, event: TankEvent, actorId: string): Promise<string[]> {
   refuseLivestockKinds(event);
   const keys = await storageKeysOf(tx, { eventIds: [event.id] });
   await tx.delete(TankEvent, { id: event.id });
+  await audit(tx, { actorId, clubId: tank.clubId, action: 'tank-event.deleted', targetType: 'TankEvent', targetId: event.id, details: { tankId: tank.id, kind: event.kind } });
   return keys;
 }

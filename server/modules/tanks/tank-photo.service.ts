@@ -1,6 +1,6 @@
 import type { DataSource, EntityManager } from 'typeorm';
 import { errors } from '../../lib/app-error';
-import { processPhoto, storePhotos, type Photo, type PhotoFields } from '../photos';
+import { deletePhotoRow, processPhoto, removePhotoFiles, storePhotos, type Photo, type PhotoFields } from '../photos';
 import type { Tank } from './tank.entity';
 import { TankEvent } from './tank-event.entity';
 import { WaterTest } from './water-test.entity';
@@ -27,4 +27,10 @@ export async function attachPhotos(
   const photos = [];
   for (const [i, file] of files.entries()) photos.push(await processPhoto(file, i));
   return storePhotos(dataSource, uploadsDir, { tankId: tank.id, checkParent: (tx) => requireParentOnTank(tx, tank, fields) }, fields, photos, actorId);
+}
+
+/** Deletes a photo's row, then its files. */
+export async function deletePhoto(m: EntityManager, uploadsDir: string, photo: Photo): Promise<void> {
+  await deletePhotoRow(m, photo.id);
+  await removePhotoFiles(uploadsDir, [photo.storageKey]);
 }

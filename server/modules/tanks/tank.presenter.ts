@@ -1,5 +1,5 @@
-import { tankVolume, type TankVolumeInput } from '../../../shared/chemistry/tank-volume';
-import type { LivestockView, TankDetailView, TankView } from '../../../shared/schemas/tank-views';
+import { tankVolume, type TankVolumeInput } from '@shared/chemistry/tank-volume';
+import type { LivestockView, TankDetailView, TankView } from '@shared/schemas/tank-views';
 import type { LastKnown } from '@shared/care';
 import type { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';

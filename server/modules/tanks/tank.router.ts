@@ -4,13 +4,11 @@ import { clubIdParams } from '@shared/schemas/common';
 import { createTankSchema, tankListQuery, tankParams, updateTankSchema } from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { loadTankDetail } from './tank-detail';
-import { Tank } from './tank.entity';
 import { presentTank } from './tank.presenter';
 import { listTanks } from './tank.queries';
-import { createTank, updateTank } from './tank.service';
+import { createTank, setArchived, updateTank } from './tank.service';
 
 export function tankRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Router {
   const { dataSource } = deps;
@@ -57,22 +55,18 @@ export function tankRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>): Rout
     res.json({ tank: await loadTankDetail(dataSource.manager, saved) });
   });
 
-  const setArchived = (archived: boolean) =>
+  const archiveRoute = (archived: boolean) =>
     router.post(`/clubs/:clubId/tanks/:tankId/${archived ? 'archive' : 'restore'}`, requireSignIn, validate(one), requireClubMember, async (req, res) => {
       const { params } = inputOf(res, one);
       const saved = await dataSource.transaction(async (tx) => {
         const tank = await loadTank(tx, params.clubId, params.tankId);
         authorize(req, 'update', 'Tank', ownedBy(tank));
-        if (Boolean(tank.archivedAt) !== archived) {
-          await tx.update(Tank, { id: tank.id }, { archivedAt: archived ? new Date() : null });
-          await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: archived ? 'tank.archived' : 'tank.restored', targetType: 'Tank', targetId: tank.id });
-        }
-        return tx.findOneByOrFail(Tank, { id: tank.id });
+        return setArchived(tx, tank, archived, viewerOf(req).user.id);
       });
       res.json({ tank: await loadTankDetail(dataSource.manager, saved) });
     });
-  setArchived(true);
-  setArchived(false);
+  archiveRoute(true);
+  archiveRoute(false);
 
   return router;
 }

@@ -7,6 +7,7 @@ import { tankVolume, type TankVolumeInput as ChemistryVolumeInput } from '@share
 import { convert } from '@shared/chemistry/units';
 import { CM_PER_INCH, MAX_TANK_VOLUME_L, type createTankSchema, type tankVolumeSchema, type updateTankSchema } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
+import { audit } from '../audit';
 import { resolveProfile } from '../care';
 import { recomputeDerivedFrom } from './derived-refresh';
 import { Tank } from './tank.entity';
@@ -103,4 +104,13 @@ export async function updateTank(tx: EntityManager, deps: Pick<Deps, 'tankChange
   // Phase, volume, kind or profile all change what the readings mean.
   await deps.tankChanges.publish(tx, tank.id, 'settings');
   return updated;
+}
+
+/** Archives or restores a tank (history stays readable either way); audited when it changes. */
+export async function setArchived(tx: EntityManager, tank: Tank, archived: boolean, actorId: string): Promise<Tank> {
+  if (Boolean(tank.archivedAt) !== archived) {
+    await tx.update(Tank, { id: tank.id }, { archivedAt: archived ? new Date() : null });
+    await audit(tx, { actorId, clubId: tank.clubId, action: archived ? 'tank.archived' : 'tank.restored', targetType: 'Tank', targetId: tank.id });
+  }
+  return tx.findOneByOrFail(Tank, { id: tank.id });
 }

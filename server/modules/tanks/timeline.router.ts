@@ -1,5 +1,4 @@
 import { Router } from 'express';
-import { In } from 'typeorm';
 import type { Deps } from '@server/deps';
 import { timelineQuery } from '@shared/schemas/tank-event.schema';
 import { tankParams } from '@shared/schemas/tank.schema';
@@ -7,18 +6,11 @@ import type { TimelineItem } from '@shared/schemas/tank-views';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn } from '../../middleware/viewer';
 import { photosOf } from '../photos';
-import { decodeCursor, pageOf } from './cursor';
+import { decodeCursor } from './cursor';
 import { loadTank, ownedBy } from './tank-access';
-import { TankEvent } from './tank-event.entity';
 import { presentTankEvent } from './tank-event.presenter';
-import { WaterTest } from './water-test.entity';
+import { timelinePage } from './timeline.queries';
 import { presentWaterTest } from './water-test.presenter';
-
-interface Slot {
-  type: 'water-test' | 'event';
-  id: string;
-  at: Date;
-}
 
 /** Water tests and events of one tank, newest first, one page at a time. */
 export function timelineRouter(deps: Pick<Deps, 'dataSource'>): Router {
@@ -31,34 +23,17 @@ export function timelineRouter(deps: Pick<Deps, 'dataSource'>): Router {
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
     authorize(req, 'read', 'TankEvent', ownedBy(tank));
-    const before = decodeCursor(query.before);
-    const slots: Slot[] = await dataSource.query(
-      `SELECT type, id, at FROM (
-         SELECT 'water-test' AS type, id, taken_at AS at FROM water_test WHERE tank_id = $1
-         UNION ALL
-         SELECT 'event' AS type, id, occurred_at AS at FROM tank_event WHERE tank_id = $1
-       ) items
-       ${before ? 'WHERE (at, id) < ($3, $4)' : ''}
-       ORDER BY at DESC, id DESC LIMIT $2`,
-      before ? [tank.id, query.limit + 1, before.at, before.id] : [tank.id, query.limit + 1],
-    );
-    const page = pageOf(slots, query.limit, (s) => ({ at: new Date(s.at), id: s.id }));
-    const testIds = page.items.filter((s) => s.type === 'water-test').map((s) => s.id);
-    const eventIds = page.items.filter((s) => s.type === 'event').map((s) => s.id);
-    const [tests, events, photos] = await Promise.all([
-      testIds.length ? dataSource.manager.findBy(WaterTest, { id: In(testIds) }) : [],
-      eventIds.length ? dataSource.manager.findBy(TankEvent, { id: In(eventIds) }) : [],
-      photosOf(dataSource.manager, tank.clubId, { waterTestIds: testIds, eventIds }),
-    ]);
-    const testById = new Map(tests.map((t) => [t.id, t]));
-    const eventById = new Map(events.map((e) => [e.id, e]));
-    const items: TimelineItem[] = page.items.flatMap((s): TimelineItem[] => {
-      const at = new Date(s.at).toISOString();
-      const test = testById.get(s.id);
-      if (s.type === 'water-test' && test) return [{ type: 'water-test', at, waterTest: presentWaterTest(test, photos) }];
-      const event = eventById.get(s.id);
-      return s.type === 'event' && event ? [{ type: 'event', at, event: presentTankEvent(event, photos) }] : [];
+    const page = await timelinePage(dataSource.manager, tank.id, { limit: query.limit, before: decodeCursor(query.before) });
+    const photos = await photosOf(dataSource.manager, tank.clubId, {
+      waterTestIds: page.items.flatMap((i) => (i.type === 'water-test' ? [i.waterTest.id] : [])),
+      eventIds: page.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])),
     });
+    const items = page.items.map(
+      (i): TimelineItem =>
+        i.type === 'water-test'
+          ? { type: 'water-test', at: i.at.toISOString(), waterTest: presentWaterTest(i.waterTest, photos) }
+          : { type: 'event', at: i.at.toISOString(), event: presentTankEvent(i.event, photos) },
+    );
     res.json({ items, nextCursor: page.nextCursor });
   });
 

@@ -1,7 +1,7 @@
 import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import type { ParameterKey } from '../../../shared/care/parameters';
-import type { DerivedInfo } from '../../../shared/readings/normalize-water-test';
-import type { WaterTestEntries } from '../../../shared/schemas/water-test.schema';
+import type { ParameterKey } from '@shared/care/parameters';
+import type { DerivedInfo } from '@shared/readings/normalize-water-test';
+import type { WaterTestEntries } from '@shared/schemas/water-test.schema';
 import { Tank } from './tank.entity';
 
 @Entity({ name: 'water_test' })

@@ -1,6 +1,6 @@
-import { PARAMETER_KEYS } from '../../../shared/care/parameters';
-import type { CanonicalValues } from '../../../shared/readings/normalize-water-test';
-import type { WaterTestView } from '../../../shared/schemas/tank-views';
+import { PARAMETER_KEYS } from '@shared/care/parameters';
+import type { CanonicalValues } from '@shared/readings/normalize-water-test';
+import type { WaterTestView } from '@shared/schemas/tank-views';
 import type { PhotosByOwner } from '../photos';
 import { VALUE_COLUMNS, type WaterTest } from './water-test.entity';
 

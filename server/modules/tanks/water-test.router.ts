@@ -1,5 +1,5 @@
 import { Router } from 'express';
-import type { DataSource } from 'typeorm';
+import type { EntityManager } from 'typeorm';
 import type { Deps } from '@server/deps';
 import { tankParams } from '@shared/schemas/tank.schema';
 import type { WaterTestDetailView } from '@shared/schemas/tank-views';
@@ -7,12 +7,11 @@ import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, water
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { audit } from '../audit';
 import { photosOf, removePhotoFiles } from '../photos';
-import { decodeCursor, pageOf } from './cursor';
+import { decodeCursor } from './cursor';
 import { loadTank, ownedBy, requireActive } from './tank-access';
 import { lastKnownBefore } from './water-test.context';
-import { WaterTest } from './water-test.entity';
+import { findWaterTest, waterTestPage } from './water-test.queries';
 import { presentWaterTest } from './water-test.presenter';
 import { createWaterTest, deleteWaterTest, updateWaterTest } from './water-test.service';
 
@@ -26,8 +25,8 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
   const router = Router();
   const base = '/clubs/:clubId/tanks/:tankId/water-tests';
 
-  const loadTest = async (manager: DataSource['manager'], tankId: string, testId: string) => {
-    const test = await manager.findOneBy(WaterTest, { id: testId, tankId });
+  const loadTest = async (manager: EntityManager, tankId: string, testId: string) => {
+    const test = await findWaterTest(manager, tankId, testId);
     if (!test) throw errors.notFound('That water test');
     return test;
   };
@@ -37,13 +36,7 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
-    const qb = dataSource.getRepository(WaterTest).createQueryBuilder('w').where('w.tank_id = :tankId', { tankId: tank.id });
-    const before = decodeCursor(query.before);
-    if (before) qb.andWhere('(w.taken_at, w.id) < (:at, :id)', { at: before.at, id: before.id });
-    if (query.from) qb.andWhere('w.taken_at >= :from', { from: new Date(query.from) });
-    if (query.to) qb.andWhere('w.taken_at <= :to', { to: new Date(query.to) });
-    const rows = await qb.orderBy('w.taken_at', 'DESC').addOrderBy('w.id', 'DESC').limit(query.limit + 1).getMany();
-    const page = pageOf(rows, query.limit, (t) => ({ at: t.takenAt, id: t.id }));
+    const page = await waterTestPage(dataSource.manager, tank.id, { ...query, before: decodeCursor(query.before) });
     const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: page.items.map((t) => t.id) });
     res.json({ items: page.items.map((t) => presentWaterTest(t, photos)), nextCursor: page.nextCursor });
   });
@@ -91,10 +84,7 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'delete', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      const test = await loadTest(tx, tank.id, params.testId);
-      const keys = await deleteWaterTest(tx, deps, tank, test);
-      await audit(tx, { actorId: viewerOf(req).user.id, clubId: tank.clubId, action: 'water-test.deleted', targetType: 'WaterTest', targetId: test.id, details: { tankId: tank.id, takenAt: test.takenAt.toISOString() } });
-      return keys;
+      return deleteWaterTest(tx, deps, tank, await loadTest(tx, tank.id, params.testId), viewerOf(req).user.id);
     });
     await removePhotoFiles(uploadsDir, photoKeys);
     res.status(204).end();

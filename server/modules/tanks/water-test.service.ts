@@ -7,6 +7,7 @@ import type { ReadingIssue } from '@shared/readings/issues';
 import { normalizeWaterTest, type NormalizedWaterTest } from '@shared/readings/normalize-water-test';
 import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '@shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
+import { audit } from '../audit';
 import { storageKeysOf } from '../photos';
 import { recomputeDerivedFrom } from './derived-refresh';
 import type { Tank } from './tank.entity';
@@ -111,10 +112,11 @@ export async function updateWaterTest(
   return { test: saved, warnings: normalized.warnings };
 }
 
-/** Deletes for good (photos included); returns the photo files to remove once committed. */
-export async function deleteWaterTest(tx: EntityManager, deps: Changes, tank: Tank, test: WaterTest): Promise<string[]> {
+/** Deletes for good (photos included), audited; returns the photo files to remove once committed. */
+export async function deleteWaterTest(tx: EntityManager, deps: Changes, tank: Tank, test: WaterTest, actorId: string): Promise<string[]> {
   const keys = await storageKeysOf(tx, { waterTestIds: [test.id] });
   await tx.delete(WaterTest, { id: test.id });
+  await audit(tx, { actorId, clubId: tank.clubId, action: 'water-test.deleted', targetType: 'WaterTest', targetId: test.id, details: { tankId: tank.id, takenAt: test.takenAt.toISOString() } });
   await recomputeDerivedFrom(tx, tank, test.takenAt);
   await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return keys;

@@ -1,3 +1,4 @@
 /** People with an account. */
 export { User } from './user.entity';
 export { presentUser } from './user.presenter';
+export { findUser, userByEmail } from './user.queries';

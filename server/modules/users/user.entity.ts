@@ -1,6 +1,6 @@
 import { Column, CreateDateColumn, Entity, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
-import type { ExperienceLevel } from '../../../shared/constants/roles';
-import type { SalinityDisplay, TemperatureUnit, VolumeUnit } from '../../../shared/constants/units';
+import type { ExperienceLevel } from '@shared/constants/roles';
+import type { SalinityDisplay, TemperatureUnit, VolumeUnit } from '@shared/constants/units';
 
 @Entity({ name: 'app_user' })
 export class User {

@@ -1,5 +1,5 @@
-import type { UploadFile } from '../../helpers/http';
-import { png } from '../../helpers/images';
+import type { UploadFile } from '@tests/helpers/http';
+import { png } from '@tests/helpers/images';
 import type { Persona, World } from './world';
 
 type Expect = Record<Persona, number>;

@@ -1,15 +1,15 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { defineAbilityFor } from '../../../shared/abilities';
-import { whereAllowed } from '../../../server/modules/access/ability-sql';
-import { loadViewer } from '../../../server/modules/access/viewer.service';
-import { Membership } from '../../../server/modules/clubs/membership.entity';
-import { MentorAssignment } from '../../../server/modules/mentorship/mentor-assignment.entity';
-import { listTanks } from '../../../server/modules/tanks/tank.queries';
-import { createTank } from '../../../server/modules/tanks/tank.service';
-import { createTankSchema } from '../../../shared/schemas/tank.schema';
-import { resetDatabase } from '../../helpers/db';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { defineAbilityFor } from '@shared/abilities';
+import { whereAllowed } from '@server/modules/access/ability-sql';
+import { loadViewer } from '@server/modules/access/viewer.service';
+import { Membership } from '@server/modules/clubs/membership.entity';
+import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
+import { listTanks } from '@server/modules/tanks/tank.queries';
+import { createTank } from '@server/modules/tanks/tank.service';
+import { createTankSchema } from '@shared/schemas/tank.schema';
+import { resetDatabase } from '@tests/helpers/db';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 /** Lists are filtered in SQL by the same CASL rules (ASVS 8.2.2): no route guard involved here. */
 describe('rules translated to SQL', () => {

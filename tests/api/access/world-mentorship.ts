@@ -1,9 +1,9 @@
 import type { DataSource } from 'typeorm';
-import { MentorRequest } from '../../../server/modules/mentorship/mentor-request.entity';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import type { User } from '../../../server/modules/users/user.entity';
-import { makeMember } from '../../helpers/factories';
+import { MentorRequest } from '@server/modules/mentorship/mentor-request.entity';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import type { Club } from '@server/modules/clubs/club.entity';
+import type { User } from '@server/modules/users/user.entity';
+import { makeMember } from '@tests/helpers/factories';
 
 /** `seeker` (no mentor yet) has an open request preferring `mentor`; `member` has one unread notification. */
 export async function mentorshipWorld(ds: DataSource, club: Club, p: { member: User; mentor: User }) {

@@ -4,6 +4,7 @@ import { createWaterTestSchema } from '@shared/schemas/water-test.schema';
 import type { Deps } from '@server/deps';
 import { addLivestock, attachPhotos, createTank, createTankEvent, createWaterTest } from '@server/modules/tanks';
 import { png } from '@tests/helpers/images';
+import { DAY_MS } from '@shared/care/time';
 
 /** A tank with one of everything logged on it, owned by `ownerId`, written through the services. */
 export async function tankWithHistory(deps: Deps, clubId: string, ownerId: string, name: string) {
@@ -11,7 +12,7 @@ export async function tankWithHistory(deps: Deps, clubId: string, ownerId: strin
   const tank = await ds.transaction((tx) =>
     createTank(tx, clubId, ownerId, createTankSchema.parse({ name, systemType: 'reef', volume: { source: 'entered', value: 200 } })),
   );
-  const day = new Date(Date.now() - 86_400_000);
+  const day = new Date(Date.now() - DAY_MS);
   const { test: waterTest } = await ds.transaction((tx) =>
     createWaterTest(tx, deps, tank, createWaterTestSchema.parse({ takenAt: day.toISOString(), entries: { pH: { value: 8.1 }, ammonia: { value: 0, unit: 'mg/L NH3' } } }), ownerId),
   );

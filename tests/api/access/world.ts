@@ -5,6 +5,7 @@ import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
 import { tankWithHistory } from './world-tanks';
 import { mentorshipWorld } from './world-mentorship';
 import { questionWorld } from './world-questions';
+import { DAY_MS } from '@shared/care/time';
 import { meetupWorld } from './world-meetups';
 
 export const PERSONAS = ['anonymous', 'outsider', 'member', 'mentor', 'otherMentor', 'admin', 'suspended'] as const;
@@ -30,7 +31,7 @@ export async function buildWorld(deps: Deps) {
   const spareAssignment = await assignMentor(ds, club, otherMentor.user, spare.user);
   const invite = await ds.getRepository(Invite).save({
     clubId: club.id, email: 'pending@test.example', role: 'member', tokenHash: 'f'.repeat(64), invitedById: admin.user.id,
-    expiresAt: new Date(Date.now() + 86_400_000), lastSentAt: new Date(), acceptedAt: null, revokedAt: null,
+    expiresAt: new Date(Date.now() + DAY_MS), lastSentAt: new Date(), acceptedAt: null, revokedAt: null,
   });
   const careProfile = await ds.transaction((tx) => copyProfile(tx, { clubId: club.id, basedOn: 'seahorse-large', name: 'Matrix seahorses', actorId: admin.user.id }));
   // The mentee's tank (read by their mentor and admins) and spare's (read by otherMentor, spare's mentor).

@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { Invite } from '../../../server/modules/invites/invite.entity';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember, makeUser } from '../../helpers/factories';
-import { Client, signedIn } from '../../helpers/http';
-import { linkIn, waitForMail } from '../../helpers/mail';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { Invite } from '@server/modules/invites/invite.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember, makeUser } from '@tests/helpers/factories';
+import { Client, signedIn } from '@tests/helpers/http';
+import { linkIn, waitForMail } from '@tests/helpers/mail';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('invites by e-mail, end to end through the fake SMTP server', () => {
   let t: TestApp;

@@ -1,10 +1,10 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { PasswordReset } from '../../../server/modules/auth/password-reset.entity';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { Client, signedIn } from '../../helpers/http';
-import { linkIn, waitForMail } from '../../helpers/mail';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { PasswordReset } from '@server/modules/auth/password-reset.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { Client, signedIn } from '@tests/helpers/http';
+import { linkIn, waitForMail } from '@tests/helpers/mail';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('password reset by e-mail', () => {
   let t: TestApp;

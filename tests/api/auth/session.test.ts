@@ -1,8 +1,8 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember, TEST_PASSWORD } from '../../helpers/factories';
-import { Client, signedIn } from '../../helpers/http';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember, TEST_PASSWORD } from '@tests/helpers/factories';
+import { Client, signedIn } from '@tests/helpers/http';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('sessions and sign-in', () => {
   let t: TestApp;

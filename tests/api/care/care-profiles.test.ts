@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { SEAHORSE_LARGE_PROFILE } from '../../../shared/care';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { SEAHORSE_LARGE_PROFILE } from '@shared/care';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('club care profiles: copy, adjust, versioned history', () => {
   let t: TestApp;

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { resetDatabase } from '../../helpers/db';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import { waitForMail } from '../../helpers/mail';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { resetDatabase } from '@tests/helpers/db';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import { waitForMail } from '@tests/helpers/mail';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 const CALM = { temperature: { value: 24, unit: '°C' }, salinity: { value: 33, unit: 'PSU' }, pH: { value: 8.1 }, ammonia: { value: 0, unit: 'mg/L NH3' }, nitrate: { value: 2, unit: 'mg/L NO3' } };
 

@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { planWaterChanges } from '../../../shared/chemistry';
-import { MAX_WATER_CHANGE_FRACTION, SEAHORSE_LARGE_PROFILE } from '../../../shared/care';
-import { formatLitres } from '../../../shared/care/evaluation/wording';
-import { ConcernRow } from '../../../server/modules/concerns/concern.entity';
-import { reevaluateTank } from '../../../server/modules/concerns/reevaluate-tank';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { insertTank, insertWaterTest } from '../../helpers/tank-rows';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { planWaterChanges } from '@shared/chemistry';
+import { MAX_WATER_CHANGE_FRACTION, SEAHORSE_LARGE_PROFILE } from '@shared/care';
+import { formatLitres } from '@shared/care/evaluation/wording';
+import { ConcernRow } from '@server/modules/concerns/concern.entity';
+import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { insertTank, insertWaterTest } from '@tests/helpers/tank-rows';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 const HOUR = 3_600_000;
 /** Everything a large-seahorse tank wants, so only the parameter under test raises a concern. */

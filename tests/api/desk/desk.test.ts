@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import type { DeskView } from '../../../shared/schemas/desk.schema';
-import { reevaluateTank } from '../../../server/modules/concerns/reevaluate-tank';
-import { resetDatabase } from '../../helpers/db';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { signedIn } from '../../helpers/http';
-import { insertTank, insertWaterTest } from '../../helpers/tank-rows';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import type { DeskView } from '@shared/schemas/desk.schema';
+import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
+import { resetDatabase } from '@tests/helpers/db';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn } from '@tests/helpers/http';
+import { insertTank, insertWaterTest } from '@tests/helpers/tank-rows';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 const CALM = { temperature: 24, salinity: 33, pH: 8.1, ammonia: 0, nitrite: 0, nitrate: 2, alkalinity: 8, calcium: 420, magnesium: 1300 };
 

@@ -1,6 +1,6 @@
 import request from 'supertest';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('GET /api/health', () => {
   let t: TestApp;

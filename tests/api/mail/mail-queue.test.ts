@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { startFakeSmtp } from '../../../server/mail/fake-smtp';
-import { createLogger } from '../../../server/lib/logger';
-import { resetDatabase } from '../../helpers/db';
-import { waitForMail } from '../../helpers/mail';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { startFakeSmtp } from '@server/mail/fake-smtp';
+import { createLogger } from '@server/lib/logger';
+import { resetDatabase } from '@tests/helpers/db';
+import { waitForMail } from '@tests/helpers/mail';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 describe('the mail queue', () => {
   let t: TestApp;

@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { AuditEvent } from '../../../server/modules/audit/audit-event.entity';
-import { MentorAssignment } from '../../../server/modules/mentorship/mentor-assignment.entity';
-import { MentorRequest } from '../../../server/modules/mentorship/mentor-request.entity';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import { resetDatabase } from '../../helpers/db';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { Client, signedIn } from '../../helpers/http';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { AuditEvent } from '@server/modules/audit/audit-event.entity';
+import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
+import { MentorRequest } from '@server/modules/mentorship/mentor-request.entity';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import type { Club } from '@server/modules/clubs/club.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { Client, signedIn } from '@tests/helpers/http';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 type Person = Awaited<ReturnType<typeof makeMember>>;
 

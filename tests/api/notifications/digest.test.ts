@@ -1,15 +1,15 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import { runDigest } from '../../../server/modules/notifications/digest';
-import { DIGEST_CRON, DIGEST_QUEUE, startDigestScheduler } from '../../../server/modules/notifications/digest-scheduler';
-import { NotificationDigest } from '../../../server/modules/notifications/notification-digest.entity';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import type { NotifyInput } from '../../../server/modules/notifications';
-import { setEmailModes } from '../../../server/modules/notifications/preferences';
-import { createLogger } from '../../../server/lib/logger';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import type { Club } from '@server/modules/clubs/club.entity';
+import { runDigest } from '@server/modules/notifications/digest';
+import { DIGEST_CRON, DIGEST_QUEUE, startDigestScheduler } from '@server/modules/notifications/digest-scheduler';
+import { NotificationDigest } from '@server/modules/notifications/notification-digest.entity';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import type { NotifyInput } from '@server/modules/notifications';
+import { setEmailModes } from '@server/modules/notifications/preferences';
+import { createLogger } from '@server/lib/logger';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { mailsTo, settledMailsTo } from './mail-helpers';
 
 type Person = Awaited<ReturnType<typeof makeMember>>;

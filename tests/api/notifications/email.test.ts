@@ -1,14 +1,14 @@
 import request from 'supertest';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import type { NotifyInput } from '../../../server/modules/notifications';
-import { emailModesOf } from '../../../server/modules/notifications/preferences';
-import { signUnsubscribeToken } from '../../../server/modules/notifications/unsubscribe-token';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { linkIn, waitForMail } from '../../helpers/mail';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import type { Club } from '@server/modules/clubs/club.entity';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import type { NotifyInput } from '@server/modules/notifications';
+import { emailModesOf } from '@server/modules/notifications/preferences';
+import { signUnsubscribeToken } from '@server/modules/notifications/unsubscribe-token';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { linkIn, waitForMail } from '@tests/helpers/mail';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { settledMailsTo } from './mail-helpers';
 
 type Person = Awaited<ReturnType<typeof makeMember>>;

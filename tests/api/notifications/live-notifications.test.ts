@@ -1,12 +1,12 @@
 import { io as connect, type Socket } from 'socket.io-client';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import type { NotificationView } from '../../../shared/schemas/notification-views';
-import { startServer, type RunningServer } from '../../../server/boot';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { signedIn } from '../../helpers/http';
-import { testConfig } from '../../helpers/test-app';
+import type { NotificationView } from '@shared/schemas/notification-views';
+import { startServer, type RunningServer } from '@server/boot';
+import type { Club } from '@server/modules/clubs/club.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn } from '@tests/helpers/http';
+import { testConfig } from '@tests/helpers/test-app';
 
 type Person = Awaited<ReturnType<typeof makeMember>>;
 

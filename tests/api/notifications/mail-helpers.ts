@@ -1,5 +1,5 @@
 import type { DataSource } from 'typeorm';
-import { CapturedMail } from '../../../server/modules/mail/captured-mail.entity';
+import { CapturedMail } from '@server/modules/mail/captured-mail.entity';
 
 /** Every captured e-mail to an address, oldest first. */
 export function mailsTo(ds: DataSource, to: string): Promise<CapturedMail[]> {

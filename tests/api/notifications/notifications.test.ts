@@ -1,13 +1,13 @@
 import { IsNull } from 'typeorm';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { DEFAULT_EMAIL_MODES } from '../../../shared/constants/notifications';
-import type { Club } from '../../../server/modules/clubs/club.entity';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import type { NotifyInput } from '../../../server/modules/notifications';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { DEFAULT_EMAIL_MODES } from '@shared/constants/notifications';
+import type { Club } from '@server/modules/clubs/club.entity';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import type { NotifyInput } from '@server/modules/notifications';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 type Person = Awaited<ReturnType<typeof makeMember>>;
 

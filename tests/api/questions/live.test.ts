@@ -1,12 +1,12 @@
 import { io as connect, type Socket } from 'socket.io-client';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import type { TankChangedPayload } from '../../../shared/events/socket-events';
-import type { NotificationView } from '../../../shared/schemas/notification-views';
-import { startServer, type RunningServer } from '../../../server/boot';
-import { resetDatabase } from '../../helpers/db';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import { testConfig } from '../../helpers/test-app';
+import type { TankChangedPayload } from '@shared/events/socket-events';
+import type { NotificationView } from '@shared/schemas/notification-views';
+import { startServer, type RunningServer } from '@server/boot';
+import { resetDatabase } from '@tests/helpers/db';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import { testConfig } from '@tests/helpers/test-app';
 
 interface Heard {
   socket: Socket;

@@ -1,6 +1,6 @@
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import type { TestApp } from '../../helpers/test-app';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import type { TestApp } from '@tests/helpers/test-app';
 
 /**
  * A seahorse keeper (Sky) with a tank and one test, her mentor (Milo), another mentor of the club (Otto, who mentors

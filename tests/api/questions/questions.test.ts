@@ -1,10 +1,11 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { Notification } from '../../../server/modules/notifications/notification.entity';
-import { QuestionReply } from '../../../server/modules/questions/question.entity';
-import { MentorAssignment } from '../../../server/modules/mentorship/mentor-assignment.entity';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { Notification } from '@server/modules/notifications/notification.entity';
+import { QuestionReply } from '@server/modules/questions/question.entity';
+import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { addTest, questionPeople } from './people';
+import { DAY_MS } from '@shared/care/time';
 
 type People = Awaited<ReturnType<typeof questionPeople>>;
 
@@ -105,7 +106,7 @@ describe('questions on a reading', () => {
 
   it('when a past mentor looks, then they still read the question but may no longer reply', async () => {
     const id = (await ask()).body.question.id as string;
-    await t.dataSource.getRepository(MentorAssignment).update({ mentorId: p.milo.user.id, menteeId: p.sky.user.id }, { endedAt: new Date(Date.now() - 86_400_000) });
+    await t.dataSource.getRepository(MentorAssignment).update({ mentorId: p.milo.user.id, menteeId: p.sky.user.id }, { endedAt: new Date(Date.now() - DAY_MS) });
     expect((await p.asMilo.get(`${questions()}/${id}`)).status).toBe(200);
     expect((await p.asMilo.post(`${questions()}/${id}/replies`, { body: 'Still here.' })).status).toBe(403);
   });

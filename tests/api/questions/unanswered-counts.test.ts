@@ -1,7 +1,7 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { unansweredCountsByTank } from '../../../server/modules/questions/question.queries';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { unansweredCountsByTank } from '@server/modules/questions/question.queries';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { addTest, questionPeople } from './people';
 
 describe('unanswered questions per tank (for the mentor desk)', () => {

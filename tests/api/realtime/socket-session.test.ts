@@ -1,10 +1,10 @@
 import { io as connect, type Socket } from 'socket.io-client';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { startServer, type RunningServer } from '../../../server/boot';
-import { resetDatabase } from '../../helpers/db';
-import { makeClub, makeMember } from '../../helpers/factories';
-import { signedIn } from '../../helpers/http';
-import { testConfig } from '../../helpers/test-app';
+import { startServer, type RunningServer } from '@server/boot';
+import { resetDatabase } from '@tests/helpers/db';
+import { makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn } from '@tests/helpers/http';
+import { testConfig } from '@tests/helpers/test-app';
 
 function open(url: string, headers: Record<string, string>): Socket {
   return connect(url, { transports: ['websocket'], extraHeaders: headers, reconnection: false, forceNew: true });

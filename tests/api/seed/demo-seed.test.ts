@@ -1,11 +1,11 @@
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
-import { cycleStage } from '../../../shared/care';
-import { seedDemoClub } from '../../../server/db/seeds/demo-club';
-import { careHistory } from '../../../server/modules/tanks';
-import { resetDatabase } from '../../helpers/db';
-import { signedIn } from '../../helpers/http';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
-import { DEMO_PASSWORD } from '../../../server/db/seeds/demo-people';
+import { cycleStage } from '@shared/care';
+import { seedDemoClub } from '@server/db/seeds/demo-club';
+import { careHistory } from '@server/modules/tanks';
+import { resetDatabase } from '@tests/helpers/db';
+import { signedIn } from '@tests/helpers/http';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
+import { DEMO_PASSWORD } from '@server/db/seeds/demo-people';
 
 describe('the demo club seed', () => {
   let t: TestApp;

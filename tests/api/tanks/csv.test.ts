@@ -1,13 +1,13 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import Papa from 'papaparse';
-import { salinityFromSpecificGravity } from '../../../shared/chemistry/specific-gravity';
-import { convert } from '../../../shared/chemistry/units';
-import { WaterTest } from '../../../server/modules/tanks/water-test.entity';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { salinityFromSpecificGravity } from '@shared/chemistry/specific-gravity';
+import { convert } from '@shared/chemistry/units';
+import { WaterTest } from '@server/modules/tanks/water-test.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, tankPeople } from './people';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY = 86_400_000;
 const START = Date.UTC(2025, 0, 1, 8, 0);
 const stamp = (ms: number) => new Date(ms).toISOString().slice(0, 16).replace('T', ' ');
 
@@ -15,7 +15,7 @@ const stamp = (ms: number) => new Date(ms).toISOString().slice(0, 16).replace('T
 function fiftyRows(): string {
   const lines = ['Date,Temp (°F),Salinity (SG),pH,Ammonia (mg/L NH4),Nitrate (mg/L NO3-N),Notes'];
   for (let i = 0; i < 50; i++) {
-    const date = i === 20 ? 'not a date' : stamp(START + i * DAY);
+    const date = i === 20 ? 'not a date' : stamp(START + i * DAY_MS);
     const pH = i === 10 ? '80' : '8.1';
     const nitrate = i === 30 ? 'lots' : String(1 + (i % 5));
     lines.push(`${date},${77 + (i % 3) * 0.5},1.024,${pH},0,${nitrate},"day ${i + 1}, all calm"`);
@@ -64,7 +64,7 @@ describe('CSV import and export', () => {
   it('when the same file is committed, then the 47 valid rows are saved in canonical units; committing it again saves none', async () => {
     const res = await p.asKeeper.post(`${tank}/imports/commit`, { csv: fiftyRows() });
     expect(res.status).toBe(200);
-    expect(res.body).toEqual({ imported: 47, invalid: 3, duplicates: 0, skipped: 0, firstTakenAt: '2025-01-01T08:00:00.000Z', lastTakenAt: new Date(START + 49 * DAY).toISOString() });
+    expect(res.body).toEqual({ imported: 47, invalid: 3, duplicates: 0, skipped: 0, firstTakenAt: '2025-01-01T08:00:00.000Z', lastTakenAt: new Date(START + 49 * DAY_MS).toISOString() });
     const rows = await stored();
     expect(rows).toHaveLength(47);
     const first = rows[0]!;

@@ -1,9 +1,9 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { salinityFromSpecificGravity } from '../../../shared/chemistry/specific-gravity';
-import { convert } from '../../../shared/chemistry/units';
-import { TankEvent } from '../../../server/modules/tanks/tank-event.entity';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { salinityFromSpecificGravity } from '@shared/chemistry/specific-gravity';
+import { convert } from '@shared/chemistry/units';
+import { TankEvent } from '@server/modules/tanks/tank-event.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, tankPeople } from './people';
 
 const HOUR = 3_600_000;

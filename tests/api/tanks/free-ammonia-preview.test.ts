@@ -7,9 +7,9 @@ import type { UnitPrefs } from '@client/lib/display-units';
 import { resetDatabase } from '@tests/helpers/db';
 import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, tankPeople } from './people';
+import { DAY_MS } from '@shared/care/time';
 
-const DAY = 86_400_000;
-const daysAgo = (d: number) => new Date(Date.now() - d * DAY).toISOString();
+const daysAgo = (d: number) => new Date(Date.now() - d * DAY_MS).toISOString();
 const PREFS: UnitPrefs = { temperatureUnit: 'C', volumeUnit: 'L', salinityDisplay: 'ppt' };
 const PROFILE = builtInProfile('reef')!;
 

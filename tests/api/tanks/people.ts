@@ -1,7 +1,7 @@
-import type { TestApp } from '../../helpers/test-app';
-import { assignMentor, makeClub, makeMember } from '../../helpers/factories';
-import { signedIn, type Client } from '../../helpers/http';
-import type { CreateTankInput } from '../../../shared/schemas/tank.schema';
+import type { TestApp } from '@tests/helpers/test-app';
+import { assignMentor, makeClub, makeMember } from '@tests/helpers/factories';
+import { signedIn, type Client } from '@tests/helpers/http';
+import type { CreateTankInput } from '@shared/schemas/tank.schema';
 
 /** A club with a member (the tank keeper), their mentor, an unrelated member, and a member of another club. */
 export async function tankPeople(t: TestApp) {

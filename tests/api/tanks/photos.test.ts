@@ -2,11 +2,11 @@ import { readdirSync, rmSync } from 'node:fs';
 import { join } from 'node:path';
 import sharp from 'sharp';
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { PHOTO_FULL_PX, PHOTO_MAX_BYTES, PHOTO_THUMB_PX } from '../../../shared/constants/photos';
-import { Photo } from '../../../server/modules/photos/photo.entity';
-import { resetDatabase } from '../../helpers/db';
-import { jpegWithExif, png } from '../../helpers/images';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { PHOTO_FULL_PX, PHOTO_MAX_BYTES, PHOTO_THUMB_PX } from '@shared/constants/photos';
+import { Photo } from '@server/modules/photos/photo.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { jpegWithExif, png } from '@tests/helpers/images';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, tankPeople } from './people';
 
 describe('photos', () => {

@@ -1,12 +1,12 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { SYSTEM_TYPES } from '../../../shared/care/system-types';
-import { defaultProfileFor } from '../../../shared/care/profiles';
-import { tankVolume } from '../../../shared/chemistry/tank-volume';
-import { copyProfile } from '../../../server/modules/care/care-profile.service';
-import { Tank } from '../../../server/modules/tanks/tank.entity';
-import { TankEvent } from '../../../server/modules/tanks/tank-event.entity';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { SYSTEM_TYPES } from '@shared/care/system-types';
+import { defaultProfileFor } from '@shared/care/profiles';
+import { tankVolume } from '@shared/chemistry/tank-volume';
+import { copyProfile } from '@server/modules/care/care-profile.service';
+import { Tank } from '@server/modules/tanks/tank.entity';
+import { TankEvent } from '@server/modules/tanks/tank-event.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, REEF, tankPeople } from './people';
 
 describe('tanks and their livestock', () => {

@@ -1,12 +1,12 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
-import { freeAmmonia } from '../../../shared/chemistry/ammonia';
-import { REFERENCE_TEMP_60F_C, salinityFromSpecificGravity } from '../../../shared/chemistry/specific-gravity';
-import { convert } from '../../../shared/chemistry/units';
-import { salinityAsSpecificGravity } from '../../../shared/readings/salinity';
-import { AuditEvent } from '../../../server/modules/audit/audit-event.entity';
-import { WaterTest } from '../../../server/modules/tanks/water-test.entity';
-import { resetDatabase } from '../../helpers/db';
-import { createTestApp, type TestApp } from '../../helpers/test-app';
+import { freeAmmonia } from '@shared/chemistry/ammonia';
+import { REFERENCE_TEMP_60F_C, salinityFromSpecificGravity } from '@shared/chemistry/specific-gravity';
+import { convert } from '@shared/chemistry/units';
+import { salinityAsSpecificGravity } from '@shared/readings/salinity';
+import { AuditEvent } from '@server/modules/audit/audit-event.entity';
+import { WaterTest } from '@server/modules/tanks/water-test.entity';
+import { resetDatabase } from '@tests/helpers/db';
+import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 import { makeTankVia, tankPeople } from './people';
 
 const HOUR = 3_600_000;

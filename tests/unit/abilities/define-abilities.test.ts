@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { asSubject, createAbility, defineAbilityFor, packAbilityRules, unpackAbilityRules, type Viewer } from '../../../shared/abilities';
+import { asSubject, createAbility, defineAbilityFor, packAbilityRules, unpackAbilityRules, type Viewer } from '@shared/abilities';
 
 const NOW = '2026-12-01T12:00:00.000Z';
 const A = 'club-a';

@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import { asSubject, defineAbilityFor, type Viewer } from '../../../shared/abilities';
+import { asSubject, defineAbilityFor, type Viewer } from '@shared/abilities';
 
 const A = 'club-a';
 const B = 'club-b';

@@ -1,11 +1,11 @@
 import type { ParameterKey, WaterTestInput } from '@shared/care';
+import { DAY_MS } from '@shared/care/time';
 
 export const T0 = Date.parse('2025-03-01T09:00:00.000Z');
-const DAY = 86_400_000;
 
 /** ISO time `d` days (fractional allowed) after T0. */
 export function day(d: number): string {
-  return new Date(T0 + d * DAY).toISOString();
+  return new Date(T0 + d * DAY_MS).toISOString();
 }
 
 export function test(id: string, d: number, values: Partial<Record<ParameterKey, number>>): WaterTestInput {

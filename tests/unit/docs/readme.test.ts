@@ -1,6 +1,6 @@
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DEMO_PASSWORD, DEMO_PEOPLE } from '../../../server/db/seeds/demo-people';
+import { DEMO_PASSWORD, DEMO_PEOPLE } from '@server/db/seeds/demo-people';
 
 describe('README', () => {
   const readme = readFileSync('README.md', 'utf8');

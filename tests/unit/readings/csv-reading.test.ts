@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
-import { PARAMETER_KEYS } from '../../../shared/care/parameters';
-import { analyzeCsv, type AnalyzeContext } from '../../../shared/readings/csv-analyze';
-import { CsvProblem } from '../../../shared/readings/csv-layout';
-import { guessTarget, guessUnit, parameterHeader } from '../../../shared/readings/csv-columns';
-import { detectDateFormat, parseDateCell, wallTimeToUtc } from '../../../shared/readings/csv-dates';
-import { csvImportSchema } from '../../../shared/schemas/csv-import.schema';
+import { PARAMETER_KEYS } from '@shared/care/parameters';
+import { analyzeCsv, type AnalyzeContext } from '@shared/readings/csv-analyze';
+import { CsvProblem } from '@shared/readings/csv-layout';
+import { guessTarget, guessUnit, parameterHeader } from '@shared/readings/csv-columns';
+import { detectDateFormat, parseDateCell, wallTimeToUtc } from '@shared/readings/csv-dates';
+import { csvImportSchema } from '@shared/schemas/csv-import.schema';
 
 const ctx: AnalyzeContext = { systemType: 'tropical-freshwater', now: '2025-12-31T00:00:00.000Z', timeZone: 'UTC', existingTakenAt: new Set() };
 const analyze = (csv: string, extra: Record<string, unknown> = {}) => analyzeCsv(csvImportSchema.parse({ csv, ...extra }), ctx);

@@ -1,12 +1,12 @@
 import { describe, expect, it } from 'vitest';
-import { REEF_PROFILE } from '../../../shared/care/profiles';
-import { freeAmmonia } from '../../../shared/chemistry/ammonia';
-import { practicalSalinityFromConductivity } from '../../../shared/chemistry/practical-salinity';
-import { REFERENCE_TEMP_60F_C, salinityFromSpecificGravity } from '../../../shared/chemistry/specific-gravity';
-import { convert } from '../../../shared/chemistry/units';
-import { normalizeWaterTest, type NormalizeContext } from '../../../shared/readings/normalize-water-test';
-import { salinityAsSpecificGravity } from '../../../shared/readings/salinity';
-import { createWaterTestSchema, type CreateWaterTestInput } from '../../../shared/schemas/water-test.schema';
+import { REEF_PROFILE } from '@shared/care/profiles';
+import { freeAmmonia } from '@shared/chemistry/ammonia';
+import { practicalSalinityFromConductivity } from '@shared/chemistry/practical-salinity';
+import { REFERENCE_TEMP_60F_C, salinityFromSpecificGravity } from '@shared/chemistry/specific-gravity';
+import { convert } from '@shared/chemistry/units';
+import { normalizeWaterTest, type NormalizeContext } from '@shared/readings/normalize-water-test';
+import { salinityAsSpecificGravity } from '@shared/readings/salinity';
+import { createWaterTestSchema, type CreateWaterTestInput } from '@shared/schemas/water-test.schema';
 
 const NOW = '2025-06-01T12:00:00.000Z';
 const reef: NormalizeContext = { systemType: 'reef', now: NOW };

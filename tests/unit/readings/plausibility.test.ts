@@ -1,9 +1,9 @@
 import { describe, expect, it } from 'vitest';
-import { PARAMETER_KEYS, parameterInfo } from '../../../shared/care/parameters';
-import { UNIT_FAMILIES } from '../../../shared/chemistry/units';
-import { ENTRY_UNITS } from '../../../shared/readings/entry-units';
-import { impossibleReading, INSTRUMENT_PLAUSIBILITY, PLAUSIBILITY, unusualReading } from '../../../shared/readings/plausibility';
-import { waterTestEntriesSchema } from '../../../shared/schemas/water-test.schema';
+import { PARAMETER_KEYS, parameterInfo } from '@shared/care/parameters';
+import { UNIT_FAMILIES } from '@shared/chemistry/units';
+import { ENTRY_UNITS } from '@shared/readings/entry-units';
+import { impossibleReading, INSTRUMENT_PLAUSIBILITY, PLAUSIBILITY, unusualReading } from '@shared/readings/plausibility';
+import { waterTestEntriesSchema } from '@shared/schemas/water-test.schema';
 
 describe('plausibility limits', () => {
   it('when a value sits on either end of the possible range, then it is accepted; just outside, refused', () => {

@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { localDayAndHour } from '../../../server/modules/notifications/local-day';
-import { signUnsubscribeToken, unsubscribeUrl, verifyUnsubscribeToken } from '../../../server/modules/notifications/unsubscribe-token';
+import { localDayAndHour } from '@server/modules/notifications/local-day';
+import { signUnsubscribeToken, unsubscribeUrl, verifyUnsubscribeToken } from '@server/modules/notifications/unsubscribe-token';
 
 const SECRET = 'a-test-secret-that-is-long-enough-0123456789';
 const USER = '0b5a3c1e-8d2f-4a6b-9c7d-1e2f3a4b5c6d';

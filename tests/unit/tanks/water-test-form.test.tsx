@@ -117,6 +117,19 @@ describe('water-test form', () => {
     await user.click(screen.getByRole('button', { name: 'Save test' }));
     expect(onSave).toHaveBeenCalledTimes(2);
   });
+
+  it('when opened from a link with the tests due, then those readings come first in that order, before the usual ones', () => {
+    renderForm({ firstReadings: ['nitrite', 'ammonia'] });
+    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map((f) => f.dataset.parameter);
+    // Due first, then the member's usual readings (remembered on the device) without repeats.
+    expect(order).toEqual(['nitrite', 'ammonia', 'temperature', 'salinity', 'pH']);
+  });
+
+  it('when no tests are named, then the form starts with the usual readings as before', () => {
+    renderForm();
+    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map((f) => f.dataset.parameter);
+    expect(order).toEqual(['temperature', 'salinity', 'pH', 'ammonia']);
+  });
 });
 
 describe('the concern preview on the form', () => {

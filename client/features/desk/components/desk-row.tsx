@@ -1,20 +1,12 @@
 import { useState } from 'react';
 import { Link } from 'react-router';
 import { parameterInfo, isParameterKey } from '@shared/care';
+import { CYCLE_STAGE_WORDS } from '@shared/constants/tank-labels';
 import type { DeskRow as Row } from '@shared/schemas/desk.schema';
 import { Button, ButtonLink } from '@client/components/ui/button';
-import { SeverityBadge } from '@client/components/ui/severity-badge';
 import { Input } from '@client/components/ui/field';
+import { SeverityBadge } from '@client/components/ui/severity-badge';
 import { Sparkline } from './sparkline';
-
-const STAGE_WORDS: Record<Row['cycleStage'], string> = {
-  'not-started': 'cycle not started',
-  'ammonia-rising': 'cycling: ammonia',
-  'nitrite-rising': 'cycling: nitrite up',
-  'nitrite-falling': 'cycling: nitrite down',
-  cycled: 'cycled',
-  setback: 'setback',
-};
 
 export interface ConcernActions {
   act(concernId: string, action: 'acknowledge' | 'resolve', note: string): Promise<void>;
@@ -55,7 +47,7 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
             <span className="ml-2 text-sm font-semibold text-ink-muted">{row.owner.displayName}</span>
           </h2>
           <p className="mt-0.5 text-sm text-ink-muted">
-            {row.phase === 'established' && row.cycleStage !== 'setback' ? 'established' : STAGE_WORDS[row.cycleStage]} · <span className={last.stale ? 'font-bold text-danger' : ''}>{last.text}</span>
+            {row.phase === 'established' && row.cycleStage !== 'setback' ? 'established' : CYCLE_STAGE_WORDS[row.cycleStage]} · <span className={last.stale ? 'font-bold text-danger' : ''}>{last.text}</span>
             {row.unansweredQuestions ? (
               <>
                 {' · '}

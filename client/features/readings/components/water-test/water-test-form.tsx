@@ -23,6 +23,8 @@ import { previewDraft } from '../../lib/water-test-preview';
 import { ConcernPreview } from './concern-preview';
 import { ParameterField } from './parameter-field';
 
+const NONE: readonly ParameterKey[] = [];
+
 export type WaterTestOutput = z.output<typeof createWaterTestSchema>;
 
 export interface WaterTestFormProps {
@@ -40,6 +42,8 @@ export interface WaterTestFormProps {
   /** The test being changed (absent for a new one); it never counts as its own last known value. */
   editing?: WaterTestView;
   submitLabel?: string;
+  /** Readings to put at the top, in this order, before the member's usual ones (the tests due, from a link). */
+  firstReadings?: readonly ParameterKey[];
   /** After the test and its photos are stored, with what the tank page should say. */
   onSaved: (notice: SavedNotice) => void;
 }
@@ -49,7 +53,7 @@ export interface WaterTestFormProps {
  * store, and saving through `useSaveWaterTest` (the server's field errors land on the fields; a failed photo can be
  * sent again on its own).
  */
-export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial, memory, editing, submitLabel = 'Save test', onSaved }: WaterTestFormProps) {
+export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial, memory, editing, submitLabel = 'Save test', firstReadings = NONE, onSaved }: WaterTestFormProps) {
   const testId = editing?.id;
   const ctx = useMemo<Omit<NormalizeContext, 'now'>>(
     () => ({ systemType: tank.systemType, careProfileKey: tank.careProfileKey, profile, lastKnown, ...(testId ? { testId } : {}) }),
@@ -69,10 +73,11 @@ export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial
   const first = useMemo(() => {
     const filled = PARAMETER_KEYS.filter((k) => isFilled(initial.entries[k]));
     const wanted = firstParameters(memory, profile, tank.phase);
-    return PARAMETER_KEYS.filter((k) => filled.includes(k) || wanted.includes(k));
-  }, [initial, memory, profile, tank.phase]);
+    const usual = PARAMETER_KEYS.filter((k) => filled.includes(k) || wanted.includes(k));
+    return [...firstReadings, ...usual.filter((k) => !firstReadings.includes(k))];
+  }, [initial, memory, profile, tank.phase, firstReadings]);
   const [showAll, setShowAll] = useState(false);
-  const shown: ParameterKey[] = showAll ? [...PARAMETER_KEYS] : first;
+  const shown: ParameterKey[] = showAll ? [...first, ...PARAMETER_KEYS.filter((k) => !first.includes(k))] : first;
   const hidden = PARAMETER_KEYS.length - first.length;
 
   const [photos, setPhotos] = useState<File[]>([]);
