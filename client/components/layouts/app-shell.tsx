@@ -36,7 +36,7 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
-            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-chrome-active text-on-chrome' : 'text-on-chrome-muted hover:bg-accent-hover-active'}`} />
+            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-chrome-active text-on-chrome' : 'text-on-chrome-muted hover:bg-chrome-active'}`} />
           </nav>
           {headerEnd}
         </div>

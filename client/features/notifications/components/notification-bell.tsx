@@ -56,7 +56,7 @@ export function NotificationBell() {
         aria-expanded={open}
         aria-controls={panelId}
         onClick={() => setOpen((o) => !o)}
-        className="relative flex size-touch items-center justify-center rounded-full text-on-chrome hover:bg-accent-hover-active"
+        className="relative flex size-touch items-center justify-center rounded-full text-on-chrome hover:bg-chrome-active"
       >
         <BellIcon />
         {count > 0 ? (
