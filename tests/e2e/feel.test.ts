@@ -62,7 +62,7 @@ describe('the feel of the app: keyboard, titles, dialogs, offline, dark mode', (
       await page.keyboard.press('Tab');
       expect(await dialog.evaluate((d) => d.contains(document.activeElement))).toBe(true);
     }
-    await screenshot(page, 'archive-dialog-desk');
+    await screenshot(page, 'archive-dialog-desk', { fullPage: false });
     await expectAccessible(page);
     await page.keyboard.press('Escape');
     await dialog.waitFor({ state: 'hidden' });
@@ -93,6 +93,7 @@ describe('the feel of the app: keyboard, titles, dialogs, offline, dark mode', (
     await page.emulateMedia({ colorScheme: 'dark' });
     await page.goto(`${inject('baseUrl')}/tanks/${tankId}`);
     await page.getByRole('heading', { name: 'Rosa’s river tank' }).waitFor();
+    await page.locator('figure[data-chart="nitrate"] .recharts-line').waitFor();
     const background = await page.evaluate(() => getComputedStyle(document.body).backgroundColor);
     expect(background).toBe('rgb(11, 30, 38)');
     await screenshot(page, 'tank-page-dark-phone');

@@ -26,10 +26,11 @@ export async function launchBrowser(): Promise<Browser> {
 export const PHONE: BrowserContextOptions = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
 export const DESK: BrowserContextOptions = { viewport: { width: 1280, height: 800 } };
 
-export async function screenshot(page: Page, name: string): Promise<string> {
+/** The whole page by default; `{ fullPage: false }` for what is on screen, e.g. a modal dialog over the page. */
+export async function screenshot(page: Page, name: string, { fullPage = true } = {}): Promise<string> {
   mkdirSync(ARTIFACTS, { recursive: true });
   const path = `${ARTIFACTS}/${name}.png`;
-  await page.screenshot({ path, fullPage: true });
+  await page.screenshot({ path, fullPage });
   return path;
 }
 

@@ -24,7 +24,7 @@ export function Component() {
   const records = m.kind === 'clinic' && ability.can('recordResults', subject);
   return (
     <>
-      <PageHeader title="Check-in" subtitle={`${m.title} · ${m.when}`} actions={<ButtonLink variant="ghost" to={`/meetups/${m.id}`}>The meetup</ButtonLink>} />
+      <PageHeader title="Check-in" subtitle={`${m.title} · ${m.when}`} actions={<ButtonLink variant="ghost" to={`/meetups/${m.id}`}>← Back to the meetup</ButtonLink>} />
       <AttendanceList clubId={clubId} meetupId={m.id} renderExtra={records ? (row) => <ClinicResultForm clubId={clubId} meetupId={m.id} row={row} /> : undefined} />
     </>
   );

@@ -6,6 +6,8 @@ import { MAIN_ID, SkipLink } from './skip-link';
 export interface NavItem {
   to: string;
   label: string;
+  /** A shorter word for the phone's bottom bar, where six labels share 390 px. */
+  short?: string;
   end?: boolean;
 }
 
@@ -19,10 +21,10 @@ function Brand() {
 }
 
 /** The same links in the header (wide screens) and the bottom bar (phones), each with its look. */
-function NavLinks({ nav, look }: { nav: NavItem[]; look: (active: boolean) => string }) {
+function NavLinks({ nav, look, short }: { nav: NavItem[]; look: (active: boolean) => string; short?: boolean }) {
   return nav.map((item) => (
-    <NavLink key={item.to} to={item.to} end={item.end} className={({ isActive }) => look(isActive)}>
-      {item.label}
+    <NavLink key={item.to} to={item.to} end={item.end} aria-label={short && item.short ? item.label : undefined} className={({ isActive }) => look(isActive)}>
+      {short ? (item.short ?? item.label) : item.label}
     </NavLink>
   ));
 }
@@ -51,7 +53,7 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
         className="fixed inset-x-0 bottom-0 grid border-t border-line bg-surface sm:hidden"
       >
-        <NavLinks nav={nav} look={(on) => `flex min-h-14 items-center justify-center text-xs font-bold ${on ? 'text-ink-soft' : 'text-ink-muted'}`} />
+        <NavLinks nav={nav} short look={(on) => `flex min-h-14 items-center justify-center border-t-4 text-xs font-bold ${on ? 'border-accent text-ink' : 'border-transparent text-ink-muted'}`} />
       </nav>
     </div>
   );

@@ -56,7 +56,7 @@ export function AttendanceList({ clubId, meetupId, renderExtra }: { clubId: stri
               </span>
             </button>
             {failed[r.userId] ? <p role="alert" className="px-3 pt-1 text-sm font-semibold text-danger">{failed[r.userId]}</p> : null}
-            <div className="flex flex-wrap items-center gap-3 px-3">
+            <div className="flex flex-wrap items-center gap-3 px-3 pb-2">
               {renderExtra?.(r)}
               <Link to={`/meetups/attendance/${r.userId}`} className="text-sm font-bold text-link underline">Past attendance</Link>
             </div>
