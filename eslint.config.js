@@ -40,10 +40,27 @@ const clientWalls = [
               except: [`./${feature}`],
               message: `Features don't import each other: move what ${feature} needs to client/lib or client/components, or compose the two in client/app/routes.`,
             })),
-            { target: ['./client/features', './client/components', './client/lib'], from: './client/app', message: 'Only client/app imports the app layer.' },
-            { target: ['./client/components', './client/lib'], from: './client/features', message: 'client/components and client/lib serve every feature and import none.' },
-            { target: './client/lib', from: './client/components', message: 'client/lib holds no UI: components import lib, not the other way round.' },
-            { target: './client', from: './server', message: 'The client talks to the server over HTTP and sockets only; shared code lives in shared/.' },
+            {
+              target: ['./client/features', './client/components', './client/lib'],
+              from: './client/app',
+              message: 'Only client/app imports the app layer.',
+            },
+            {
+              target: ['./client/components', './client/lib'],
+              from: './client/features',
+              message: 'client/components and client/lib serve every feature and import none.',
+            },
+            {
+              target: './client/lib',
+              from: './client/components',
+              message: 'client/lib holds no UI: components import lib, not the other way round.',
+            },
+            {
+              target: './client',
+              from: './server',
+              message:
+                'The client talks to the server over HTTP and sockets only; shared code lives in shared/.',
+            },
           ],
         },
       ],
@@ -85,12 +102,25 @@ const serverWalls = [
               message: `Server modules use each other only through their index.ts: import from '../<module>', and export what ${module} needs there.`,
             })),
             {
-              target: ['./server/*.ts', './server/config', './server/db', './server/lib', './server/mail', './server/middleware', './server/realtime', './server/types'],
+              target: [
+                './server/*.ts',
+                './server/config',
+                './server/db',
+                './server/lib',
+                './server/mail',
+                './server/middleware',
+                './server/realtime',
+                './server/types',
+              ],
               from: './server/modules',
               except: onlyThroughIndex([]),
               message: 'Outside server/modules, a module is used only through its index.ts.',
             },
-            { target: './server', from: './client', message: 'The server never imports the client; shared code lives in shared/.' },
+            {
+              target: './server',
+              from: './client',
+              message: 'The server never imports the client; shared code lives in shared/.',
+            },
           ],
         },
       ],
@@ -104,7 +134,16 @@ const serverWalls = [
     rules: {
       'import-x/no-restricted-paths': [
         'error',
-        { basePath: root, zones: [{ target: './shared', from: ['./client', './server'], message: 'shared/ is used by client and server: it imports nothing from client/ or server/.' }] },
+        {
+          basePath: root,
+          zones: [
+            {
+              target: './shared',
+              from: ['./client', './server'],
+              message: 'shared/ is used by client and server: it imports nothing from client/ or server/.',
+            },
+          ],
+        },
       ],
     },
   },

@@ -72,7 +72,8 @@ const roleVar = (role: string) => `--sw-${role}`;
 
 /** A role's colour for places that take a colour value rather than a class (chart strokes and fills). */
 export const colorVar = (role: ColorRole) => `var(${roleVar(role)})`;
-const asVars = (theme: Record<string, string>) => Object.fromEntries(Object.entries(theme).map(([role, value]) => [roleVar(role), value]));
+const asVars = (theme: Record<string, string>) =>
+  Object.fromEntries(Object.entries(theme).map(([role, value]) => [roleVar(role), value]));
 
 /** The roles as CSS variables on :root, switched by the system's colour scheme; the focus ring reads them too. */
 const themeVariables = plugin(({ addBase }) => {

@@ -30,9 +30,22 @@ import { inviteRouter } from './modules/invites';
 import { outboxRouter } from './modules/mail';
 import { calendarFeedRouter, meetupsRouter } from './modules/meetups';
 import { assignmentRouter, mentorCapacityRouter, mentorRequestRouter } from './modules/mentorship';
-import { createNotifier, notificationRouter, tellMentorsOfConcerns, unsubscribeRouter } from './modules/notifications';
+import {
+  createNotifier,
+  notificationRouter,
+  tellMentorsOfConcerns,
+  unsubscribeRouter,
+} from './modules/notifications';
 import { questionRouter } from './modules/questions';
-import { livestockRouter, photoRouter, TankChanges, tankEventRouter, tankRouter, timelineRouter, waterTestRouter } from './modules/tanks';
+import {
+  livestockRouter,
+  photoRouter,
+  TankChanges,
+  tankEventRouter,
+  tankRouter,
+  timelineRouter,
+  waterTestRouter,
+} from './modules/tanks';
 import type { RealtimeHub } from './realtime/hub';
 import { announceTankChanges } from './realtime/tank-announcer';
 import { CSV_MAX_BYTES } from '@shared/schemas/csv-import.schema';
@@ -55,7 +68,9 @@ export function buildDeps(infra: Pick<AppInfrastructure, 'config' | 'dataSource'
   const { config, dataSource, mailer, hub } = infra;
   enableAfterCommit(dataSource);
   const notify = createNotifier({ hub, mailer, config });
-  const tankChanges = new TankChanges(judgeConcerns).listen(tellMentorsOfConcerns(notify)).listen(announceTankChanges(hub));
+  const tankChanges = new TankChanges(judgeConcerns)
+    .listen(tellMentorsOfConcerns(notify))
+    .listen(announceTankChanges(hub));
   const rateLimits = createRateLimits((identifier) => new PostgresRateLimitStore(dataSource, identifier));
   return { config, dataSource, mailer, hub, notify, tankChanges, rateLimits };
 }
@@ -70,14 +85,20 @@ export interface CreatedApp {
 }
 
 const redactTokens = (url: string) =>
-  url.replace(/\/invites\/[^/?]+/, '/invites/[token]').replace(/\/calendar-feeds\/[^/?]+/, '/calendar-feeds/[token]').replace(/token=[^&]+/g, 'token=[redacted]');
+  url
+    .replace(/\/invites\/[^/?]+/, '/invites/[token]')
+    .replace(/\/calendar-feeds\/[^/?]+/, '/calendar-feeds/[token]')
+    .replace(/token=[^&]+/g, 'token=[redacted]');
 
 const clientDist = fileURLToPath(new URL('../dist/client', import.meta.url));
 
 function serveClient(app: Express): void {
   if (!existsSync(`${clientDist}/index.html`)) {
     app.get('/{*splat}', (_req, res) => {
-      res.status(503).type('text').send('The client is not built yet: run `npm run build` (./scripts/start does it).');
+      res
+        .status(503)
+        .type('text')
+        .send('The client is not built yet: run `npm run build` (./scripts/start does it).');
     });
     return;
   }
@@ -114,7 +135,11 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   const api = express.Router();
   // A CSV import carries the whole file as a JSON string; JSON escaping can double it. Everything else stays small.
   // The import checks its file's content itself (binary data, broken UTF-8) and says so in the file's terms.
-  api.use(IMPORT_ROUTES_PREFIX, express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }), rejectUnstorableText({ ownRules: ['csv'] }));
+  api.use(
+    IMPORT_ROUTES_PREFIX,
+    express.json({ limit: CSV_MAX_BYTES * 2 + 64 * 1024 }),
+    rejectUnstorableText({ ownRules: ['csv'] }),
+  );
   api.use(express.json({ limit: '200kb' }));
   api.use(rejectUnstorableText());
   api.use(healthRouter(deps));
@@ -125,9 +150,27 @@ export function createApp(infra: AppInfrastructure): CreatedApp {
   api.use(csrfProtection);
   api.use(attachViewer(deps.dataSource));
   for (const router of [
-    authRouter, clubRouter, inviteRouter, assignmentRouter, mentorRequestRouter, mentorCapacityRouter, notificationRouter,
-    careProfileRouter, concernRouter, deskRouter, homeRouter, tankRouter, livestockRouter, waterTestRouter, tankEventRouter,
-    timelineRouter, photoRouter, questionRouter, csvImportRouter, csvExportRouter, meetupsRouter,
+    authRouter,
+    clubRouter,
+    inviteRouter,
+    assignmentRouter,
+    mentorRequestRouter,
+    mentorCapacityRouter,
+    notificationRouter,
+    careProfileRouter,
+    concernRouter,
+    deskRouter,
+    homeRouter,
+    tankRouter,
+    livestockRouter,
+    waterTestRouter,
+    tankEventRouter,
+    timelineRouter,
+    photoRouter,
+    questionRouter,
+    csvImportRouter,
+    csvExportRouter,
+    meetupsRouter,
   ]) {
     api.use(router(deps));
   }

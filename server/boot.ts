@@ -38,20 +38,42 @@ export async function startServer(config: Config): Promise<RunningServer> {
   const mail = await startMail(config, dataSource, logger);
   const digest = await startDigestScheduler({ config, dataSource, mailer: mail.mailer, logger });
   const hub = new RealtimeHub();
-  const { app, sessionMiddleware, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub });
+  const { app, sessionMiddleware, deps } = createApp({
+    config,
+    dataSource,
+    sessionPool,
+    logger,
+    mailer: mail.mailer,
+    hub,
+  });
   const reminders = await startMeetupReminders({ deps, logger });
   const server = createServer(app);
   answerUnreadableRequests(server);
   // The adapter holds one client for LISTEN: a pool of its own keeps it from starving requests.
-  const adapterPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }), logger, 'socket-adapter');
-  const io = startRealtime({ httpServer: server, sessionMiddleware, hub, dataSource, adapterPool, config, logger });
+  const adapterPool = guardPool(
+    new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, query_timeout: undefined, max: 2 }),
+    logger,
+    'socket-adapter',
+  );
+  const io = startRealtime({
+    httpServer: server,
+    sessionMiddleware,
+    hub,
+    dataSource,
+    adapterPool,
+    config,
+    logger,
+  });
   await new Promise<void>((resolve, reject) => {
     server.once('error', reject);
     server.listen(config.port, config.host, () => resolve());
   });
   const { port } = server.address() as AddressInfo;
   // Every instance may prune: the DELETE only removes windows that ended an hour ago.
-  const pruning = setInterval(() => void pruneRateLimitHits(dataSource).catch(() => undefined), 3_600_000).unref();
+  const pruning = setInterval(
+    () => void pruneRateLimitHits(dataSource).catch(() => undefined),
+    3_600_000,
+  ).unref();
 
   let closing: Promise<void> | undefined;
   const close = () =>

@@ -8,14 +8,16 @@ import { meQuery } from '@client/features/auth/api/me';
 import { SignedInLayout } from './signed-in-layout';
 
 /** Signed-in pages: the loader makes sure /me is known and sends visitors to sign in first. */
-const requireSession = (qc: QueryClient) => async ({ request }: LoaderFunctionArgs) => {
-  const me = await qc.fetchQuery(meQuery());
-  if (!me) {
-    const url = new URL(request.url);
-    throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
-  }
-  return null;
-};
+const requireSession =
+  (qc: QueryClient) =>
+  async ({ request }: LoaderFunctionArgs) => {
+    const me = await qc.fetchQuery(meQuery());
+    if (!me) {
+      const url = new URL(request.url);
+      throw redirect(`/sign-in?next=${encodeURIComponent(url.pathname + url.search)}`);
+    }
+    return null;
+  };
 
 export function createRouter(queryClient: QueryClient) {
   return createBrowserRouter([

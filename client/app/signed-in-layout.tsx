@@ -17,10 +17,24 @@ function ShellForSession() {
     { to: '/tanks', label: 'My tanks' },
     ...(activeClub ? [{ to: '/questions', label: 'Questions' }] : []),
     ...(activeClub ? [{ to: '/meetups', label: 'Meetups' }] : []),
-    ...(activeClub && activeClub.role !== 'member' ? [{ to: '/desk', label: 'Mentor desk', short: 'Desk' }] : []),
-    ...(activeClub && ability.can('read', asSubject('Club', { id: clubId })) ? [{ to: '/club', label: 'Club' }] : []),
+    ...(activeClub && activeClub.role !== 'member'
+      ? [{ to: '/desk', label: 'Mentor desk', short: 'Desk' }]
+      : []),
+    ...(activeClub && ability.can('read', asSubject('Club', { id: clubId }))
+      ? [{ to: '/club', label: 'Club' }]
+      : []),
   ];
-  return <AppShell nav={nav} headerEnd={<div className="flex items-center gap-1"><NotificationBell /><UserMenu /></div>} />;
+  return (
+    <AppShell
+      nav={nav}
+      headerEnd={
+        <div className="flex items-center gap-1">
+          <NotificationBell />
+          <UserMenu />
+        </div>
+      }
+    />
+  );
 }
 
 export function SignedInLayout() {

@@ -12,6 +12,10 @@ export function useTankRoute() {
   const t = tank.data;
   /** Whether the viewer may add or change this kind of record on the tank now: never while it is archived. */
   const mayLog = (action: 'create' | 'update', what: 'Tank' | 'WaterTest' | 'TankEvent') =>
-    Boolean(t && !t.archivedAt && session.ability.can(action, asSubject(what, { clubId: t.clubId, ownerId: t.owner.id })));
+    Boolean(
+      t &&
+      !t.archivedAt &&
+      session.ability.can(action, asSubject(what, { clubId: t.clubId, ownerId: t.owner.id })),
+    );
   return { ...session, clubId, tankId, tank, mayLog };
 }

@@ -61,7 +61,10 @@ export function apiErrorFrom(status: number, bodyText: string, retryAfterHeader:
   let message = status >= 500 ? 'The server had a problem. Please try again.' : `Request failed (${status}).`;
   let issues: FieldIssue[] = [];
   try {
-    const body = JSON.parse(bodyText) as { error?: { code?: string; message?: string }; issues?: FieldIssue[] };
+    const body = JSON.parse(bodyText) as {
+      error?: { code?: string; message?: string };
+      issues?: FieldIssue[];
+    };
     code = body.error?.code ?? code;
     message = body.error?.message ?? message;
     issues = body.issues ?? [];
@@ -94,7 +97,13 @@ export async function request<T>(path: string, options: RequestOptions = {}): Pr
   }
   const send = async () => {
     if (UNSAFE.has(method)) headers['X-CSRF-Token'] = await csrfTokenForRequest();
-    return fetch(`/api${path}`, { method, headers, body, credentials: 'same-origin', signal: options.signal });
+    return fetch(`/api${path}`, {
+      method,
+      headers,
+      body,
+      credentials: 'same-origin',
+      signal: options.signal,
+    });
   };
   let res = await send();
   if (res.status === 403 && UNSAFE.has(method)) {

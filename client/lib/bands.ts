@@ -18,13 +18,23 @@ export interface Verdict {
 }
 
 /** How a canonical value sits against the tank's profile, in words; undefined when the profile sets no range. */
-export function verdictFor(key: AnyParameterKey, canonical: number, profile: CareProfile | undefined, prefs: ReadingPrefs): Verdict | undefined {
+export function verdictFor(
+  key: AnyParameterKey,
+  canonical: number,
+  profile: CareProfile | undefined,
+  prefs: ReadingPrefs,
+): Verdict | undefined {
   const range = profile?.ranges[key];
   if (!range) return undefined;
   const v = classify(canonical, range);
   const ideal = bandText(key, range.ideal, prefs);
   if (v.level === 'ok') return { level: 'ok', text: `In the ideal range for this tank (${ideal}).` };
   const word = v.direction === 'high' ? 'high' : 'low';
-  if (v.level === 'caution') return { level: 'caution', direction: v.direction, text: `A little ${word}: the ideal is ${ideal}.` };
-  return { level: 'danger', direction: v.direction, text: `Too ${word} for this tank: outside the safe range ${bandText(key, range.caution, prefs)}. Ideal is ${ideal}.` };
+  if (v.level === 'caution')
+    return { level: 'caution', direction: v.direction, text: `A little ${word}: the ideal is ${ideal}.` };
+  return {
+    level: 'danger',
+    direction: v.direction,
+    text: `Too ${word} for this tank: outside the safe range ${bandText(key, range.caution, prefs)}. Ideal is ${ideal}.`,
+  };
 }

@@ -20,7 +20,13 @@ export interface ProfileDetail {
   source: 'built-in' | 'club';
   id?: string;
   basedOnKey?: string;
-  history: { version: number; note: string; changes: string[]; changedById: string | null; changedAt: string }[];
+  history: {
+    version: number;
+    note: string;
+    changes: string[];
+    changedById: string | null;
+    changedAt: string;
+  }[];
 }
 
 export const profileKeys = {
@@ -29,13 +35,24 @@ export const profileKeys = {
 };
 
 export const profilesQuery = (clubId: string) =>
-  queryOptions({ queryKey: profileKeys.all(clubId), queryFn: ({ signal }) => api.get<{ profiles: ProfileSummary[] }>(`/clubs/${clubId}/care-profiles`, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: profileKeys.all(clubId),
+    queryFn: ({ signal }) =>
+      api.get<{ profiles: ProfileSummary[] }>(`/clubs/${clubId}/care-profiles`, signal),
+    staleTime: 60_000,
+  });
 export const profileQuery = (clubId: string, key: string) =>
-  queryOptions({ queryKey: profileKeys.detail(clubId, key), queryFn: ({ signal }) => api.get<ProfileDetail>(`/clubs/${clubId}/care-profiles/${encodeURIComponent(key)}`, signal), staleTime: 60_000 });
+  queryOptions({
+    queryKey: profileKeys.detail(clubId, key),
+    queryFn: ({ signal }) =>
+      api.get<ProfileDetail>(`/clubs/${clubId}/care-profiles/${encodeURIComponent(key)}`, signal),
+    staleTime: 60_000,
+  });
 
 export const useProfiles = (clubId: string) => useQuery(profilesQuery(clubId));
 /** One profile with its history; waits while `key` is not known yet. */
-export const useProfile = (clubId: string, key: string | undefined) => useQuery({ ...profileQuery(clubId, key ?? ''), enabled: Boolean(key) });
+export const useProfile = (clubId: string, key: string | undefined) =>
+  useQuery({ ...profileQuery(clubId, key ?? ''), enabled: Boolean(key) });
 
 /**
  * The profile a tank follows: the club's answer once loaded, the built-in of that key (or the kind's default)
@@ -53,7 +70,8 @@ export function useTankProfile(clubId: string, tank: ProfiledTank | undefined): 
 export function useCopyProfile(clubId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (i: CopyCareProfileInput) => api.post<{ id: string; key: string; version: number }>(`/clubs/${clubId}/care-profiles`, i),
+    mutationFn: (i: CopyCareProfileInput) =>
+      api.post<{ id: string; key: string; version: number }>(`/clubs/${clubId}/care-profiles`, i),
     onSuccess: () => qc.invalidateQueries({ queryKey: profileKeys.all(clubId) }),
   });
 }
@@ -62,7 +80,11 @@ export function useSaveProfile(clubId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (i: { id: string; definition: CareProfile; baseVersion: number; note: string }) =>
-      api.put<{ profile: CareProfile; changes: string[] }>(`/clubs/${clubId}/care-profiles/${i.id}`, { definition: i.definition, baseVersion: i.baseVersion, note: i.note }),
+      api.put<{ profile: CareProfile; changes: string[] }>(`/clubs/${clubId}/care-profiles/${i.id}`, {
+        definition: i.definition,
+        baseVersion: i.baseVersion,
+        note: i.note,
+      }),
     onSuccess: () => qc.invalidateQueries({ queryKey: profileKeys.all(clubId) }),
   });
 }

@@ -19,7 +19,11 @@ export interface ChartableTest {
 }
 
 /** One parameter over time in the member's units, oldest first. */
-export function seriesOf(tests: readonly ChartableTest[], key: ParameterKey | 'freeAmmonia', prefs: UnitPrefs): Point[] {
+export function seriesOf(
+  tests: readonly ChartableTest[],
+  key: ParameterKey | 'freeAmmonia',
+  prefs: UnitPrefs,
+): Point[] {
   const points: Point[] = [];
   for (const test of tests) {
     const canonical = key === 'freeAmmonia' ? test.freeAmmonia : test.values[key];
@@ -34,7 +38,10 @@ export function bandToDisplay(key: AnyParameterKey, band: Band, prefs: ReadingPr
 }
 
 /** Round tick steps (1, 2 or 5 × a power of ten) so an axis reads 0, 0.5, 1 rather than 0, 0.85, 1.7. */
-export function niceTicks([lo, hi]: [number, number], count = 4): { domain: [number, number]; ticks: number[] } {
+export function niceTicks(
+  [lo, hi]: [number, number],
+  count = 4,
+): { domain: [number, number]; ticks: number[] } {
   const raw = (hi - lo) / count || 1;
   const power = 10 ** Math.floor(Math.log10(raw));
   const step = [1, 2, 2.5, 5, 10].map((m) => m * power).find((s) => s >= raw) ?? 10 * power;

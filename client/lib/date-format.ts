@@ -1,7 +1,13 @@
 /** The app's dates, in the reader's language and time zone. */
 const day = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short' });
 const date = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric' });
-const dayTime = new Intl.DateTimeFormat(undefined, { day: 'numeric', month: 'short', year: 'numeric', hour: '2-digit', minute: '2-digit' });
+const dayTime = new Intl.DateTimeFormat(undefined, {
+  day: 'numeric',
+  month: 'short',
+  year: 'numeric',
+  hour: '2-digit',
+  minute: '2-digit',
+});
 
 const toMs = (at: number | string | Date) => (typeof at === 'string' ? Date.parse(at) : at);
 

@@ -6,7 +6,11 @@ import {
   OBSERVATION_VALUE_LABELS,
   SOURCE_WATER_LABELS,
 } from '@shared/constants/tank-labels';
-import { OBSERVATION_CHECKS, OBSERVATION_SCALES, type TankEventDetails } from '@shared/schemas/tank-event.schema';
+import {
+  OBSERVATION_CHECKS,
+  OBSERVATION_SCALES,
+  type TankEventDetails,
+} from '@shared/schemas/tank-event.schema';
 import type { TankEventView } from '@shared/schemas/tank-views';
 import { formatVolume, type UnitPrefs } from './display-units';
 
@@ -14,10 +18,19 @@ const SCALES = Object.keys(OBSERVATION_SCALES) as (keyof typeof OBSERVATION_SCAL
 
 /** What an observation recorded, a line per kind of thing seen. */
 export function describeObservation(d: TankEventDetails<'observation'>): string[] {
-  const seen = SCALES.flatMap((s) => (d[s] ? [`${OBSERVATION_SCALE_LABELS[s]}: ${OBSERVATION_VALUE_LABELS[d[s]!].toLowerCase()}`] : []));
+  const seen = SCALES.flatMap((s) =>
+    d[s] ? [`${OBSERVATION_SCALE_LABELS[s]}: ${OBSERVATION_VALUE_LABELS[d[s]!].toLowerCase()}`] : [],
+  );
   if (d.breathsPerMinute !== undefined) seen.push(`${d.breathsPerMinute} breaths a minute`);
-  const checks = OBSERVATION_CHECKS.filter((c) => d.checks?.[c]).map((c) => OBSERVATION_CHECK_LABELS[c].toLowerCase());
-  return [d.animal ? `Watching: ${d.animal}` : '', seen.join(' · '), checks.length ? `Also seen: ${checks.join(', ')}` : '', d.text ?? ''].filter(Boolean);
+  const checks = OBSERVATION_CHECKS.filter((c) => d.checks?.[c]).map((c) =>
+    OBSERVATION_CHECK_LABELS[c].toLowerCase(),
+  );
+  return [
+    d.animal ? `Watching: ${d.animal}` : '',
+    seen.join(' · '),
+    checks.length ? `Also seen: ${checks.join(', ')}` : '',
+    d.text ?? '',
+  ].filter(Boolean);
 }
 
 /** What an event says, in a line or a few: "20 L (10 %) of RO/DI fresh water". */
@@ -26,8 +39,15 @@ export function describeEvent(e: TankEventView, prefs: Pick<UnitPrefs, 'volumeUn
     case 'water-change': {
       const d = e.details as TankEventDetails<'water-change'>;
       const litres = e.computed.litres ?? d.volumeL;
-      const pct = e.computed.fraction !== undefined ? ` (${Math.round(e.computed.fraction * 100)} %)` : d.percent !== undefined ? ` (${d.percent} %)` : '';
-      return [`${litres !== undefined ? `${formatVolume(litres, prefs)}${pct}` : `${d.percent} %`} · ${SOURCE_WATER_LABELS[d.sourceWater]}`];
+      const pct =
+        e.computed.fraction !== undefined
+          ? ` (${Math.round(e.computed.fraction * 100)} %)`
+          : d.percent !== undefined
+            ? ` (${d.percent} %)`
+            : '';
+      return [
+        `${litres !== undefined ? `${formatVolume(litres, prefs)}${pct}` : `${d.percent} %`} · ${SOURCE_WATER_LABELS[d.sourceWater]}`,
+      ];
     }
     case 'supplement-dose': {
       const d = e.details as TankEventDetails<'supplement-dose'>;

@@ -15,8 +15,10 @@ export type ReadingPrefs = Pick<UnitPrefs, 'temperatureUnit' | 'salinityDisplay'
 /** SG reads to the fourth decimal on the instruments keepers use. */
 const SG_DECIMALS = 4;
 
-const usesSg = (key: AnyParameterKey, prefs: ReadingPrefs) => key === 'salinity' && prefs.salinityDisplay === 'sg';
-const usesF = (key: AnyParameterKey, prefs: ReadingPrefs) => key === 'temperature' && prefs.temperatureUnit === 'F';
+const usesSg = (key: AnyParameterKey, prefs: ReadingPrefs) =>
+  key === 'salinity' && prefs.salinityDisplay === 'sg';
+const usesF = (key: AnyParameterKey, prefs: ReadingPrefs) =>
+  key === 'temperature' && prefs.temperatureUnit === 'F';
 
 /** The unit a parameter is shown in for this member: °F instead of °C, SG or ppt instead of PSU. */
 export function displayUnit(key: AnyParameterKey, prefs: ReadingPrefs): string {
@@ -73,5 +75,7 @@ export function formatVolume(litres: number, prefs: Pick<UnitPrefs, 'volumeUnit'
 /** "pH 8.1", "25.1 °C", "SG 1.0250", "Nitrate 5 mg/L NO3": a value that says what it is. */
 export function formatLabelled(key: AnyParameterKey, canonical: number, prefs: ReadingPrefs): string {
   const text = formatDisplay(key, canonical, prefs);
-  return key === 'pH' || key === 'temperature' || key === 'salinity' ? text : `${parameterInfo(key).label} ${text}`;
+  return key === 'pH' || key === 'temperature' || key === 'salinity'
+    ? text
+    : `${parameterInfo(key).label} ${text}`;
 }

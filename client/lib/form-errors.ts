@@ -16,8 +16,13 @@ export const fieldsIn =
  * Puts a server 400's issues on the form's fields; returns the message for the top of the form when something is
  * left to say (an issue no field shows, or an error that is not about fields at all).
  */
-export function placeServerErrors<T extends FieldValues>(error: unknown, fieldOf: FieldOf, setError: UseFormSetError<T>): string | undefined {
-  if (!(error instanceof ApiError)) return 'Could not reach Shoalwise. Check your connection and try again: what you entered is still here.';
+export function placeServerErrors<T extends FieldValues>(
+  error: unknown,
+  fieldOf: FieldOf,
+  setError: UseFormSetError<T>,
+): string | undefined {
+  if (!(error instanceof ApiError))
+    return 'Could not reach Shoalwise. Check your connection and try again: what you entered is still here.';
   let unplaced = error.issues.length === 0;
   for (const issue of error.issues) {
     const field = fieldOf(issue.path);

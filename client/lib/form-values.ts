@@ -9,7 +9,8 @@ export function parseDecimal(text: string): number | undefined {
   return DECIMAL.test(t) ? Number(t.replace(',', '.')) : Number.NaN;
 }
 
-export const trimmedOrUndefined = (text: string): string | undefined => (text.trim() === '' ? undefined : text.trim());
+export const trimmedOrUndefined = (text: string): string | undefined =>
+  text.trim() === '' ? undefined : text.trim();
 
 const pad = (n: number) => String(n).padStart(2, '0');
 

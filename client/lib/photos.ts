@@ -10,10 +10,12 @@ const base = (clubId: string, tankId: string) => `/clubs/${clubId}/tanks/${tankI
 export const tankPhotosQuery = (clubId: string, tankId: string) =>
   queryOptions({
     queryKey: tankKeys.photos(clubId, tankId),
-    queryFn: ({ signal }) => api.get<{ photos: PhotoView[] }>(base(clubId, tankId), signal).then((r) => r.photos),
+    queryFn: ({ signal }) =>
+      api.get<{ photos: PhotoView[] }>(base(clubId, tankId), signal).then((r) => r.photos),
   });
 /** `enabled` waits for the tank itself: a reader who may not see it is told once, by the tank's own answer. */
-export const useTankPhotos = (clubId: string, tankId: string, enabled = true) => useQuery({ ...tankPhotosQuery(clubId, tankId), enabled });
+export const useTankPhotos = (clubId: string, tankId: string, enabled = true) =>
+  useQuery({ ...tankPhotosQuery(clubId, tankId), enabled });
 
 export interface PhotoUpload {
   tankId: string;

@@ -13,7 +13,10 @@ export class PhotoUploadError extends Error {
  * save is on its way joins it, and a submit after a failed upload sends only the photos again. A failed save (the
  * record was not stored) may be tried again. A failed upload throws PhotoUploadError.
  */
-export function useSaveWithPhotos<I, S>(save: (input: I) => Promise<S>, upload: (saved: S, photos: File[]) => Promise<unknown>) {
+export function useSaveWithPhotos<I, S>(
+  save: (input: I) => Promise<S>,
+  upload: (saved: S, photos: File[]) => Promise<unknown>,
+) {
   const record = useRef<Promise<S> | undefined>(undefined);
   const running = useRef<Promise<S> | undefined>(undefined);
   const run = async (input: I, photos: File[]): Promise<S> => {

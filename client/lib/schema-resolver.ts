@@ -18,7 +18,10 @@ function setAt(target: Record<string, unknown>, path: string, error: FieldError)
   if (!node[leaf]) node[leaf] = error;
 }
 
-export function issuesToErrors<T extends FieldValues>(issues: readonly Issue[], fieldOf: FieldOf): FieldErrors<T> {
+export function issuesToErrors<T extends FieldValues>(
+  issues: readonly Issue[],
+  fieldOf: FieldOf,
+): FieldErrors<T> {
   const errors: Record<string, unknown> = {};
   const top: string[] = [];
   for (const issue of issues) {
@@ -30,7 +33,8 @@ export function issuesToErrors<T extends FieldValues>(issues: readonly Issue[], 
   return errors as FieldErrors<T>;
 }
 
-const zodIssues = (error: z.ZodError): Issue[] => error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
+const zodIssues = (error: z.ZodError): Issue[] =>
+  error.issues.map((i) => ({ path: i.path.map(String).join('.'), message: i.message }));
 
 /**
  * A react-hook-form resolver that checks the form with a shared zod schema: the form's strings become the API

@@ -59,7 +59,8 @@ export function useSocketEvent<E extends EventName>(name: E, handler: ServerToCl
   const latest = useLatest(handler);
   useEffect(() => {
     if (!socket) return;
-    const listener = ((...args: Parameters<ServerToClientEvents[E]>) => (latest.current as (...a: typeof args) => void)(...args)) as never;
+    const listener = ((...args: Parameters<ServerToClientEvents[E]>) =>
+      (latest.current as (...a: typeof args) => void)(...args)) as never;
     socket.on(name, listener);
     return () => {
       socket.off(name, listener);

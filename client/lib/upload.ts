@@ -3,7 +3,13 @@ import { apiErrorFrom, csrfTokenForRequest, resetCsrfToken } from './api-client'
 /** 0–1 of the request body sent so far. */
 export type UploadProgress = (fraction: number) => void;
 
-function send<T>(path: string, body: string, token: string, onProgress: UploadProgress | undefined, signal?: AbortSignal): Promise<T> {
+function send<T>(
+  path: string,
+  body: string,
+  token: string,
+  onProgress: UploadProgress | undefined,
+  signal?: AbortSignal,
+): Promise<T> {
   return new Promise<T>((resolve, reject) => {
     const xhr = new XMLHttpRequest();
     xhr.open('POST', `/api${path}`);
@@ -31,7 +37,12 @@ function send<T>(path: string, body: string, token: string, onProgress: UploadPr
  * POSTs JSON like `api.post`, but through XMLHttpRequest so a large body (a CSV file) can report how much of it
  * has been sent; fetch cannot report upload progress.
  */
-export async function postJsonWithProgress<T>(path: string, body: unknown, onProgress?: UploadProgress, signal?: AbortSignal): Promise<T> {
+export async function postJsonWithProgress<T>(
+  path: string,
+  body: unknown,
+  onProgress?: UploadProgress,
+  signal?: AbortSignal,
+): Promise<T> {
   const text = JSON.stringify(body);
   try {
     return await send<T>(path, text, await csrfTokenForRequest(), onProgress, signal);

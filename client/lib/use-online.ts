@@ -10,4 +10,9 @@ const subscribe = (changed: () => void) => {
 };
 
 /** Whether the browser believes it has a network: false means nothing typed now can reach the club's server. */
-export const useOnline = () => useSyncExternalStore(subscribe, () => navigator.onLine, () => true);
+export const useOnline = () =>
+  useSyncExternalStore(
+    subscribe,
+    () => navigator.onLine,
+    () => true,
+  );

@@ -8,7 +8,9 @@ const envSchema = z.object({
   NODE_ENV: z.enum(['development', 'test', 'production']).default('development'),
   HOST: z.string().min(1).default('127.0.0.1'),
   PORT: port(3000),
-  DATABASE_URL: z.url({ protocol: /^postgres(ql)?$/ }).default('postgres://shoalwise@127.0.0.1:5487/shoalwise'),
+  DATABASE_URL: z
+    .url({ protocol: /^postgres(ql)?$/ })
+    .default('postgres://shoalwise@127.0.0.1:5487/shoalwise'),
   PUBLIC_BASE_URL: z.url().optional(),
   SESSION_SECRET: z.string().min(32).optional(),
   LOG_LEVEL: z.enum(['fatal', 'error', 'warn', 'info', 'debug', 'trace', 'silent']).default('info'),
@@ -43,7 +45,10 @@ function trustProxySetting(value: string | undefined): false | number | string[]
     const hops = Number(value);
     if (hops >= 1 && hops <= 10) return hops;
   }
-  const entries = value.split(',').map((e) => e.trim()).filter(Boolean);
+  const entries = value
+    .split(',')
+    .map((e) => e.trim())
+    .filter(Boolean);
   if (value !== 'true' && entries.length && entries.every(isAddressOrRange)) return entries;
   throw new ConfigError(
     `Bad configuration: TRUST_PROXY must be "none", a number of proxy hops (1-10) or the proxies' addresses/ranges (e.g. "loopback, 10.0.0.0/8"), not "${value}"`,
@@ -83,10 +88,15 @@ export function loadConfig(source: NodeJS.ProcessEnv = process.env): Config {
   }
   const e = parsed.data;
   const isProduction = e.NODE_ENV === 'production';
-  if (isProduction && !e.SESSION_SECRET) throw new ConfigError('Bad configuration: SESSION_SECRET is required in production');
-  if (isProduction && !e.PUBLIC_BASE_URL) throw new ConfigError('Bad configuration: PUBLIC_BASE_URL is required in production');
+  if (isProduction && !e.SESSION_SECRET)
+    throw new ConfigError('Bad configuration: SESSION_SECRET is required in production');
+  if (isProduction && !e.PUBLIC_BASE_URL)
+    throw new ConfigError('Bad configuration: PUBLIC_BASE_URL is required in production');
   // Behind a proxy every client would share the proxy's address (one limit for everyone) unless this is said.
-  if (isProduction && !e.TRUST_PROXY) throw new ConfigError('Bad configuration: TRUST_PROXY is required in production ("none" when no proxy is in front)');
+  if (isProduction && !e.TRUST_PROXY)
+    throw new ConfigError(
+      'Bad configuration: TRUST_PROXY is required in production ("none" when no proxy is in front)',
+    );
   const trustProxy = trustProxySetting(e.TRUST_PROXY);
   const uploadsDir = resolve(e.UPLOADS_DIR);
   // The built client is served statically: uploads there would bypass the permission checks (ASVS 5.3.1).

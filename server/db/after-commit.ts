@@ -23,7 +23,12 @@ function settle(queryRunner: QueryRunner, committed: boolean): void {
   if (queryRunner.isTransactionActive) {
     // A savepoint ended inside the transaction: a rollback drops what was queued within it; a release hands it to the parent.
     const depth = depthOf(queryRunner);
-    setQueued(queryRunner, committed ? tasks.map((t) => ({ ...t, depth: Math.min(t.depth, depth) })) : tasks.filter((t) => t.depth <= depth));
+    setQueued(
+      queryRunner,
+      committed
+        ? tasks.map((t) => ({ ...t, depth: Math.min(t.depth, depth) }))
+        : tasks.filter((t) => t.depth <= depth),
+    );
     return;
   }
   setQueued(queryRunner, undefined);

@@ -14,4 +14,30 @@ import { Livestock, Tank, TankEvent, WaterTest } from '../modules/tanks';
 import { User } from '../modules/users';
 
 /** Every TypeORM entity, listed explicitly. */
-export const entities: Function[] = [User, Club, Membership, Invite, PasswordReset, MentorAssignment, AuditEvent, CapturedMail, ClubCareProfile, ClubCareProfileVersion, Tank, Livestock, WaterTest, TankEvent, Photo, MentorRequest, Notification, NotificationPreference, NotificationDigest, ConcernRow, TankReadiness, Question, QuestionReply, Meetup, MeetupRsvp];
+export const entities: Function[] = [
+  User,
+  Club,
+  Membership,
+  Invite,
+  PasswordReset,
+  MentorAssignment,
+  AuditEvent,
+  CapturedMail,
+  ClubCareProfile,
+  ClubCareProfileVersion,
+  Tank,
+  Livestock,
+  WaterTest,
+  TankEvent,
+  Photo,
+  MentorRequest,
+  Notification,
+  NotificationPreference,
+  NotificationDigest,
+  ConcernRow,
+  TankReadiness,
+  Question,
+  QuestionReply,
+  Meetup,
+  MeetupRsvp,
+];

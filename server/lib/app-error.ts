@@ -34,10 +34,12 @@ export class AppError extends Error {
 export const errors = {
   badRequest: (message: string, issues?: FieldIssue[]) =>
     new AppError({ code: 'bad_request', status: 400, message, issues }),
-  unauthenticated: (message = 'Please sign in.') => new AppError({ code: 'unauthenticated', status: 401, message }),
+  unauthenticated: (message = 'Please sign in.') =>
+    new AppError({ code: 'unauthenticated', status: 401, message }),
   forbidden: (message = 'You are not allowed to do that.') =>
     new AppError({ code: 'forbidden', status: 403, message }),
-  notFound: (what = 'That') => new AppError({ code: 'not_found', status: 404, message: `${what} was not found.` }),
+  notFound: (what = 'That') =>
+    new AppError({ code: 'not_found', status: 404, message: `${what} was not found.` }),
   conflict: (message: string) => new AppError({ code: 'conflict', status: 409, message }),
   gone: (message: string) => new AppError({ code: 'gone', status: 410, message }),
   tooLarge: (message: string) => new AppError({ code: 'too_large', status: 413, message }),

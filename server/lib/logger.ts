@@ -16,7 +16,17 @@ export function createLogger(config: Pick<Config, 'logLevel'>, destination?: Des
     {
       level: config.logLevel,
       timestamp: pino.stdTimeFunctions.isoTime, // UTC
-      redact: { paths: ['req.headers.cookie', 'req.headers["x-csrf-token"]', 'password', '*.password', 'token', '*.token'], remove: true },
+      redact: {
+        paths: [
+          'req.headers.cookie',
+          'req.headers["x-csrf-token"]',
+          'password',
+          '*.password',
+          'token',
+          '*.token',
+        ],
+        remove: true,
+      },
       serializers: { err: errWithoutValues },
     },
     destination,

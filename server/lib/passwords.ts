@@ -1,7 +1,12 @@
 import { hash, verify } from '@node-rs/argon2';
 
 /** OWASP's argon2id minimum (ASVS 11.4.2): m = 19456 KiB, t = 2, p = 1. */
-export const ARGON2_OPTIONS = { algorithm: 2 /* Argon2id; the package's enum is an ambient const enum */, memoryCost: 19_456, timeCost: 2, parallelism: 1 } as const;
+export const ARGON2_OPTIONS = {
+  algorithm: 2 /* Argon2id; the package's enum is an ambient const enum */,
+  memoryCost: 19_456,
+  timeCost: 2,
+  parallelism: 1,
+} as const;
 
 export function hashPassword(password: string): Promise<string> {
   return hash(password, ARGON2_OPTIONS);

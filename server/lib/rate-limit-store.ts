@@ -45,7 +45,10 @@ export class PostgresRateLimitStore implements Store {
   }
 
   async decrement(key: string): Promise<void> {
-    await this.dataSource.query(`UPDATE rate_limit_hit SET hits = greatest(hits - 1, 0) WHERE key = $1 AND reset_at > now()`, [this.key(key)]);
+    await this.dataSource.query(
+      `UPDATE rate_limit_hit SET hits = greatest(hits - 1, 0) WHERE key = $1 AND reset_at > now()`,
+      [this.key(key)],
+    );
   }
 
   async resetKey(key: string): Promise<void> {
@@ -55,6 +58,8 @@ export class PostgresRateLimitStore implements Store {
 
 /** Windows that ended long ago: nothing reads them again. boot.ts calls it hourly. */
 export async function pruneRateLimitHits(dataSource: DataSource): Promise<number> {
-  const rows: unknown[] = await dataSource.query(`DELETE FROM rate_limit_hit WHERE reset_at < now() - interval '1 hour' RETURNING 1`);
+  const rows: unknown[] = await dataSource.query(
+    `DELETE FROM rate_limit_hit WHERE reset_at < now() - interval '1 hour' RETURNING 1`,
+  );
   return rows.length;
 }

@@ -31,8 +31,20 @@ export async function startFakeSmtp(dataSource: DataSource, logger: Logger, port
             subject: mail.subject ?? '',
             text: mail.text ?? '',
             html: typeof mail.html === 'string' ? mail.html : '',
-            headers: Object.fromEntries(mail.headerLines.map((h) => [h.key, h.line.slice(h.line.indexOf(':') + 1).replace(/\r?\n/g, '').trim()])),
-            attachments: mail.attachments.map((a) => ({ filename: a.filename ?? '', contentType: a.contentType, content: a.content.toString('utf8') })),
+            headers: Object.fromEntries(
+              mail.headerLines.map((h) => [
+                h.key,
+                h.line
+                  .slice(h.line.indexOf(':') + 1)
+                  .replace(/\r?\n/g, '')
+                  .trim(),
+              ]),
+            ),
+            attachments: mail.attachments.map((a) => ({
+              filename: a.filename ?? '',
+              contentType: a.contentType,
+              content: a.content.toString('utf8'),
+            })),
           }),
         )
         .then(() => callback())

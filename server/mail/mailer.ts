@@ -51,7 +51,11 @@ export async function startMailer(options: MailerOptions): Promise<Mailer> {
     ignoreTLS: options.smtpHost === '127.0.0.1',
     connectionTimeout: 5_000,
   });
-  const boss = new PgBoss({ connectionString: options.databaseUrl, max: 3, application_name: 'shoalwise-mail' });
+  const boss = new PgBoss({
+    connectionString: options.databaseUrl,
+    max: 3,
+    application_name: 'shoalwise-mail',
+  });
   boss.on('error', (err: Error) => options.logger.warn({ err: err.message }, 'mail queue error'));
   await boss.start();
   await boss.createQueue(QUEUE);
@@ -61,15 +65,34 @@ export async function startMailer(options: MailerOptions): Promise<Mailer> {
     async (jobs) => {
       for (const job of jobs) {
         const m = job.data;
-        await transport.sendMail({ from: options.from, to: m.to, subject: m.subject, text: m.text, html: m.html, headers: m.headers, attachments: m.attachments });
+        await transport.sendMail({
+          from: options.from,
+          to: m.to,
+          subject: m.subject,
+          text: m.text,
+          html: m.html,
+          headers: m.headers,
+          attachments: m.attachments,
+        });
       }
     },
   );
   return {
     async enqueue(mail, enqueueOptions = {}) {
       const tx = enqueueOptions.db;
-      const db = tx ? { executeSql: async (text: string, values: unknown[]) => ({ rows: (await tx.query(text, values)) as unknown[] }) } : undefined;
-      await boss.send(QUEUE, mail, { retryLimit: 10, retryDelay: options.retryDelaySeconds ?? 5, retryBackoff: true, db });
+      const db = tx
+        ? {
+            executeSql: async (text: string, values: unknown[]) => ({
+              rows: (await tx.query(text, values)) as unknown[],
+            }),
+          }
+        : undefined;
+      await boss.send(QUEUE, mail, {
+        retryLimit: 10,
+        retryDelay: options.retryDelaySeconds ?? 5,
+        retryBackoff: true,
+        db,
+      });
     },
     async stop() {
       await boss.stop({ graceful: true, timeout: 5_000, wait: true });

@@ -16,7 +16,12 @@ export interface MailTiming {
   retryDelaySeconds?: number;
 }
 
-export async function startMail(config: Config, dataSource: DataSource, logger: Logger, timing: MailTiming = {}): Promise<MailInfrastructure> {
+export async function startMail(
+  config: Config,
+  dataSource: DataSource,
+  logger: Logger,
+  timing: MailTiming = {},
+): Promise<MailInfrastructure> {
   let fakeSmtp: FakeSmtp | undefined;
   let host = config.smtp.host;
   let port = config.smtp.port;
@@ -26,7 +31,14 @@ export async function startMail(config: Config, dataSource: DataSource, logger: 
     host = '127.0.0.1';
     port = fakeSmtp.port;
   }
-  const mailer = await startMailer({ databaseUrl: config.databaseUrl, smtpHost: host, smtpPort: port, from: config.mailFrom, logger, ...timing });
+  const mailer = await startMailer({
+    databaseUrl: config.databaseUrl,
+    smtpHost: host,
+    smtpPort: port,
+    from: config.mailFrom,
+    logger,
+    ...timing,
+  });
   return {
     mailer,
     fakeSmtp,

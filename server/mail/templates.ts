@@ -20,7 +20,12 @@ function layout(clubName: string, paragraphs: string[], link: { href: string; la
 </div></body></html>`;
 }
 
-export function inviteMail(p: { clubName: string; inviterName: string; role: Role; link: string }): RenderedMail {
+export function inviteMail(p: {
+  clubName: string;
+  inviterName: string;
+  role: Role;
+  link: string;
+}): RenderedMail {
   const lines = [
     `${p.inviterName} invites you to join ${p.clubName} on Shoalwise as ${ROLE_LABELS[p.role].toLowerCase()}.`,
     'Shoalwise is where the club keeps its tanks, water tests and mentoring in one place.',
@@ -29,7 +34,10 @@ export function inviteMail(p: { clubName: string; inviterName: string; role: Rol
   return {
     subject: `You're invited to ${p.clubName}`,
     text: `${lines.join('\n\n')}\n\nAccept the invitation: ${p.link}\n\nIf you did not expect this, ignore this e-mail.`,
-    html: layout(p.clubName, [...lines, 'If you did not expect this, ignore this e-mail.'], { href: p.link, label: 'Accept the invitation' }),
+    html: layout(p.clubName, [...lines, 'If you did not expect this, ignore this e-mail.'], {
+      href: p.link,
+      label: 'Accept the invitation',
+    }),
   };
 }
 

@@ -17,7 +17,11 @@ export const csrfProtection: RequestHandler = (req, _res, next) => {
   const expected = req.session?.csrfToken;
   if (!sent || !expected || !safeEqual(sent, expected)) {
     return next(
-      new AppError({ code: 'csrf_invalid', status: 403, message: 'Your page is out of date. Reload it and try again.' }),
+      new AppError({
+        code: 'csrf_invalid',
+        status: 403,
+        message: 'Your page is out of date. Reload it and try again.',
+      }),
     );
   }
   next();

@@ -12,7 +12,9 @@ function isDatabaseDown(err: unknown): boolean {
   const e = err as { code?: string; message?: string };
   return (
     ['ECONNREFUSED', 'ECONNRESET', '57P01', '57P03', 'ETIMEDOUT'].includes(e?.code ?? '') ||
-    /timeout exceeded when trying to connect|Connection terminated|connect ECONNREFUSED/i.test(e?.message ?? '')
+    /timeout exceeded when trying to connect|Connection terminated|connect ECONNREFUSED/i.test(
+      e?.message ?? '',
+    )
   );
 }
 
@@ -24,7 +26,11 @@ function toAppError(err: unknown): AppError | undefined {
   if (e?.type === 'entity.too.large') return errors.tooLarge('The request is too large.');
   if (e?.type === 'entity.parse.failed') return errors.badRequest('The request body is not valid JSON.');
   if (typeof e?.status === 'number' && e.status >= 400 && e.status < 500) {
-    return new AppError({ code: 'bad_request', status: e.status, message: 'The request could not be processed.' });
+    return new AppError({
+      code: 'bad_request',
+      status: e.status,
+      message: 'The request could not be processed.',
+    });
   }
   if (isDatabaseDown(err)) return errors.unavailable();
   return undefined;
@@ -39,7 +45,11 @@ export function errorHandler(options: { exposeStack: boolean }): ErrorRequestHan
       if (known.status >= 500) req.log?.warn({ err }, known.message);
       if (known.headers) res.set(known.headers);
       res.status(known.status).json({
-        error: { code: known.code, message: known.message, ...(known.details ? { details: known.details } : {}) },
+        error: {
+          code: known.code,
+          message: known.message,
+          ...(known.details ? { details: known.details } : {}),
+        },
         ...(known.issues ? { issues: known.issues } : {}),
       });
       return;

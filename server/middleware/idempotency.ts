@@ -18,7 +18,9 @@ interface Stored {
 }
 
 const fingerprintOf = (method: string, url: string, body: unknown) =>
-  createHash('sha256').update(`${method} ${url}\n${JSON.stringify(body ?? null)}`).digest('hex');
+  createHash('sha256')
+    .update(`${method} ${url}\n${JSON.stringify(body ?? null)}`)
+    .digest('hex');
 
 /**
  * Unsafe requests that carry an Idempotency-Key are answered once: the first request runs and its 2xx answer is
@@ -29,18 +31,30 @@ const fingerprintOf = (method: string, url: string, body: unknown) =>
  */
 export function idempotentRequests(dataSource: DataSource): RequestHandler {
   const read = async (userId: string, key: string): Promise<Stored | undefined> => {
-    const rows: Stored[] = await dataSource.query(`SELECT fingerprint, status, body FROM idempotent_request WHERE user_id = $1 AND key = $2`, [userId, key]);
+    const rows: Stored[] = await dataSource.query(
+      `SELECT fingerprint, status, body FROM idempotent_request WHERE user_id = $1 AND key = $2`,
+      [userId, key],
+    );
     return rows[0];
   };
   const release = (userId: string, key: string) =>
-    dataSource.query(`DELETE FROM idempotent_request WHERE user_id = $1 AND key = $2 AND status IS NULL`, [userId, key]).catch(() => undefined);
+    dataSource
+      .query(`DELETE FROM idempotent_request WHERE user_id = $1 AND key = $2 AND status IS NULL`, [
+        userId,
+        key,
+      ])
+      .catch(() => undefined);
 
   return async (req, res, next) => {
     const key = req.get(IDEMPOTENCY_HEADER);
     const userId = req.viewer?.user.id;
     if (key === undefined || SAFE.has(req.method) || !userId) return next();
     if (!KEY.test(key)) {
-      return next(errors.badRequest('Some fields need attention.', [{ path: IDEMPOTENCY_HEADER, message: 'Use 8 to 100 letters, digits, ".", "_", ":" or "-".' }]));
+      return next(
+        errors.badRequest('Some fields need attention.', [
+          { path: IDEMPOTENCY_HEADER, message: 'Use 8 to 100 letters, digits, ".", "_", ":" or "-".' },
+        ]),
+      );
     }
     const fingerprint = fingerprintOf(req.method, req.originalUrl, req.body);
     const claimed: unknown[] = await dataSource.query(
@@ -56,14 +70,28 @@ export function idempotentRequests(dataSource: DataSource): RequestHandler {
       // Stored before it is sent: whoever sees this 2xx can count on a retry being answered the same.
       stored = true;
       void dataSource
-        .query(`UPDATE idempotent_request SET status = $3, body = $4 WHERE user_id = $1 AND key = $2`, [userId, key, res.statusCode, JSON.stringify(body)])
-        .then(() => json(body), () => json(body));
+        .query(`UPDATE idempotent_request SET status = $3, body = $4 WHERE user_id = $1 AND key = $2`, [
+          userId,
+          key,
+          res.statusCode,
+          JSON.stringify(body),
+        ])
+        .then(
+          () => json(body),
+          () => json(body),
+        );
       return res;
     };
     res.on('finish', () => {
       if (stored) return;
       if (res.statusCode >= 200 && res.statusCode < 300) {
-        void dataSource.query(`UPDATE idempotent_request SET status = $3 WHERE user_id = $1 AND key = $2`, [userId, key, res.statusCode]).catch(() => undefined);
+        void dataSource
+          .query(`UPDATE idempotent_request SET status = $3 WHERE user_id = $1 AND key = $2`, [
+            userId,
+            key,
+            res.statusCode,
+          ])
+          .catch(() => undefined);
       } else void release(userId, key);
     });
     res.on('close', () => {
@@ -84,12 +112,24 @@ async function waitForAnswer(read: () => Promise<Stored | undefined>): Promise<S
 
 function replay(res: Response, row: Stored | undefined, fingerprint: string): void {
   // Gone meanwhile: the first request was refused and freed the key.
-  if (!row) throw new AppError({ code: 'conflict', status: 409, message: 'The same request was just refused. Check it and send it again.' });
+  if (!row)
+    throw new AppError({
+      code: 'conflict',
+      status: 409,
+      message: 'The same request was just refused. Check it and send it again.',
+    });
   if (row.fingerprint !== fingerprint) {
-    throw errors.unprocessable('This Idempotency-Key was already used for a different request. Make a new key for a new request.');
+    throw errors.unprocessable(
+      'This Idempotency-Key was already used for a different request. Make a new key for a new request.',
+    );
   }
   if (row.status === null) {
-    throw new AppError({ code: 'in_progress', status: 409, message: 'The same request is still being saved. Try again in a moment.', headers: { 'Retry-After': '1' } });
+    throw new AppError({
+      code: 'in_progress',
+      status: 409,
+      message: 'The same request is still being saved. Try again in a moment.',
+      headers: { 'Retry-After': '1' },
+    });
   }
   res.set('Idempotent-Replayed', 'true').status(row.status);
   if (row.body === null) res.end();
@@ -97,5 +137,8 @@ function replay(res: Response, row: Stored | undefined, fingerprint: string): vo
 }
 
 export async function pruneIdempotentRequests(dataSource: DataSource): Promise<void> {
-  await dataSource.query(`DELETE FROM idempotent_request WHERE created_at < now() - make_interval(hours => $1)`, [IDEMPOTENCY_KEEP_HOURS]);
+  await dataSource.query(
+    `DELETE FROM idempotent_request WHERE created_at < now() - make_interval(hours => $1)`,
+    [IDEMPOTENCY_KEEP_HOURS],
+  );
 }

@@ -17,7 +17,9 @@ function limiter(storeFor: RateLimitStoreFor, options: LimiterOptions): RequestH
     ...options,
     handler: (req, _res, next, used) => {
       const reset = (req as Request & { rateLimit?: { resetTime?: Date } }).rateLimit?.resetTime;
-      const seconds = reset ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000)) : used.windowMs / 1000;
+      const seconds = reset
+        ? Math.max(1, Math.ceil((reset.getTime() - Date.now()) / 1000))
+        : used.windowMs / 1000;
       req.log?.warn({ limiter: used.identifier }, 'rate limit reached');
       next(errors.tooMany(seconds));
     },
@@ -50,17 +52,41 @@ export interface RateLimits {
 
 /** The app's limiters, counting in the stores `storeFor` makes (PostgreSQL in the app, shared by every instance). */
 export function createRateLimits(storeFor: RateLimitStoreFor): RateLimits {
-  const token = (identifier: string, limit = 20) => limiter(storeFor, { identifier, windowMs: FIFTEEN_MINUTES, limit, keyGenerator: byAddress });
+  const token = (identifier: string, limit = 20) =>
+    limiter(storeFor, { identifier, windowMs: FIFTEEN_MINUTES, limit, keyGenerator: byAddress });
   return {
     signIn: () => [
-      limiter(storeFor, { identifier: 'sign-in:account+address', windowMs: FIFTEEN_MINUTES, limit: 10, skipSuccessfulRequests: true, keyGenerator: (r) => `${byAccount(r)}|${byAddress(r)}` }),
-      limiter(storeFor, { identifier: 'sign-in:address', windowMs: FIFTEEN_MINUTES, limit: 50, skipSuccessfulRequests: true, keyGenerator: byAddress }),
-      limiter(storeFor, { identifier: 'sign-in:account', windowMs: 60 * 60_000, limit: 100, skipSuccessfulRequests: true, keyGenerator: byAccount }),
+      limiter(storeFor, {
+        identifier: 'sign-in:account+address',
+        windowMs: FIFTEEN_MINUTES,
+        limit: 10,
+        skipSuccessfulRequests: true,
+        keyGenerator: (r) => `${byAccount(r)}|${byAddress(r)}`,
+      }),
+      limiter(storeFor, {
+        identifier: 'sign-in:address',
+        windowMs: FIFTEEN_MINUTES,
+        limit: 50,
+        skipSuccessfulRequests: true,
+        keyGenerator: byAddress,
+      }),
+      limiter(storeFor, {
+        identifier: 'sign-in:account',
+        windowMs: 60 * 60_000,
+        limit: 100,
+        skipSuccessfulRequests: true,
+        keyGenerator: byAccount,
+      }),
     ],
     token,
     resetRequest: () => [
       token('reset-request:address', 10),
-      limiter(storeFor, { identifier: 'reset-request:account', windowMs: 60 * 60_000, limit: 5, keyGenerator: byAccount }),
+      limiter(storeFor, {
+        identifier: 'reset-request:account',
+        windowMs: 60 * 60_000,
+        limit: 5,
+        keyGenerator: byAccount,
+      }),
     ],
   };
 }

@@ -1,7 +1,8 @@
 import type { RequestHandler } from 'express';
 import { errors, type FieldIssue } from '../lib/app-error';
 
-const UNSTORABLE = 'Contains a character that cannot be stored (a NUL character or a broken Unicode character).';
+const UNSTORABLE =
+  'Contains a character that cannot be stored (a NUL character or a broken Unicode character).';
 const MAX_LISTED = 20;
 
 /** PostgreSQL text and jsonb refuse NUL; an unpaired surrogate would be stored as U+FFFD, silently changing the text. */
@@ -54,10 +55,15 @@ export function rejectUnstorableText(options: { ownRules?: string[] } = {}): Req
   return (req, res, next) => {
     if (res.locals.storableTextChecked) return next();
     res.locals.storableTextChecked = true;
-    const body = req.body !== null && typeof req.body === 'object' && !Array.isArray(req.body) && own.size
-      ? Object.fromEntries(Object.entries(req.body as Record<string, unknown>).filter(([k]) => !own.has(k)))
-      : req.body;
-    const paths = [...unstorablePathSegments(req.path), ...unstorableTextPaths(body, ''), ...unstorableTextPaths(req.query, 'query')];
+    const body =
+      req.body !== null && typeof req.body === 'object' && !Array.isArray(req.body) && own.size
+        ? Object.fromEntries(Object.entries(req.body as Record<string, unknown>).filter(([k]) => !own.has(k)))
+        : req.body;
+    const paths = [
+      ...unstorablePathSegments(req.path),
+      ...unstorableTextPaths(body, ''),
+      ...unstorableTextPaths(req.query, 'query'),
+    ];
     if (!paths.length) return next();
     const issues: FieldIssue[] = [...new Set(paths)].map((path) => ({ path, message: UNSTORABLE }));
     next(errors.badRequest('Some fields need attention.', issues));

@@ -23,7 +23,10 @@ export function toFieldIssues(error: z.ZodError, prefix?: string): FieldIssue[] 
 export function parseInput<T extends z.ZodType>(schema: T, data: unknown, part: string): z.output<T> {
   const result = schema.safeParse(data ?? {});
   if (!result.success) {
-    throw errors.badRequest('Some fields need attention.', toFieldIssues(result.error, part === 'body' ? undefined : part));
+    throw errors.badRequest(
+      'Some fields need attention.',
+      toFieldIssues(result.error, part === 'body' ? undefined : part),
+    );
   }
   return result.data;
 }

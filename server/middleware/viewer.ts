@@ -39,7 +39,12 @@ export function viewerOf(req: Request): ViewerContext {
 }
 
 /** Per-object check on the server (ASVS 8.2.2): throws 403 with the reason unless the rules allow it. */
-export function authorize<K extends SubjectType>(req: Request, action: Action, type: K, object: SubjectMap[K]): void {
+export function authorize<K extends SubjectType>(
+  req: Request,
+  action: Action,
+  type: K,
+  object: SubjectMap[K],
+): void {
   const { ability } = viewerOf(req);
   ForbiddenError.from(ability)
     .setMessage(`You may not ${action} this ${type.replace(/([a-z])([A-Z])/g, '$1 $2').toLowerCase()}.`)
@@ -55,6 +60,7 @@ export const requireClubMember: RequestHandler = (req, _res, next) => {
   const clubId = req.params.clubId;
   const membership = viewer.memberships.find((m) => m.clubId === clubId);
   if (!membership) return next(errors.notFound('That club'));
-  if (membership.status !== 'active') return next(errors.forbidden('Your membership of this club is suspended.'));
+  if (membership.status !== 'active')
+    return next(errors.forbidden('Your membership of this club is suspended.'));
   next();
 };

@@ -1,7 +1,12 @@
 import type { Server } from 'socket.io';
 import { rooms, type ClientToServerEvents, type ServerToClientEvents } from '@shared/events/socket-events';
 
-export type IoServer = Server<ClientToServerEvents, ServerToClientEvents, Record<string, never>, { userId: string; sessionId: string }>;
+export type IoServer = Server<
+  ClientToServerEvents,
+  ServerToClientEvents,
+  Record<string, never>,
+  { userId: string; sessionId: string }
+>;
 
 /**
  * The app's handle on live connections. Created before the HTTP server exists (routers hold it),
@@ -36,7 +41,11 @@ export class RealtimeHub {
     let sent = 0;
     for (const socket of sockets) {
       const userId = socket.data.userId;
-      if (!decisions.has(userId)) decisions.set(userId, mayRead(userId).catch(() => false));
+      if (!decisions.has(userId))
+        decisions.set(
+          userId,
+          mayRead(userId).catch(() => false),
+        );
       if (await decisions.get(userId)) {
         socket.emit(event, ...args);
         sent++;
@@ -46,7 +55,11 @@ export class RealtimeHub {
   }
 
   /** Something only this user may see: their `user:` room on every instance, nobody else. */
-  emitToUser<E extends keyof ServerToClientEvents>(userId: string, event: E, payload: Parameters<ServerToClientEvents[E]>[0]): void {
+  emitToUser<E extends keyof ServerToClientEvents>(
+    userId: string,
+    event: E,
+    payload: Parameters<ServerToClientEvents[E]>[0],
+  ): void {
     const args = [payload] as Parameters<ServerToClientEvents[E]>;
     this.io?.to(rooms.user(userId)).emit(event, ...args);
   }

@@ -53,7 +53,9 @@ export function startRealtime(p: {
     allowRequest: (req, callback) => {
       callback(null, originAllowed(req.headers.origin, req.headers.host, origins));
     },
-    adapter: createAdapter(releaseDroppedListenClients(p.adapterPool) as Pool, { tableName: 'socket_io_attachments' }),
+    adapter: createAdapter(releaseDroppedListenClients(p.adapterPool) as Pool, {
+      tableName: 'socket_io_attachments',
+    }),
   });
   // The same express-session as the HTTP API: no second sign-in, no token in the URL.
   io.engine.use(p.sessionMiddleware);
@@ -76,7 +78,12 @@ export function startRealtime(p: {
     }
   });
   p.hub.attach(io);
-  const stopWatching = watchSocketSessions({ io, dataSource: p.dataSource, intervalMs: p.config.socketSessionCheckSeconds * 1000, logger: p.logger });
+  const stopWatching = watchSocketSessions({
+    io,
+    dataSource: p.dataSource,
+    intervalMs: p.config.socketSessionCheckSeconds * 1000,
+    logger: p.logger,
+  });
   p.httpServer.once('close', stopWatching);
   return io;
 }

@@ -9,7 +9,12 @@ import type { IoServer } from './hub';
  * socket open. Every `intervalMs` the sockets of this instance are checked against the session store and those whose
  * session is gone are disconnected (ASVS 7.4.1). Sign-out and password resets still close sockets at once.
  */
-export function watchSocketSessions(p: { io: IoServer; dataSource: DataSource; intervalMs: number; logger: Logger }): () => void {
+export function watchSocketSessions(p: {
+  io: IoServer;
+  dataSource: DataSource;
+  intervalMs: number;
+  logger: Logger;
+}): () => void {
   let running = false;
   const check = async () => {
     if (running) return;

@@ -49,7 +49,8 @@ function memberRules({ can }: Builder, clubId: string, userId: string): void {
   can('read', 'MentorAssignment', { clubId, menteeId: userId });
   can(['create', 'read'], 'MentorRequest', { clubId, requesterId: userId });
   // Spelled out rather than 'manage': a keeper must never sign off their own tank or acknowledge on a mentor's behalf.
-  for (const s of ['Tank', 'WaterTest', 'TankEvent', 'Photo'] as const) can(['create', 'read', 'update', 'delete'], s, { clubId, ownerId: userId });
+  for (const s of ['Tank', 'WaterTest', 'TankEvent', 'Photo'] as const)
+    can(['create', 'read', 'update', 'delete'], s, { clubId, ownerId: userId });
   can(['read', 'resolve'], 'Concern', { clubId, ownerId: userId });
   can('watch', 'Tank', { clubId, ownerId: userId });
   can(['create', 'read', 'update'], 'Question', { clubId, askerId: userId });
@@ -59,7 +60,12 @@ function memberRules({ can }: Builder, clubId: string, userId: string): void {
   can('read', 'CareProfile', { clubId });
 }
 
-function mentorRules({ can }: Builder, clubId: string, currentMentees: string[], pastMentees: string[]): void {
+function mentorRules(
+  { can }: Builder,
+  clubId: string,
+  currentMentees: string[],
+  pastMentees: string[],
+): void {
   const readable = [...currentMentees, ...pastMentees];
   if (readable.length) {
     for (const s of LOGGED_ON_TANK) can('read', s, { clubId, ownerId: { $in: readable } });
@@ -76,7 +82,16 @@ function mentorRules({ can }: Builder, clubId: string, currentMentees: string[],
 
 function adminRules({ can, cannot }: Builder, clubId: string, userId: string): void {
   can('manage', 'Club', { id: clubId });
-  for (const s of ['Invite', 'Membership', 'MentorAssignment', 'MentorRequest', 'MentorSettings', 'Meetup', 'CareProfile'] as const) can('manage', s, { clubId });
+  for (const s of [
+    'Invite',
+    'Membership',
+    'MentorAssignment',
+    'MentorRequest',
+    'MentorSettings',
+    'Meetup',
+    'CareProfile',
+  ] as const)
+    can('manage', s, { clubId });
   for (const s of LOGGED_ON_TANK) can('read', s, { clubId });
   can('watch', 'Tank', { clubId });
   can(['read', 'answer'], 'Question', { clubId });

@@ -13,7 +13,12 @@ export * from './due-by-day';
 export * from './triage';
 export * from './stocking-readiness';
 export { sortByTakenAt, type KnownValue, type SeriesPoint, type TestPosition } from './readings';
-export { FREE_AMMONIA_INPUTS, lastKnownInputs, type FreeAmmoniaInput, type LastKnown } from './evaluation/free-ammonia';
+export {
+  FREE_AMMONIA_INPUTS,
+  lastKnownInputs,
+  type FreeAmmoniaInput,
+  type LastKnown,
+} from './evaluation/free-ammonia';
 export { indexTests, TestTimeline } from './test-timeline';
 export * from './observations';
 export * from './what-to-check';

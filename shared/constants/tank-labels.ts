@@ -3,8 +3,18 @@ import type { SystemType } from '../care/system-types';
 import type { TankPhase } from '../care/types';
 import type { TankShape } from '../chemistry/tank-volume';
 import type { TestMethod } from '../readings/entry-units';
-import type { ObservationAffected, ObservationCheck, ObservationScale, ObservationValue } from '../care/observations/vocabulary';
-import type { DOSE_UNITS, EQUIPMENT_CHANGES, SOURCE_WATER_TYPES, TankEventKind } from '../schemas/tank-event.schema';
+import type {
+  ObservationAffected,
+  ObservationCheck,
+  ObservationScale,
+  ObservationValue,
+} from '../care/observations/vocabulary';
+import type {
+  DOSE_UNITS,
+  EQUIPMENT_CHANGES,
+  SOURCE_WATER_TYPES,
+  TankEventKind,
+} from '../schemas/tank-event.schema';
 
 /** Words shown for the tank lists in shared/: one table each, keyed by the lists so none can be missed. */
 export const SYSTEM_TYPE_LABELS: Record<SystemType, string> = {
@@ -17,8 +27,14 @@ export const SYSTEM_TYPE_LABELS: Record<SystemType, string> = {
 };
 
 export const TANK_PHASE_LABELS: Record<TankPhase, { label: string; hint: string }> = {
-  cycling: { label: 'Still cycling', hint: 'The filter bacteria are still growing: ammonia or nitrite still show up.' },
-  established: { label: 'Established', hint: 'Ammonia and nitrite stay at zero and the tank is ready for (or has) animals.' },
+  cycling: {
+    label: 'Still cycling',
+    hint: 'The filter bacteria are still growing: ammonia or nitrite still show up.',
+  },
+  established: {
+    label: 'Established',
+    hint: 'Ammonia and nitrite stay at zero and the tank is ready for (or has) animals.',
+  },
 };
 
 /** Where a tank is in the nitrogen cycle, in a few words (the desk's rows, the home's tank cards). */

@@ -9,7 +9,13 @@ export function isRealLocalDateTime(local: string): boolean {
   if (!m) return false;
   const [y, mo, d, h, mi] = m.slice(1).map(Number) as [number, number, number, number, number];
   const probe = new Date(Date.UTC(y, mo - 1, d, h, mi));
-  return probe.getUTCFullYear() === y && probe.getUTCMonth() === mo - 1 && probe.getUTCDate() === d && h < 24 && mi < 60;
+  return (
+    probe.getUTCFullYear() === y &&
+    probe.getUTCMonth() === mo - 1 &&
+    probe.getUTCDate() === d &&
+    h < 24 &&
+    mi < 60
+  );
 }
 
 /**
@@ -27,7 +33,15 @@ const parts = new Map<string, Intl.DateTimeFormat>();
 function partsIn(timeZone: string): Intl.DateTimeFormat {
   let f = parts.get(timeZone);
   if (!f) {
-    f = new Intl.DateTimeFormat('en-CA', { timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit' });
+    f = new Intl.DateTimeFormat('en-CA', {
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+    });
     parts.set(timeZone, f);
   }
   return f;
@@ -44,10 +58,29 @@ export function utcToClubTime(at: Date | string, timeZone: string): string {
  * "Thursday, 2 April 2026, 19:00–21:00 (BST)": when a meetup happens, in the club's zone, as e-mails and calendars
  * say it. Days differ when it runs past midnight.
  */
-export function describeClubTime(startsAt: Date | string, endsAt: Date | string, timeZone: string, locale = 'en-GB'): string {
-  const day = new Intl.DateTimeFormat(locale, { timeZone, weekday: 'long', day: 'numeric', month: 'long', year: 'numeric' });
-  const time = new Intl.DateTimeFormat(locale, { timeZone, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' });
-  const zone = new Intl.DateTimeFormat(locale, { timeZone, timeZoneName: 'short' }).formatToParts(new Date(startsAt)).find((x) => x.type === 'timeZoneName')?.value ?? timeZone;
+export function describeClubTime(
+  startsAt: Date | string,
+  endsAt: Date | string,
+  timeZone: string,
+  locale = 'en-GB',
+): string {
+  const day = new Intl.DateTimeFormat(locale, {
+    timeZone,
+    weekday: 'long',
+    day: 'numeric',
+    month: 'long',
+    year: 'numeric',
+  });
+  const time = new Intl.DateTimeFormat(locale, {
+    timeZone,
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  });
+  const zone =
+    new Intl.DateTimeFormat(locale, { timeZone, timeZoneName: 'short' })
+      .formatToParts(new Date(startsAt))
+      .find((x) => x.type === 'timeZoneName')?.value ?? timeZone;
   const start = new Date(startsAt);
   const end = new Date(endsAt);
   const sameDay = day.format(start) === day.format(end);

@@ -11,7 +11,10 @@ export function isLinearEntry(parameter: ParameterKey, unit: string): boolean {
 // Units the chemistry engine does not list convert one-to-one: pH, mg/L of Ca, Mg, PO4 have a single unit,
 // and ppt is treated as practical salinity (they differ by about 0.5 %, less than a hobby instrument resolves).
 function chemistryUnit(unit: string): Unit | null {
-  return unit === '°C' || unit === '°F' || unit.startsWith('mg/L N') || ['dKH', 'meq/L', 'mg/L CaCO3'].includes(unit)
+  return unit === '°C' ||
+    unit === '°F' ||
+    unit.startsWith('mg/L N') ||
+    ['dKH', 'meq/L', 'mg/L CaCO3'].includes(unit)
     ? (unit as Unit)
     : null;
 }

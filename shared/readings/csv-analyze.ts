@@ -44,13 +44,25 @@ function columnFor(layout: CsvLayout, path: string): string {
   return path;
 }
 
-function readRow(layout: CsvLayout, req: CsvImportRequest, ctx: AnalyzeContext, row: number, cells: string[]): RowOutcome {
+function readRow(
+  layout: CsvLayout,
+  req: CsvImportRequest,
+  ctx: AnalyzeContext,
+  row: number,
+  cells: string[],
+): RowOutcome {
   const record = layout.cellOf(cells, 'record')?.trim();
   if (record && record !== 'water-test') return { kind: 'other-record' };
   const issues: ImportRowIssue[] = [];
   const issue = (field: string, message: string) => issues.push({ row, field, message });
-  if (cells.length > layout.columns.length) issue('(row)', `This row has ${cells.length} cells but the header has ${layout.columns.length}.`);
-  const when = parseDateCell(layout.cellOf(cells, 'takenAt') ?? '', layout.cellOf(cells, 'time'), layout.dateFormat, layout.timeZone);
+  if (cells.length > layout.columns.length)
+    issue('(row)', `This row has ${cells.length} cells but the header has ${layout.columns.length}.`);
+  const when = parseDateCell(
+    layout.cellOf(cells, 'takenAt') ?? '',
+    layout.cellOf(cells, 'time'),
+    layout.dateFormat,
+    layout.timeZone,
+  );
   if ('error' in when) issue(layout.columnOf('takenAt')!, when.error);
   const entries: Record<string, unknown> = {};
   for (const { column, i, target } of layout.parameterColumns) {
@@ -63,7 +75,10 @@ function readRow(layout: CsvLayout, req: CsvImportRequest, ctx: AnalyzeContext, 
     }
     const unit = isMultiUnit(target) ? layout.units[target] : undefined;
     const method = req.methods?.[target];
-    const reference = unit === 'SG' && req.salinityReferenceTempC !== undefined ? { referenceTempC: req.salinityReferenceTempC } : {};
+    const reference =
+      unit === 'SG' && req.salinityReferenceTempC !== undefined
+        ? { referenceTempC: req.salinityReferenceTempC }
+        : {};
     entries[target] = { value, ...(unit ? { unit } : {}), ...(method ? { method } : {}), ...reference };
   }
   if (issues.length === 0 && Object.keys(entries).length === 0) issue('(row)', 'This row has no readings.');
@@ -78,7 +93,11 @@ function readRow(layout: CsvLayout, req: CsvImportRequest, ctx: AnalyzeContext, 
   const normalized = normalizeWaterTest(parsed.data, ctx);
   for (const e of normalized.errors) issue(columnFor(layout, e.path), e.message);
   if (issues.length) return { kind: 'invalid', issues };
-  const warnings = normalized.warnings.map((w) => ({ row, field: columnFor(layout, w.path), message: w.message }));
+  const warnings = normalized.warnings.map((w) => ({
+    row,
+    field: columnFor(layout, w.path),
+    message: w.message,
+  }));
   return { kind: 'valid', row: { row, normalized, note: parsed.data.note }, warnings };
 }
 
@@ -126,7 +145,9 @@ export function analyzeCsv(req: CsvImportRequest, ctx: AnalyzeContext): CsvAnaly
       errorCount: errors.length,
       warnings: warnings.slice(0, IMPORT_LISTED_ISSUES),
       warningCount: warnings.length,
-      sample: rows.slice(0, 5).map((r) => ({ row: r.row, takenAt: r.normalized.takenAt, values: r.normalized.values })),
+      sample: rows
+        .slice(0, 5)
+        .map((r) => ({ row: r.row, takenAt: r.normalized.takenAt, values: r.normalized.values })),
     },
   };
 }

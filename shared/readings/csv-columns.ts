@@ -42,14 +42,21 @@ function median(values: readonly number[]): number | undefined {
 }
 
 /** The unit a column is most likely in, from its header and, failing that, its numbers. */
-export function guessUnit<K extends keyof ImportUnits>(parameter: K, header: string, samples: readonly number[]): NonNullable<ImportUnits[K]> {
+export function guessUnit<K extends keyof ImportUnits>(
+  parameter: K,
+  header: string,
+  samples: readonly number[],
+): NonNullable<ImportUnits[K]> {
   const h = header.toLowerCase();
   const mid = median(samples);
   const asN = /-\s*n\b|\bas\s+n\b|\btan\b/.test(h);
   const pick = (): string => {
     switch (parameter) {
       case 'temperature':
-        return /°\s*f|\(f\)|\bf\b|fahrenheit|deg\s*f/.test(h) || (!/°\s*c|\(c\)|celsius/.test(h) && mid !== undefined && mid > 45) ? '°F' : '°C';
+        return /°\s*f|\(f\)|\bf\b|fahrenheit|deg\s*f/.test(h) ||
+          (!/°\s*c|\(c\)|celsius/.test(h) && mid !== undefined && mid > 45)
+          ? '°F'
+          : '°C';
       case 'salinity':
         if (/\bsg\b|specific|gravity|density/.test(h)) return 'SG';
         if (/ms\s*\/\s*cm|conductiv/.test(h)) return 'mS/cm';

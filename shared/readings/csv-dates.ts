@@ -1,7 +1,9 @@
 import type { DateFormat } from '../schemas/csv-import.schema';
 
-const ISO = /^(\d{4})[-/](\d{1,2})[-/](\d{1,2})(?:[T ]+(\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d{1,6}))?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?)?$/i;
-const DAY_MONTH = /^(\d{1,2})[/.-](\d{1,2})[/.-](\d{4})(?:[ T,]+(\d{1,2}):(\d{2})(?::(\d{2}))?\s*([ap]\.?m\.?)?)?$/i;
+const ISO =
+  /^(\d{4})[-/](\d{1,2})[-/](\d{1,2})(?:[T ]+(\d{1,2}):(\d{2})(?::(\d{2})(?:\.(\d{1,6}))?)?\s*(Z|[+-]\d{2}(?::?\d{2})?)?)?$/i;
+const DAY_MONTH =
+  /^(\d{1,2})[/.-](\d{1,2})[/.-](\d{4})(?:[ T,]+(\d{1,2}):(\d{2})(?::(\d{2}))?\s*([ap]\.?m\.?)?)?$/i;
 const TIME = /^(\d{1,2}):(\d{2})(?::(\d{2}))?\s*([ap]\.?m\.?)?$/i;
 
 interface Parts {
@@ -58,9 +60,15 @@ function parseParts(cell: string, format: DateFormat): Parts | null {
     const m = ISO.exec(cell);
     if (!m) return null;
     return {
-      y: Number(m[1]), m: Number(m[2]), d: Number(m[3]),
-      hh: Number(m[4] ?? 12), mm: Number(m[5] ?? 0), ss: Number(m[6] ?? 0), ms: Number((m[7] ?? '0').padEnd(3, '0').slice(0, 3)),
-      offset: parseOffset(m[8]), hasTime: m[4] !== undefined,
+      y: Number(m[1]),
+      m: Number(m[2]),
+      d: Number(m[3]),
+      hh: Number(m[4] ?? 12),
+      mm: Number(m[5] ?? 0),
+      ss: Number(m[6] ?? 0),
+      ms: Number((m[7] ?? '0').padEnd(3, '0').slice(0, 3)),
+      offset: parseOffset(m[8]),
+      hasTime: m[4] !== undefined,
     };
   }
   const m = DAY_MONTH.exec(cell);
@@ -68,7 +76,16 @@ function parseParts(cell: string, format: DateFormat): Parts | null {
   const hh = hour12(Number(m[4] ?? 12), m[4] === undefined ? undefined : m[7]);
   if (hh === null) return null;
   const [d, mo] = format === 'dmy' ? [Number(m[1]), Number(m[2])] : [Number(m[2]), Number(m[1])];
-  return { y: Number(m[3]), m: mo, d, hh, mm: Number(m[5] ?? 0), ss: Number(m[6] ?? 0), ms: 0, hasTime: m[4] !== undefined };
+  return {
+    y: Number(m[3]),
+    m: mo,
+    d,
+    hh,
+    mm: Number(m[5] ?? 0),
+    ss: Number(m[6] ?? 0),
+    ms: 0,
+    hasTime: m[4] !== undefined,
+  };
 }
 
 const formatters = new Map<string, Intl.DateTimeFormat>();
@@ -76,7 +93,14 @@ function formatterFor(timeZone: string): Intl.DateTimeFormat {
   let f = formatters.get(timeZone);
   if (!f) {
     f = new Intl.DateTimeFormat('en-US', {
-      timeZone, hourCycle: 'h23', year: 'numeric', month: '2-digit', day: '2-digit', hour: '2-digit', minute: '2-digit', second: '2-digit',
+      timeZone,
+      hourCycle: 'h23',
+      year: 'numeric',
+      month: '2-digit',
+      day: '2-digit',
+      hour: '2-digit',
+      minute: '2-digit',
+      second: '2-digit',
     });
     formatters.set(timeZone, f);
   }
@@ -86,9 +110,17 @@ function formatterFor(timeZone: string): Intl.DateTimeFormat {
 /** How far ahead of UTC the zone's clocks are at that instant, ms. */
 function zoneOffsetMs(utcMs: number, timeZone: string): number {
   const whole = Math.floor(utcMs / 1000) * 1000;
-  const get = (parts: Intl.DateTimeFormatPart[], type: string) => Number(parts.find((p) => p.type === type)?.value);
+  const get = (parts: Intl.DateTimeFormatPart[], type: string) =>
+    Number(parts.find((p) => p.type === type)?.value);
   const parts = formatterFor(timeZone).formatToParts(new Date(whole));
-  const wall = Date.UTC(get(parts, 'year'), get(parts, 'month') - 1, get(parts, 'day'), get(parts, 'hour'), get(parts, 'minute'), get(parts, 'second'));
+  const wall = Date.UTC(
+    get(parts, 'year'),
+    get(parts, 'month') - 1,
+    get(parts, 'day'),
+    get(parts, 'hour'),
+    get(parts, 'minute'),
+    get(parts, 'second'),
+  );
   return wall - whole;
 }
 
@@ -106,7 +138,12 @@ const daysIn = (y: number, m: number) => new Date(Date.UTC(y, m, 0)).getUTCDate(
  * One date cell (and an optional separate time cell) → ISO instant. Times without an offset are wall-clock time in
  * `timeZone`; a date with no time at all counts as midday, so it stays on its own day in every time zone.
  */
-export function parseDateCell(cell: string, timeCell: string | undefined, format: DateFormat, timeZone: string): { iso: string } | { error: string } {
+export function parseDateCell(
+  cell: string,
+  timeCell: string | undefined,
+  format: DateFormat,
+  timeZone: string,
+): { iso: string } | { error: string } {
   const parts = parseParts(cell.trim(), format);
   const example = { iso: '2025-03-04 18:30', dmy: '04/03/2025 18:30', mdy: '03/04/2025 18:30' }[format];
   if (!parts) return { error: `"${cell}" is not a date in the form ${example}.` };
@@ -118,7 +155,8 @@ export function parseDateCell(cell: string, timeCell: string | undefined, format
     if (!t || hh === null) return { error: `"${time}" is not a time such as 18:30.` };
     Object.assign(parts, { hh, mm: Number(t[2]), ss: Number(t[3] ?? 0) });
   }
-  if (parts.m < 1 || parts.m > 12 || parts.d < 1 || parts.d > daysIn(parts.y, parts.m)) return { error: `"${cell}" is not a real date.` };
+  if (parts.m < 1 || parts.m > 12 || parts.d < 1 || parts.d > daysIn(parts.y, parts.m))
+    return { error: `"${cell}" is not a real date.` };
   if (parts.hh > 23 || parts.mm > 59 || parts.ss > 59) return { error: `"${cell}" has an impossible time.` };
   const wall = Date.UTC(parts.y, parts.m - 1, parts.d, parts.hh, parts.mm, parts.ss, parts.ms);
   const utc = parts.offset !== undefined ? wall - parts.offset * 60_000 : wallTimeToUtc(wall, timeZone);

@@ -2,12 +2,24 @@ import type { ParameterKey } from '../care/parameters';
 import { ALKALINITY_UNITS, type NitrogenUnit, type TemperatureUnit } from '../chemistry/units';
 
 /** How a reading was taken. */
-export const TEST_METHODS = ['liquid-kit', 'strip', 'digital-meter', 'refractometer', 'hydrometer', 'lab'] as const;
+export const TEST_METHODS = [
+  'liquid-kit',
+  'strip',
+  'digital-meter',
+  'refractometer',
+  'hydrometer',
+  'lab',
+] as const;
 export type TestMethod = (typeof TEST_METHODS)[number];
 
 // Subsets of the chemistry engine's units (checked by `satisfies`), as tuples so zod can enumerate them.
 export const TEMPERATURE_ENTRY_UNITS = ['°C', '°F'] as const satisfies readonly TemperatureUnit[];
-export const AMMONIA_ENTRY_UNITS = ['mg/L NH3', 'mg/L NH4', 'mg/L NH3-N', 'mg/L NH4-N'] as const satisfies readonly NitrogenUnit[];
+export const AMMONIA_ENTRY_UNITS = [
+  'mg/L NH3',
+  'mg/L NH4',
+  'mg/L NH3-N',
+  'mg/L NH4-N',
+] as const satisfies readonly NitrogenUnit[];
 export const NITRITE_ENTRY_UNITS = ['mg/L NO2', 'mg/L NO2-N'] as const satisfies readonly NitrogenUnit[];
 export const NITRATE_ENTRY_UNITS = ['mg/L NO3', 'mg/L NO3-N'] as const satisfies readonly NitrogenUnit[];
 export const ALKALINITY_ENTRY_UNITS = ALKALINITY_UNITS;

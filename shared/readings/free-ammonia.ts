@@ -1,10 +1,20 @@
-import { computeFreeAmmonia, type FreeAmmoniaInput, type LastKnown, type ResolvedInput } from '../care/evaluation/free-ammonia';
+import {
+  computeFreeAmmonia,
+  type FreeAmmoniaInput,
+  type LastKnown,
+  type ResolvedInput,
+} from '../care/evaluation/free-ammonia';
 import type { ParameterKey } from '../care/parameters';
 import { builtInProfile, defaultProfileFor, type CareProfile } from '../care/profiles';
 import type { KnownValue } from '../care/readings';
 import type { SystemType } from '../care/system-types';
 
-export { FREE_AMMONIA_INPUTS, lastKnownInputs, type FreeAmmoniaInput, type LastKnown } from '../care/evaluation/free-ammonia';
+export {
+  FREE_AMMONIA_INPUTS,
+  lastKnownInputs,
+  type FreeAmmoniaInput,
+  type LastKnown,
+} from '../care/evaluation/free-ammonia';
 
 export interface DerivedInput {
   value: number;
@@ -28,8 +38,13 @@ export interface TankChemistryContext {
 }
 
 function traced(input: ResolvedInput, known: KnownValue | undefined): DerivedInput {
-  if (input.source === 'last-known' && known) return { value: input.value, source: 'last-known', testId: known.testId, takenAt: known.takenAt };
-  return { value: input.value, source: input.source, ...(input.detail && input.source === 'assumed' ? { detail: input.detail } : {}) };
+  if (input.source === 'last-known' && known)
+    return { value: input.value, source: 'last-known', testId: known.testId, takenAt: known.takenAt };
+  return {
+    value: input.value,
+    source: input.source,
+    ...(input.detail && input.source === 'assumed' ? { detail: input.detail } : {}),
+  };
 }
 
 /**
@@ -45,9 +60,19 @@ export function deriveFreeAmmonia(
   const total = reading.values.ammonia;
   if (total === undefined) return undefined;
   // A test never stands in for its own missing readings (an edit can drop one).
-  const earlier: LastKnown = Object.fromEntries(Object.entries(lastKnown).filter(([, k]) => k.testId !== reading.id));
-  const profile = tank.profile ?? ((tank.careProfileKey && builtInProfile(tank.careProfileKey)) || defaultProfileFor(tank.systemType));
-  const outcome = computeFreeAmmonia({ id: reading.id, takenAt: reading.takenAt, values: reading.values }, total, earlier, tank.systemType, profile);
+  const earlier: LastKnown = Object.fromEntries(
+    Object.entries(lastKnown).filter(([, k]) => k.testId !== reading.id),
+  );
+  const profile =
+    tank.profile ??
+    ((tank.careProfileKey && builtInProfile(tank.careProfileKey)) || defaultProfileFor(tank.systemType));
+  const outcome = computeFreeAmmonia(
+    { id: reading.id, takenAt: reading.takenAt, values: reading.values },
+    total,
+    earlier,
+    tank.systemType,
+    profile,
+  );
   if (!outcome.ok) return { value: null, reason: outcome.why };
   const r = outcome.result;
   return {

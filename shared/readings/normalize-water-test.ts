@@ -6,7 +6,12 @@ import { specificGravityFromSalinity } from '../chemistry/specific-gravity';
 import type { WaterTestEntries } from '../schemas/water-test.schema';
 import { isLinearEntry, toCanonical } from './convert-entry';
 import { defaultMethodFor } from './entry-units';
-import { deriveFreeAmmonia, type FreeAmmoniaDerivation, type LastKnown, type TankChemistryContext } from './free-ammonia';
+import {
+  deriveFreeAmmonia,
+  type FreeAmmoniaDerivation,
+  type LastKnown,
+  type TankChemistryContext,
+} from './free-ammonia';
 import type { ReadingIssue } from './issues';
 import { impossibleReading, unusualReading } from './plausibility';
 import { salinityFromEntry, type SalinityDerivation, type SalinityEntryLike } from './salinity';
@@ -48,11 +53,20 @@ export const FUTURE_TOLERANCE_MS = 5 * 60_000;
 
 const round5 = (n: number) => n.toFixed(5).replace(/0+$/, '');
 
-function salinityError(entry: SalinityEntryLike, sampleTempC: number | undefined, referenceTempC: number | undefined): string {
+function salinityError(
+  entry: SalinityEntryLike,
+  sampleTempC: number | undefined,
+  referenceTempC: number | undefined,
+): string {
   if (entry.unit === 'mS/cm') {
     return `Conductivity ${entry.value} mS/cm at ${sampleTempC ?? 25} °C is outside the salinity scale (practical salinity ${PSS78_SALINITY_RANGE.min}–${PSS78_SALINITY_RANGE.max}).`;
   }
-  const at = (s: number) => specificGravityFromSalinity({ salinity: s, sampleTempC: sampleTempC ?? 25, referenceTempC: referenceTempC ?? 25 });
+  const at = (s: number) =>
+    specificGravityFromSalinity({
+      salinity: s,
+      sampleTempC: sampleTempC ?? 25,
+      referenceTempC: referenceTempC ?? 25,
+    });
   return `Specific gravity ${entry.value} with water at ${sampleTempC ?? 25} °C is outside what fresh to very salty water reads (${round5(at(EOS80_SALINITY_RANGE.min))}–${round5(at(EOS80_SALINITY_RANGE.max))}).`;
 }
 
@@ -61,7 +75,8 @@ function convertSalinity(
   temperature: number | undefined,
   out: { values: CanonicalValues; derived: DerivedInfo; warnings: ReadingIssue[]; errors: ReadingIssue[] },
 ): void {
-  const waterTemp = temperature === undefined ? undefined : { value: temperature, source: 'this-test' as const };
+  const waterTemp =
+    temperature === undefined ? undefined : { value: temperature, source: 'this-test' as const };
   try {
     const { salinity, derivation } = salinityFromEntry(entry, waterTemp);
     out.values.salinity = salinity;
@@ -69,15 +84,22 @@ function convertSalinity(
     if (entry.unit === 'SG' && entry.method === 'hydrometer' && derivation.sampleTempSource === 'reference') {
       out.warnings.push({
         path: 'entries.salinity.sampleTempC',
-        message: 'No water temperature was given, so the hydrometer was read as if the water were at its reference temperature.',
+        message:
+          'No water temperature was given, so the hydrometer was read as if the water were at its reference temperature.',
       });
     }
     const unusual = unusualReading('salinity', salinity, 'PSU');
     if (unusual) out.warnings.push({ path: 'entries.salinity.value', message: unusual });
   } catch (error) {
     if (!(error instanceof RangeError)) throw error;
-    const sample = entry.sampleTempC ?? (entry.unit === 'SG' && entry.method !== 'refractometer' ? temperature : undefined) ?? entry.referenceTempC;
-    out.errors.push({ path: 'entries.salinity.value', message: salinityError(entry, sample, entry.referenceTempC) });
+    const sample =
+      entry.sampleTempC ??
+      (entry.unit === 'SG' && entry.method !== 'refractometer' ? temperature : undefined) ??
+      entry.referenceTempC;
+    out.errors.push({
+      path: 'entries.salinity.value',
+      message: salinityError(entry, sample, entry.referenceTempC),
+    });
   }
 }
 
@@ -86,11 +108,22 @@ function convertSalinity(
  * values (salinity from SG or conductivity, free ammonia) with how they were worked out, and warnings/errors.
  * Pure: the client runs it for a live preview of exactly what the server will store.
  */
-export function normalizeWaterTest(input: { takenAt: string; entries: WaterTestEntries }, ctx: NormalizeContext): NormalizedWaterTest {
-  const out = { values: {} as CanonicalValues, derived: {} as DerivedInfo, warnings: [] as ReadingIssue[], errors: [] as ReadingIssue[] };
+export function normalizeWaterTest(
+  input: { takenAt: string; entries: WaterTestEntries },
+  ctx: NormalizeContext,
+): NormalizedWaterTest {
+  const out = {
+    values: {} as CanonicalValues,
+    derived: {} as DerivedInfo,
+    warnings: [] as ReadingIssue[],
+    errors: [] as ReadingIssue[],
+  };
   const entries: Record<string, unknown> = {};
   if (toMs(input.takenAt) > toMs(ctx.now) + FUTURE_TOLERANCE_MS) {
-    out.errors.push({ path: 'takenAt', message: 'That time is in the future: give the time the water was tested.' });
+    out.errors.push({
+      path: 'takenAt',
+      message: 'That time is in the future: give the time the water was tested.',
+    });
   }
   let nonLinearSalinity: SalinityEntryLike | undefined;
   for (const key of PARAMETER_KEYS) {
@@ -114,11 +147,23 @@ export function normalizeWaterTest(input: { takenAt: string; entries: WaterTestE
 
   let freeAmmonia: number | null = null;
   if (out.errors.length === 0) {
-    const derivation = deriveFreeAmmonia({ id: ctx.testId ?? 'new-test', takenAt: input.takenAt, values: out.values }, ctx.lastKnown ?? {}, ctx);
+    const derivation = deriveFreeAmmonia(
+      { id: ctx.testId ?? 'new-test', takenAt: input.takenAt, values: out.values },
+      ctx.lastKnown ?? {},
+      ctx,
+    );
     if (derivation) {
       out.derived.freeAmmonia = derivation;
       freeAmmonia = derivation.value;
     }
   }
-  return { takenAt: input.takenAt, values: out.values, freeAmmonia, entries: entries as WaterTestEntries, derived: out.derived, warnings: out.warnings, errors: out.errors };
+  return {
+    takenAt: input.takenAt,
+    values: out.values,
+    freeAmmonia,
+    entries: entries as WaterTestEntries,
+    derived: out.derived,
+    warnings: out.warnings,
+    errors: out.errors,
+  };
 }

@@ -47,13 +47,21 @@ export interface SalinityOutcome {
  * sample counts as being at the reference; a hydrometer floats in water at the tank's temperature.
  * Throws RangeError (from the chemistry engine) when the reading cannot mean any salinity at those temperatures.
  */
-export function salinityFromEntry(entry: SalinityEntryLike, waterTemp?: { value: number; source: 'this-test' | 'last-known' }): SalinityOutcome {
+export function salinityFromEntry(
+  entry: SalinityEntryLike,
+  waterTemp?: { value: number; source: 'this-test' | 'last-known' },
+): SalinityOutcome {
   if (entry.unit === 'mS/cm') {
     const sampleTempC = entry.sampleTempC ?? CONDUCTIVITY_COMPENSATED_TO_C;
     const salinity = practicalSalinityFromConductivity({ mScm: entry.value, tempC: sampleTempC });
     return {
       salinity,
-      derivation: { from: 'mS/cm', reading: entry.value, sampleTempC, sampleTempSource: entry.sampleTempC === undefined ? 'assumed' : 'entry' },
+      derivation: {
+        from: 'mS/cm',
+        reading: entry.value,
+        sampleTempC,
+        sampleTempSource: entry.sampleTempC === undefined ? 'assumed' : 'entry',
+      },
     };
   }
   const referenceTempC = snapReference(entry.referenceTempC ?? DEFAULT_SG_REFERENCE_TEMP_C);
@@ -81,6 +89,9 @@ export function salinityFromEntry(entry: SalinityEntryLike, waterTemp?: { value:
 }
 
 /** Practical salinity shown as SG, as an instrument referenced (and compensated) to `referenceTempC` would read it. */
-export function salinityAsSpecificGravity(salinity: number, referenceTempC: number = DEFAULT_SG_REFERENCE_TEMP_C): number {
+export function salinityAsSpecificGravity(
+  salinity: number,
+  referenceTempC: number = DEFAULT_SG_REFERENCE_TEMP_C,
+): number {
   return specificGravityFromSalinity({ salinity, sampleTempC: referenceTempC, referenceTempC });
 }

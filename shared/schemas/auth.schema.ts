@@ -37,10 +37,16 @@ export type AcceptInviteInput = z.input<typeof acceptInviteSchema>;
 
 export const newAccountFormSchema = z
   .object({ displayName, password: newPassword, confirmPassword: z.string() })
-  .refine((v) => v.password === v.confirmPassword, { path: ['confirmPassword'], message: 'The passwords differ.' });
+  .refine((v) => v.password === v.confirmPassword, {
+    path: ['confirmPassword'],
+    message: 'The passwords differ.',
+  });
 
 export const requestPasswordResetSchema = z.object({ email });
 export const resetPasswordSchema = z.object({ token: z.string().min(20).max(200), password: newPassword });
 export const resetPasswordFormSchema = z
   .object({ password: newPassword, confirmPassword: z.string() })
-  .refine((v) => v.password === v.confirmPassword, { path: ['confirmPassword'], message: 'The passwords differ.' });
+  .refine((v) => v.password === v.confirmPassword, {
+    path: ['confirmPassword'],
+    message: 'The passwords differ.',
+  });

@@ -7,7 +7,11 @@ export const email = z
   .max(254, 'That e-mail address is too long.')
   .pipe(z.email({ message: 'Enter a valid e-mail address.' }))
   .transform((e) => e.toLowerCase());
-export const displayName = z.string().trim().min(1, 'Enter your name.').max(80, 'Keep it under 80 characters.');
+export const displayName = z
+  .string()
+  .trim()
+  .min(1, 'Enter your name.')
+  .max(80, 'Keep it under 80 characters.');
 export const timeZone = z
   .string()
   .trim()

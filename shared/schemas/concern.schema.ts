@@ -2,7 +2,9 @@ import { z } from 'zod';
 import { uuid } from './common';
 
 export const concernParams = z.object({ clubId: uuid, concernId: uuid });
-export const concernActionSchema = z.object({ note: z.string().trim().max(1000, 'Keep the note under 1000 characters.').default('') }).strict();
+export const concernActionSchema = z
+  .object({ note: z.string().trim().max(1000, 'Keep the note under 1000 characters.').default('') })
+  .strict();
 export const concernListQuery = z.object({ status: z.enum(['live', 'all']).default('live') }).strict();
 
 export const readinessChecklistSchema = z

@@ -16,7 +16,10 @@ export const IMPORT_MAX_ROWS = 20_000;
 /** How many row errors (and warnings) a preview lists; the counts are always complete. */
 export const IMPORT_LISTED_ISSUES = 200;
 
-const PARAMETER_TARGETS = PARAMETERS.map((p) => p.key) as unknown as readonly [ParameterKey, ...ParameterKey[]];
+const PARAMETER_TARGETS = PARAMETERS.map((p) => p.key) as unknown as readonly [
+  ParameterKey,
+  ...ParameterKey[],
+];
 /** What a CSV column can hold. `record` is the export's first column: rows other than water tests are skipped. */
 export const IMPORT_TARGETS = ['takenAt', 'time', 'note', 'record', 'ignore', ...PARAMETER_TARGETS] as const;
 export type ImportTarget = (typeof IMPORT_TARGETS)[number];

@@ -21,7 +21,14 @@ export interface DeskRow {
   daysSinceTest: number | null;
   unansweredQuestions: number;
   openConcerns: { urgent: number; caution: number; info: number };
-  worstConcern: { id: string; severity: Severity; reason: string; parameter: string; raisedAt: string; status: 'open' | 'acknowledged' } | null;
+  worstConcern: {
+    id: string;
+    severity: Severity;
+    reason: string;
+    parameter: string;
+    raisedAt: string;
+    status: 'open' | 'acknowledged';
+  } | null;
   /** The worst concern's parameter over the last two weeks, oldest first (canonical units). */
   sparkline: { parameter: string; unit: string; points: { at: string; value: number }[] } | null;
   score: number;

@@ -16,7 +16,13 @@ export interface HomeTank {
   cycleStage: CycleStage;
   hasLivestock: boolean;
   /** The most serious concern still open or acknowledged; null when nothing is wrong. */
-  worstConcern: { id: string; severity: Severity; parameter: AnyParameterKey | 'stocking'; reason: string; raisedAt: string } | null;
+  worstConcern: {
+    id: string;
+    severity: Severity;
+    parameter: AnyParameterKey | 'stocking';
+    reason: string;
+    raisedAt: string;
+  } | null;
   liveConcerns: number;
   /** Every test the tank's profile schedules in its phase (`dueTests`); the page groups them by the member's calendar. */
   due: DueTest[];
@@ -40,7 +46,16 @@ export interface HomeQuestion {
 /** Something a mentor did that is worth a smile: signing a tank off for animals, or resolving a concern. */
 export type HomeGoodNews =
   | { kind: 'signed-off'; tankId: string; tankName: string; by: PersonRef; at: string; note: string }
-  | { kind: 'concern-resolved'; tankId: string; tankName: string; by: PersonRef; at: string; note: string; parameter: AnyParameterKey | 'stocking'; reason: string };
+  | {
+      kind: 'concern-resolved';
+      tankId: string;
+      tankName: string;
+      by: PersonRef;
+      at: string;
+      note: string;
+      parameter: AnyParameterKey | 'stocking';
+      reason: string;
+    };
 
 export interface HomeView {
   generatedAt: string;

@@ -27,23 +27,43 @@ const clubTime = z
 
 /** An http(s) link; an empty field means none. */
 const link = z
-  .union([z.literal(''), z.url({ protocol: /^https?$/, message: 'Give a web address starting with https://.' }).max(500, 'That link is too long.')])
+  .union([
+    z.literal(''),
+    z
+      .url({ protocol: /^https?$/, message: 'Give a web address starting with https://.' })
+      .max(500, 'That link is too long.'),
+  ])
   .nullable()
   .transform((v) => v || null);
 
 const fields = {
   kind: z.enum(MEETUP_KINDS, { message: `Choose the kind: ${MEETUP_KINDS.join(', ')}.` }),
-  title: z.string({ message: 'Give the meetup a title.' }).trim().min(1, 'Give the meetup a title.').max(MEETUP_TITLE_MAX, `Keep the title under ${MEETUP_TITLE_MAX} characters.`),
-  description: z.string().trim().max(MEETUP_DESCRIPTION_MAX, `Keep it under ${MEETUP_DESCRIPTION_MAX} characters.`),
+  title: z
+    .string({ message: 'Give the meetup a title.' })
+    .trim()
+    .min(1, 'Give the meetup a title.')
+    .max(MEETUP_TITLE_MAX, `Keep the title under ${MEETUP_TITLE_MAX} characters.`),
+  description: z
+    .string()
+    .trim()
+    .max(MEETUP_DESCRIPTION_MAX, `Keep it under ${MEETUP_DESCRIPTION_MAX} characters.`),
   startsAt: clubTime,
   endsAt: clubTime,
   placeText: z.string().trim().max(MEETUP_PLACE_MAX, `Keep it under ${MEETUP_PLACE_MAX} characters.`),
   mapUrl: link,
   onlineUrl: link,
-  capacity: z.number({ message: 'Enter how many people fit.' }).int('Enter a whole number.').min(1, 'At least one place.').max(MEETUP_CAPACITY_MAX, `At most ${MEETUP_CAPACITY_MAX} places.`),
+  capacity: z
+    .number({ message: 'Enter how many people fit.' })
+    .int('Enter a whole number.')
+    .min(1, 'At least one place.')
+    .max(MEETUP_CAPACITY_MAX, `At most ${MEETUP_CAPACITY_MAX} places.`),
   /** Who runs it; a clinic needs one (they record the results). */
   hostId: uuid.nullable(),
-  slotMinutes: z.number().int().min(CLINIC_SLOT_MINUTES.min, `At least ${CLINIC_SLOT_MINUTES.min} minutes.`).max(CLINIC_SLOT_MINUTES.max, `At most ${CLINIC_SLOT_MINUTES.max} minutes.`),
+  slotMinutes: z
+    .number()
+    .int()
+    .min(CLINIC_SLOT_MINUTES.min, `At least ${CLINIC_SLOT_MINUTES.min} minutes.`)
+    .max(CLINIC_SLOT_MINUTES.max, `At most ${CLINIC_SLOT_MINUTES.max} minutes.`),
 };
 
 export interface MeetupRuleValues {
@@ -56,7 +76,13 @@ export interface MeetupRuleValues {
 }
 
 const wallMs = (local: string) => {
-  const [y, mo, d, h, mi] = (LOCAL_DATE_TIME.exec(local) ?? []).slice(1).map(Number) as [number, number, number, number, number];
+  const [y, mo, d, h, mi] = (LOCAL_DATE_TIME.exec(local) ?? []).slice(1).map(Number) as [
+    number,
+    number,
+    number,
+    number,
+    number,
+  ];
   return Date.UTC(y, mo - 1, d, h, mi);
 };
 
@@ -66,11 +92,14 @@ export function meetupRuleIssues(v: MeetupRuleValues): { path: string; message: 
   if (isRealLocalDateTime(v.startsAt) && isRealLocalDateTime(v.endsAt)) {
     const length = wallMs(v.endsAt) - wallMs(v.startsAt);
     if (length <= 0) issues.push({ path: 'endsAt', message: 'It has to end after it starts.' });
-    else if (length > MEETUP_LONGEST_HOURS * 3_600_000) issues.push({ path: 'endsAt', message: `A meetup runs at most ${MEETUP_LONGEST_HOURS} hours.` });
+    else if (length > MEETUP_LONGEST_HOURS * 3_600_000)
+      issues.push({ path: 'endsAt', message: `A meetup runs at most ${MEETUP_LONGEST_HOURS} hours.` });
   }
-  if (v.kind === 'online' && !v.onlineUrl) issues.push({ path: 'onlineUrl', message: 'Give the link people join with.' });
+  if (v.kind === 'online' && !v.onlineUrl)
+    issues.push({ path: 'onlineUrl', message: 'Give the link people join with.' });
   if (v.kind !== 'online' && !v.placeText) issues.push({ path: 'placeText', message: 'Say where it is.' });
-  if (v.kind === 'clinic' && !v.hostId) issues.push({ path: 'hostId', message: 'Choose the mentor who runs the clinic.' });
+  if (v.kind === 'clinic' && !v.hostId)
+    issues.push({ path: 'hostId', message: 'Choose the mentor who runs the clinic.' });
   return issues;
 }
 
@@ -86,7 +115,8 @@ export const createMeetupSchema = z
   })
   .strict()
   .superRefine((v, ctx) => {
-    for (const issue of meetupRuleIssues(v)) ctx.addIssue({ code: 'custom', path: [issue.path], message: issue.message });
+    for (const issue of meetupRuleIssues(v))
+      ctx.addIssue({ code: 'custom', path: [issue.path], message: issue.message });
   });
 export type CreateMeetupInput = z.input<typeof createMeetupSchema>;
 export type CreateMeetupValues = z.output<typeof createMeetupSchema>;
@@ -100,19 +130,37 @@ export const updateMeetupSchema = z
 export type UpdateMeetupInput = z.input<typeof updateMeetupSchema>;
 
 export const cancelMeetupSchema = z
-  .object({ reason: z.string({ message: 'Tell people why.' }).trim().min(1, 'Tell people why.').max(MEETUP_CANCEL_REASON_MAX, `Keep it under ${MEETUP_CANCEL_REASON_MAX} characters.`) })
+  .object({
+    reason: z
+      .string({ message: 'Tell people why.' })
+      .trim()
+      .min(1, 'Tell people why.')
+      .max(MEETUP_CANCEL_REASON_MAX, `Keep it under ${MEETUP_CANCEL_REASON_MAX} characters.`),
+  })
   .strict();
 
-export const rsvpSchema = z.object({ response: z.enum(RSVP_RESPONSES, { message: 'Say going or not-going.' }) }).strict();
+export const rsvpSchema = z
+  .object({ response: z.enum(RSVP_RESPONSES, { message: 'Say going or not-going.' }) })
+  .strict();
 export type RsvpInput = z.input<typeof rsvpSchema>;
 
 /** A clinic slot and the tank whose water the member brings. */
 export const bookingSchema = z.object({ slotStartsAt: isoDateTime, tankId: uuid }).strict();
 export type BookingInput = z.input<typeof bookingSchema>;
 
-export const attendanceSchema = z.object({ present: z.boolean({ message: 'Say whether they are here.' }) }).strict();
+export const attendanceSchema = z
+  .object({ present: z.boolean({ message: 'Say whether they are here.' }) })
+  .strict();
 
-export const meetupListQuery = z.object({ when: z.enum(['upcoming', 'past'], { message: 'Choose upcoming or past.' }).default('upcoming') }).strict();
+export const meetupListQuery = z
+  .object({ when: z.enum(['upcoming', 'past'], { message: 'Choose upcoming or past.' }).default('upcoming') })
+  .strict();
 export type MeetupListWhen = z.output<typeof meetupListQuery>['when'];
 
-export const calendarFeedParams = z.object({ token: z.string().min(10).max(300).regex(/^[A-Za-z0-9_.-]+$/, 'That link is not valid.') });
+export const calendarFeedParams = z.object({
+  token: z
+    .string()
+    .min(10)
+    .max(300)
+    .regex(/^[A-Za-z0-9_.-]+$/, 'That link is not valid.'),
+});

@@ -1,16 +1,27 @@
 import { z } from 'zod';
-import { DECLINE_REASON_MAX, MAX_MENTOR_CAPACITY, MENTOR_REQUEST_NOTE_MAX, MENTOR_REQUEST_STATES } from '../constants/mentorship';
+import {
+  DECLINE_REASON_MAX,
+  MAX_MENTOR_CAPACITY,
+  MENTOR_REQUEST_NOTE_MAX,
+  MENTOR_REQUEST_STATES,
+} from '../constants/mentorship';
 import { uuid } from './common';
 
 export const createMentorRequestSchema = z
   .object({
-    note: z.string().trim().max(MENTOR_REQUEST_NOTE_MAX, `Keep the note under ${MENTOR_REQUEST_NOTE_MAX} characters.`).optional(),
+    note: z
+      .string()
+      .trim()
+      .max(MENTOR_REQUEST_NOTE_MAX, `Keep the note under ${MENTOR_REQUEST_NOTE_MAX} characters.`)
+      .optional(),
     preferredMentorId: uuid.optional(),
   })
   .strict();
 export type CreateMentorRequestInput = z.input<typeof createMentorRequestSchema>;
 
-export const listMentorRequestsQuery = z.object({ state: z.enum(MENTOR_REQUEST_STATES).default('open') }).strict();
+export const listMentorRequestsQuery = z
+  .object({ state: z.enum(MENTOR_REQUEST_STATES).default('open') })
+  .strict();
 
 export const mentorRequestParams = z.object({ clubId: uuid, requestId: uuid });
 

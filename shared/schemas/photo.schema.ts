@@ -10,9 +10,14 @@ export const photoUploadFieldsSchema = z
     caption: z.string().trim().max(300, 'Keep the caption under 300 characters.').default(''),
   })
   .strict()
-  .refine((f) => !(f.waterTestId && f.eventId), { path: ['eventId'], message: 'Attach to a water test or to an event, not both.' });
+  .refine((f) => !(f.waterTestId && f.eventId), {
+    path: ['eventId'],
+    message: 'Attach to a water test or to an event, not both.',
+  });
 export type PhotoUploadFields = z.input<typeof photoUploadFieldsSchema>;
 
 export const photoParams = clubIdParams.extend({ photoId: uuid });
-export const tankPhotoListQuery = z.object({ waterTestId: uuid.optional(), eventId: uuid.optional() }).strict();
+export const tankPhotoListQuery = z
+  .object({ waterTestId: uuid.optional(), eventId: uuid.optional() })
+  .strict();
 export { tankParams };

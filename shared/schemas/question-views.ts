@@ -8,8 +8,21 @@ import type { TankEventDetails } from './tank-event.schema';
 
 /** What the question was about, copied when it was asked: later edits to the test do not change it. */
 export type SnapshotSubject =
-  | { kind: 'water-test'; waterTestId: string; takenAt: string; values: CanonicalValues; freeAmmonia: number | null; note: string }
-  | { kind: 'observation'; eventId: string; occurredAt: string; details: TankEventDetails<'observation'>; note: string };
+  | {
+      kind: 'water-test';
+      waterTestId: string;
+      takenAt: string;
+      values: CanonicalValues;
+      freeAmmonia: number | null;
+      note: string;
+    }
+  | {
+      kind: 'observation';
+      eventId: string;
+      occurredAt: string;
+      details: TankEventDetails<'observation'>;
+      note: string;
+    };
 
 export interface SnapshotConcern {
   id: string;
@@ -29,7 +42,13 @@ export interface QuestionSnapshot {
   subject: SnapshotSubject;
   /** Concerns open (or acknowledged) on the tank when the question was asked. */
   concerns: SnapshotConcern[];
-  profile: { key: string; version: number; name: string; animals: string; ranges: Partial<Record<AnyParameterKey, { ideal: Band; caution: Band }>> } | null;
+  profile: {
+    key: string;
+    version: number;
+    name: string;
+    animals: string;
+    ranges: Partial<Record<AnyParameterKey, { ideal: Band; caution: Band }>>;
+  } | null;
   tank: { name: string; systemType: string; phase: string; volumeL: number };
 }
 

@@ -22,7 +22,11 @@ export const questionParams = z.object({ clubId: uuid, questionId: uuid });
 /** A question is about exactly one water test or one observation of the tank. */
 export const askQuestionSchema = z
   .object({
-    title: z.string({ message: 'Give your question a short title.' }).trim().min(1, 'Give your question a short title.').max(QUESTION_TITLE_MAX, `Keep the title under ${QUESTION_TITLE_MAX} characters.`),
+    title: z
+      .string({ message: 'Give your question a short title.' })
+      .trim()
+      .min(1, 'Give your question a short title.')
+      .max(QUESTION_TITLE_MAX, `Keep the title under ${QUESTION_TITLE_MAX} characters.`),
     body,
     waterTestId: uuid.optional(),
     eventId: uuid.optional(),
@@ -31,7 +35,11 @@ export const askQuestionSchema = z
   .strict()
   .superRefine((q, ctx) => {
     if ((q.waterTestId === undefined) === (q.eventId === undefined)) {
-      ctx.addIssue({ code: 'custom', path: ['waterTestId'], message: 'Ask about one water test or one observation.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['waterTestId'],
+        message: 'Ask about one water test or one observation.',
+      });
     }
   });
 export type AskQuestionInput = z.input<typeof askQuestionSchema>;
@@ -40,7 +48,9 @@ export const replySchema = z.object({ body, mentionIds }).strict();
 export type ReplyInput = z.input<typeof replySchema>;
 
 /** `answered: false` reopens it. */
-export const markAnsweredSchema = z.object({ answered: z.boolean({ message: 'Say whether it is answered.' }).default(true) }).strict();
+export const markAnsweredSchema = z
+  .object({ answered: z.boolean({ message: 'Say whether it is answered.' }).default(true) })
+  .strict();
 
 export const questionListQuery = z
   .object({

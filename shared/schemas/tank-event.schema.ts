@@ -15,9 +15,17 @@ export const TANK_EVENT_KINDS = [
 ] as const;
 export type TankEventKind = (typeof TANK_EVENT_KINDS)[number];
 /** Written by the livestock list itself, never posted directly, so the two always agree. */
-export const LIVESTOCK_EVENT_KINDS = ['livestock-added', 'livestock-removed'] as const satisfies readonly TankEventKind[];
+export const LIVESTOCK_EVENT_KINDS = [
+  'livestock-added',
+  'livestock-removed',
+] as const satisfies readonly TankEventKind[];
 
-export const SOURCE_WATER_TYPES = ['natural-sea-water', 'mixed-salt', 'ro-di-fresh', 'tap-conditioned'] as const;
+export const SOURCE_WATER_TYPES = [
+  'natural-sea-water',
+  'mixed-salt',
+  'ro-di-fresh',
+  'tap-conditioned',
+] as const;
 export const DOSE_UNITS = ['mL', 'L', 'g', 'mg', 'drops', 'capsules', 'scoops', 'tsp'] as const;
 export const EQUIPMENT_CHANGES = ['added', 'removed', 'replaced', 'adjusted', 'cleaned', 'failed'] as const;
 
@@ -25,13 +33,20 @@ export const EQUIPMENT_CHANGES = ['added', 'removed', 'replaced', 'adjusted', 'c
 export { OBSERVATION_CHECKS, OBSERVATION_SCALES } from '../care/observations/vocabulary';
 
 const text = (max: number) => z.string().trim().max(max, `Keep it under ${max} characters.`);
-const label = (what: string) => z.string({ message: `Say which ${what}.` }).trim().min(1, `Say which ${what}.`).max(120, 'Keep it under 120 characters.');
+const label = (what: string) =>
+  z
+    .string({ message: `Say which ${what}.` })
+    .trim()
+    .min(1, `Say which ${what}.`)
+    .max(120, 'Keep it under 120 characters.');
 
 export const waterChangeDetailsSchema = z
   .object({
     volumeL: z.number().positive('Must be more than 0.').max(MAX_TANK_VOLUME_L).optional(),
     percent: z.number().positive('Must be more than 0.').max(100, 'At most 100 %.').optional(),
-    sourceWater: z.enum(SOURCE_WATER_TYPES, { message: `Choose the new water: ${SOURCE_WATER_TYPES.join(', ')}.` }),
+    sourceWater: z.enum(SOURCE_WATER_TYPES, {
+      message: `Choose the new water: ${SOURCE_WATER_TYPES.join(', ')}.`,
+    }),
     /** Measured in the new water, if known. */
     sourceNitrate: nitrateEntrySchema.optional(),
     sourceSalinity: salinityEntrySchema.optional(),
@@ -39,7 +54,11 @@ export const waterChangeDetailsSchema = z
   .strict()
   .superRefine((d, ctx) => {
     if ((d.volumeL === undefined) === (d.percent === undefined)) {
-      ctx.addIssue({ code: 'custom', path: ['volumeL'], message: 'Give either the litres changed or the percentage, not both.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['volumeL'],
+        message: 'Give either the litres changed or the percentage, not both.',
+      });
     }
   });
 
@@ -51,16 +70,25 @@ export const supplementDoseDetailsSchema = z
   })
   .strict();
 
-export const feedingNoteDetailsSchema = z.object({ food: label('food'), amount: text(80).optional() }).strict();
+export const feedingNoteDetailsSchema = z
+  .object({ food: label('food'), amount: text(80).optional() })
+  .strict();
 
 export const equipmentChangeDetailsSchema = z
-  .object({ equipment: label('equipment'), change: z.enum(EQUIPMENT_CHANGES, { message: `Choose what happened: ${EQUIPMENT_CHANGES.join(', ')}.` }) })
+  .object({
+    equipment: label('equipment'),
+    change: z.enum(EQUIPMENT_CHANGES, { message: `Choose what happened: ${EQUIPMENT_CHANGES.join(', ')}.` }),
+  })
   .strict();
 
 export const observationDetailsSchema = healthObservationSchema;
 
-export const livestockAddedDetailsSchema = z.object({ livestockId: uuid, speciesCommonName: z.string(), count: z.number().int() }).strict();
-export const livestockRemovedDetailsSchema = livestockAddedDetailsSchema.extend({ reason: z.string().nullable() }).strict();
+export const livestockAddedDetailsSchema = z
+  .object({ livestockId: uuid, speciesCommonName: z.string(), count: z.number().int() })
+  .strict();
+export const livestockRemovedDetailsSchema = livestockAddedDetailsSchema
+  .extend({ reason: z.string().nullable() })
+  .strict();
 
 export const TANK_EVENT_DETAILS_SCHEMAS = {
   'water-change': waterChangeDetailsSchema,
@@ -72,17 +100,35 @@ export const TANK_EVENT_DETAILS_SCHEMAS = {
   observation: observationDetailsSchema,
 } as const satisfies Record<TankEventKind, z.ZodType>;
 
-export type TankEventDetails<K extends TankEventKind = TankEventKind> = z.output<(typeof TANK_EVENT_DETAILS_SCHEMAS)[K]>;
+export type TankEventDetails<K extends TankEventKind = TankEventKind> = z.output<
+  (typeof TANK_EVENT_DETAILS_SCHEMAS)[K]
+>;
 
 const occurredAt = isoDateTime;
 const note = text(4000);
 const posted = <K extends Exclude<TankEventKind, (typeof LIVESTOCK_EVENT_KINDS)[number]>>(kind: K) =>
-  z.object({ kind: z.literal(kind), occurredAt, note: note.default(''), details: TANK_EVENT_DETAILS_SCHEMAS[kind] }).strict();
+  z
+    .object({
+      kind: z.literal(kind),
+      occurredAt,
+      note: note.default(''),
+      details: TANK_EVENT_DETAILS_SCHEMAS[kind],
+    })
+    .strict();
 
 export const createTankEventSchema = z.discriminatedUnion(
   'kind',
-  [posted('water-change'), posted('supplement-dose'), posted('feeding-note'), posted('equipment-change'), posted('observation')],
-  { message: 'Choose the kind of entry: water-change, supplement-dose, feeding-note, equipment-change or observation.' },
+  [
+    posted('water-change'),
+    posted('supplement-dose'),
+    posted('feeding-note'),
+    posted('equipment-change'),
+    posted('observation'),
+  ],
+  {
+    message:
+      'Choose the kind of entry: water-change, supplement-dose, feeding-note, equipment-change or observation.',
+  },
 );
 export type CreateTankEventInput = z.input<typeof createTankEventSchema>;
 

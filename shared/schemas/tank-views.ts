@@ -21,7 +21,13 @@ export interface TankView {
     | {
         source: 'dimensions';
         shape: TankShape;
-        dimensionsCm: { length?: number; width?: number; height: number; diameter?: number; bowDepth?: number };
+        dimensionsCm: {
+          length?: number;
+          width?: number;
+          height: number;
+          diameter?: number;
+          bowDepth?: number;
+        };
         fillHeightCm: number | null;
         displacementFraction: number;
         grossL: number;
@@ -103,7 +109,9 @@ export interface TankEventView<K extends TankEventKind = TankEventKind> {
   photos: PhotoView[];
 }
 
-export type TimelineItem = { type: 'water-test'; at: string; waterTest: WaterTestView } | { type: 'event'; at: string; event: TankEventView };
+export type TimelineItem =
+  | { type: 'water-test'; at: string; waterTest: WaterTestView }
+  | { type: 'event'; at: string; event: TankEventView };
 
 export interface Page<T> {
   items: T[];

@@ -18,11 +18,17 @@ export const isoDate = z.iso.date({ message: 'Give a date as YYYY-MM-DD.' });
 /** Query-string switches: ?mine=1 or ?mine=true. */
 export const flag = z.enum(['0', '1', 'true', 'false']).transform((v) => v === '1' || v === 'true');
 /** An opaque paging position handed out by the server. */
-export const cursor = z.string().max(200).regex(/^[A-Za-z0-9_-]+$/, 'That page position is not valid.');
+export const cursor = z
+  .string()
+  .max(200)
+  .regex(/^[A-Za-z0-9_-]+$/, 'That page position is not valid.');
 
 export const tankParams = clubIdParams.extend({ tankId: uuid });
 
-const side = z.number({ message: 'Enter a number.' }).positive('Must be more than 0.').max(1000, 'That is larger than any tank.');
+const side = z
+  .number({ message: 'Enter a number.' })
+  .positive('Must be more than 0.')
+  .max(1000, 'That is larger than any tank.');
 
 /** Inside measurements; a bow-front's bow is the extra depth at the centre (at most half the length). */
 const dimensionsSchema = z
@@ -49,14 +55,30 @@ const dimensionsSchema = z
     };
     const allowed = new Set([...need[d.shape], 'height', 'fillHeight']);
     for (const f of need[d.shape]) {
-      if (d[f as keyof typeof d] === undefined) ctx.addIssue({ code: 'custom', path: [f], message: `A ${d.shape} tank needs its ${f}.` });
+      if (d[f as keyof typeof d] === undefined)
+        ctx.addIssue({ code: 'custom', path: [f], message: `A ${d.shape} tank needs its ${f}.` });
     }
     for (const f of ['length', 'width', 'diameter', 'bowDepth'] as const) {
-      if (d[f] !== undefined && !allowed.has(f)) ctx.addIssue({ code: 'custom', path: [f], message: `A ${d.shape} tank has no ${f}.` });
+      if (d[f] !== undefined && !allowed.has(f))
+        ctx.addIssue({ code: 'custom', path: [f], message: `A ${d.shape} tank has no ${f}.` });
     }
-    if (d.fillHeight !== undefined && d.fillHeight > d.height) ctx.addIssue({ code: 'custom', path: ['fillHeight'], message: 'The water cannot be higher than the tank.' });
-    if (d.shape === 'bowfront' && d.bowDepth !== undefined && d.length !== undefined && d.bowDepth > d.length / 2) {
-      ctx.addIssue({ code: 'custom', path: ['bowDepth'], message: 'The bow can be at most half the length.' });
+    if (d.fillHeight !== undefined && d.fillHeight > d.height)
+      ctx.addIssue({
+        code: 'custom',
+        path: ['fillHeight'],
+        message: 'The water cannot be higher than the tank.',
+      });
+    if (
+      d.shape === 'bowfront' &&
+      d.bowDepth !== undefined &&
+      d.length !== undefined &&
+      d.bowDepth > d.length / 2
+    ) {
+      ctx.addIssue({
+        code: 'custom',
+        path: ['bowDepth'],
+        message: 'The bow can be at most half the length.',
+      });
     }
   });
 
@@ -74,12 +96,19 @@ export const tankVolumeSchema = z.discriminatedUnion('source', [enteredVolumeSch
 });
 export type TankVolumeInput = z.input<typeof tankVolumeSchema>;
 
-const name = z.string({ message: 'Give the tank a name.' }).trim().min(1, 'Give the tank a name.').max(80, 'Keep the name under 80 characters.');
+const name = z
+  .string({ message: 'Give the tank a name.' })
+  .trim()
+  .min(1, 'Give the tank a name.')
+  .max(80, 'Keep the name under 80 characters.');
 const systemType = z.enum(SYSTEM_TYPES, { message: `Choose the kind of tank: ${SYSTEM_TYPES.join(', ')}.` });
 const phase = z.enum(TANK_PHASES, { message: 'Choose cycling or established.' });
 const equipmentNotes = z.string().trim().max(4000, 'Keep the notes under 4000 characters.');
 /** Which profile judges the readings; the server checks it exists and suits the kind of tank. */
-const careProfileKey = z.string().regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'Choose a care profile by its key, e.g. reef.').max(100);
+const careProfileKey = z
+  .string()
+  .regex(/^[a-z0-9]+(-[a-z0-9]+)*$/, 'Choose a care profile by its key, e.g. reef.')
+  .max(100);
 
 export const createTankSchema = z
   .object({
@@ -119,8 +148,16 @@ export const tankListQuery = z
   .strict();
 
 export const livestockParams = tankParams.extend({ livestockId: uuid });
-const speciesCommonName = z.string({ message: 'Name the animal.' }).trim().min(1, 'Name the animal.').max(120, 'Keep the name under 120 characters.');
-const count = z.number({ message: 'How many?' }).int('A whole number, please.').min(1, 'At least 1.').max(10_000);
+const speciesCommonName = z
+  .string({ message: 'Name the animal.' })
+  .trim()
+  .min(1, 'Name the animal.')
+  .max(120, 'Keep the name under 120 characters.');
+const count = z
+  .number({ message: 'How many?' })
+  .int('A whole number, please.')
+  .min(1, 'At least 1.')
+  .max(10_000);
 const livestockSource = z.string().trim().max(120, 'Keep it under 120 characters.');
 const quarantineNotes = z.string().trim().max(4000, 'Keep the notes under 4000 characters.');
 

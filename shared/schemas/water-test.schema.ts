@@ -52,18 +52,32 @@ export const salinityEntrySchema = z
   .strict()
   .superRefine((e, ctx) => {
     if (e.referenceTempC !== undefined && e.unit !== 'SG') {
-      ctx.addIssue({ code: 'custom', path: ['referenceTempC'], message: 'A reference temperature belongs to an SG reading only.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['referenceTempC'],
+        message: 'A reference temperature belongs to an SG reading only.',
+      });
     }
     if (e.sampleTempC !== undefined && e.unit !== 'SG' && e.unit !== 'mS/cm') {
-      ctx.addIssue({ code: 'custom', path: ['sampleTempC'], message: 'A sample temperature belongs to an SG or conductivity reading only.' });
+      ctx.addIssue({
+        code: 'custom',
+        path: ['sampleTempC'],
+        message: 'A sample temperature belongs to an SG or conductivity reading only.',
+      });
     }
     refuseTypos('salinity')(e, ctx);
   });
 
 const simpleEntry = <U extends readonly [string, ...string[]]>(parameter: ParameterKey, units: U) =>
-  z.object({ value: amount, unit: unitOf(units), ...common }).strict().superRefine(refuseTypos(parameter));
+  z
+    .object({ value: amount, unit: unitOf(units), ...common })
+    .strict()
+    .superRefine(refuseTypos(parameter));
 const singleUnitEntry = <U extends string>(parameter: ParameterKey, unit: U) =>
-  z.object({ value: amount, unit: z.literal(unit).default(unit), ...common }).strict().superRefine(refuseTypos(parameter));
+  z
+    .object({ value: amount, unit: z.literal(unit).default(unit), ...common })
+    .strict()
+    .superRefine(refuseTypos(parameter));
 
 export const pHEntrySchema = singleUnitEntry('pH', 'pH');
 export const ammoniaEntrySchema = simpleEntry('ammonia', AMMONIA_ENTRY_UNITS);

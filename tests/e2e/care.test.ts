@@ -21,7 +21,13 @@ describe('concerns on the tank page', () => {
     clubId = club.id;
     const keeper = await makeMember(ds, club, 'Noor Keeper');
     keeperEmail = keeper.user.email;
-    tankId = await insertTank(ds, { clubId, ownerId: keeper.user.id, systemType: 'seahorse', phase: 'established', name: 'Noor’s seahorses' });
+    tankId = await insertTank(ds, {
+      clubId,
+      ownerId: keeper.user.id,
+      systemType: 'seahorse',
+      phase: 'established',
+      name: 'Noor’s seahorses',
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -41,7 +47,14 @@ describe('concerns on the tank page', () => {
         const res = await fetch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, {
           method: 'POST',
           headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': token },
-          body: JSON.stringify({ takenAt: new Date().toISOString(), entries: { nitrite: { value: 1, unit: 'mg/L NO2' }, temperature: { value: 24, unit: '°C' }, pH: { value: 8.1 } } }),
+          body: JSON.stringify({
+            takenAt: new Date().toISOString(),
+            entries: {
+              nitrite: { value: 1, unit: 'mg/L NO2' },
+              temperature: { value: 24, unit: '°C' },
+              pH: { value: 8.1 },
+            },
+          }),
         });
         return res.status;
       },
@@ -55,11 +68,26 @@ describe('concerns on the tank page', () => {
     await screenshot(page, 'tank-urgent-concern-phone');
     await expectAccessible(page);
 
-    await page.getByRole('listitem').filter({ hasText: /Nitrite 1 mg\/L NO2: toxic/ }).getByRole('button', { name: 'Mark resolved' }).click();
-    await page.getByText(/Nitrite 1 mg\/L NO2: toxic/).first().waitFor({ state: 'detached' });
+    await page
+      .getByRole('listitem')
+      .filter({ hasText: /Nitrite 1 mg\/L NO2: toxic/ })
+      .getByRole('button', { name: 'Mark resolved' })
+      .click();
+    await page
+      .getByText(/Nitrite 1 mg\/L NO2: toxic/)
+      .first()
+      .waitFor({ state: 'detached' });
     await page.getByRole('button', { name: 'Show resolved concerns' }).click();
-    await page.getByText(/Nitrite 1 mg\/L NO2: toxic/).first().waitFor();
-    expect(await page.getByText(/^resolved/).first().isVisible()).toBe(true);
+    await page
+      .getByText(/Nitrite 1 mg\/L NO2: toxic/)
+      .first()
+      .waitFor();
+    expect(
+      await page
+        .getByText(/^resolved/)
+        .first()
+        .isVisible(),
+    ).toBe(true);
     await screenshot(page, 'tank-concern-history-phone');
     await expectAccessible(page);
   });

@@ -31,7 +31,9 @@ async function watchedContext(browser: Browser, viewport: typeof PHONE): Promise
   await context.addInitScript(() => {
     const seen: string[] = [];
     Object.assign(window, { __cspViolations: seen });
-    document.addEventListener('securitypolicyviolation', (e) => seen.push(`${e.violatedDirective} ${e.blockedURI}`));
+    document.addEventListener('securitypolicyviolation', (e) =>
+      seen.push(`${e.violatedDirective} ${e.blockedURI}`),
+    );
   });
   const foreign: string[] = [];
   const consoleViolations: string[] = [];
@@ -47,7 +49,10 @@ async function watchedContext(browser: Browser, viewport: typeof PHONE): Promise
   const page = await context.newPage();
   page.on('console', (m) => /Content Security Policy/i.test(m.text()) && consoleViolations.push(m.text()));
   page.on('pageerror', (e) => errors.push(e.message));
-  const violations = async () => [...consoleViolations, ...(await page.evaluate(() => (window as unknown as { __cspViolations: string[] }).__cspViolations))];
+  const violations = async () => [
+    ...consoleViolations,
+    ...(await page.evaluate(() => (window as unknown as { __cspViolations: string[] }).__cspViolations)),
+  ];
   return { context, page, violations, foreign, errors };
 }
 
@@ -69,11 +74,25 @@ describe('Content-Security-Policy in Chromium', () => {
     await assignMentor(ds, club, mentor.user, keeper.user);
     keeperEmail = keeper.user.email;
     mentorEmail = mentor.user.email;
-    tankId = await insertTank(ds, { clubId: club.id, ownerId: keeper.user.id, systemType: 'seahorse', name: HOSTILE_NAME });
-    const testId = await insertWaterTest(ds, tankId, new Date(Date.now() - 86_400_000), { nitrate: 20, pH: 8.1, temperature: 24.5, salinity: 33 });
+    tankId = await insertTank(ds, {
+      clubId: club.id,
+      ownerId: keeper.user.id,
+      systemType: 'seahorse',
+      name: HOSTILE_NAME,
+    });
+    const testId = await insertWaterTest(ds, tankId, new Date(Date.now() - 86_400_000), {
+      nitrate: 20,
+      pH: 8.1,
+      temperature: 24.5,
+      salinity: 33,
+    });
     await ds.transaction((tx) => reevaluateTank(tx, tankId));
     const api = await signedIn(inject('baseUrl'), keeperEmail);
-    const asked = await api.post(`/api/clubs/${club.id}/tanks/${tankId}/questions`, { title: HOSTILE_QUESTION, body: '<b onmouseover="window.__xss=3">bold?</b>', waterTestId: testId });
+    const asked = await api.post(`/api/clubs/${club.id}/tanks/${tankId}/questions`, {
+      title: HOSTILE_QUESTION,
+      body: '<b onmouseover="window.__xss=3">bold?</b>',
+      waterTestId: testId,
+    });
     expect(asked.status).toBe(201);
     questionId = asked.body.question.id as string;
   });
@@ -85,7 +104,11 @@ describe('Content-Security-Policy in Chromium', () => {
   it('when the document is served, then its policy allows scripts from our origin only', async () => {
     const res = await fetch(`${inject('baseUrl')}/tanks`);
     const csp = res.headers.get('content-security-policy') ?? '';
-    const directive = (name: string) => csp.split(';').map((d) => d.trim()).find((d) => d.startsWith(`${name} `));
+    const directive = (name: string) =>
+      csp
+        .split(';')
+        .map((d) => d.trim())
+        .find((d) => d.startsWith(`${name} `));
     expect(directive('script-src')).toBe("script-src 'self'");
     expect(directive('object-src')).toBe("object-src 'none'");
     expect(directive('base-uri')).toBe("base-uri 'none'");
@@ -95,8 +118,27 @@ describe('Content-Security-Policy in Chromium', () => {
 
   it('when a keeper and a mentor go through the main pages, then 0 violations, 0 foreign requests and no stored markup runs', async () => {
     const visits: [string, typeof PHONE, string, string[]][] = [
-      ['keeper', PHONE, keeperEmail, ['/tanks', `/tanks/${tankId}`, `/tanks/${tankId}/tests/new`, `/tanks/${tankId}/entries/new`, '/questions', `/questions/${questionId}`, '/club', '/profile']],
-      ['mentor', DESK, mentorEmail, ['/desk', `/tanks/${tankId}`, '/club/profiles', `/questions/${questionId}`]],
+      [
+        'keeper',
+        PHONE,
+        keeperEmail,
+        [
+          '/tanks',
+          `/tanks/${tankId}`,
+          `/tanks/${tankId}/tests/new`,
+          `/tanks/${tankId}/entries/new`,
+          '/questions',
+          `/questions/${questionId}`,
+          '/club',
+          '/profile',
+        ],
+      ],
+      [
+        'mentor',
+        DESK,
+        mentorEmail,
+        ['/desk', `/tanks/${tankId}`, '/club/profiles', `/questions/${questionId}`],
+      ],
     ];
     const report: Record<string, { violations: string[]; errors: string[] }> = {};
     let foreign: string[] = [];
@@ -111,7 +153,10 @@ describe('Content-Security-Policy in Chromium', () => {
         expect(new URL(w.page.url()).pathname, 'still signed in').toBe(path);
         report[`${who} ${path}`] = { violations: await w.violations(), errors: [...w.errors] };
         w.errors.length = 0;
-        expect(await w.page.evaluate(() => (window as unknown as { __xss?: number }).__xss), `${who} ${path}`).toBeUndefined();
+        expect(
+          await w.page.evaluate(() => (window as unknown as { __xss?: number }).__xss),
+          `${who} ${path}`,
+        ).toBeUndefined();
       }
       // The stored markup is shown as the text it is.
       await w.page.goto(`${inject('baseUrl')}/questions/${questionId}`);
@@ -121,7 +166,9 @@ describe('Content-Security-Policy in Chromium', () => {
     }
     const pages = Object.keys(report).length;
     const bad = Object.entries(report).filter(([, r]) => r.violations.length || r.errors.length);
-    console.info(`content security policy: ${pages} page visits, ${bad.length} with violations or errors, ${foreign.length} requests to other origins`);
+    console.info(
+      `content security policy: ${pages} page visits, ${bad.length} with violations or errors, ${foreign.length} requests to other origins`,
+    );
     expect(bad).toEqual([]);
     expect(foreign).toEqual([]);
   });

@@ -2,16 +2,34 @@ import type { Browser, Page } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
-import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot, signInOn } from '../helpers/browser';
+import {
+  DESK,
+  expectAccessible,
+  launchBrowser,
+  openPage,
+  PHONE,
+  screenshot,
+  signInOn,
+} from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank, insertWaterTest } from '../helpers/tank-rows';
 
-const CALM = { temperature: 24, salinity: 33, pH: 8.1, ammonia: 0, nitrite: 0, nitrate: 2, alkalinity: 8, calcium: 420, magnesium: 1300 };
+const CALM = {
+  temperature: 24,
+  salinity: 33,
+  pH: 8.1,
+  ammonia: 0,
+  nitrite: 0,
+  nitrate: 2,
+  alkalinity: 8,
+  calcium: 420,
+  magnesium: 1300,
+};
 
-
-const firstRowTank = (page: Page) => page.locator('ol[aria-label="Tanks by need"] > li').first().getAttribute('data-tank-id');
+const firstRowTank = (page: Page) =>
+  page.locator('ol[aria-label="Tanks by need"] > li').first().getAttribute('data-tank-id');
 
 describe('the mentor desk, live', () => {
   let browser: Browser;
@@ -34,8 +52,20 @@ describe('the mentor desk, live', () => {
     mentorEmail = mentor.user.email;
     keeperEmail = keeper.user.email;
     tanks = {
-      keeper: await insertTank(ds, { clubId, ownerId: keeper.user.id, systemType: 'seahorse', phase: 'established', name: 'Kai’s seahorses' }),
-      other: await insertTank(ds, { clubId, ownerId: other.user.id, systemType: 'seahorse', phase: 'established', name: 'Olu’s seahorses' }),
+      keeper: await insertTank(ds, {
+        clubId,
+        ownerId: keeper.user.id,
+        systemType: 'seahorse',
+        phase: 'established',
+        name: 'Kai’s seahorses',
+      }),
+      other: await insertTank(ds, {
+        clubId,
+        ownerId: other.user.id,
+        systemType: 'seahorse',
+        phase: 'established',
+        name: 'Olu’s seahorses',
+      }),
     };
     // Olu tested longer ago, so with nothing wrong anywhere Olu's tank comes first.
     await insertWaterTest(ds, tanks.keeper, new Date(Date.now() - 2 * 3_600_000), CALM);
@@ -67,7 +97,10 @@ describe('the mentor desk, live', () => {
         const res = await fetch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, {
           method: 'POST',
           headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': token },
-          body: JSON.stringify({ takenAt: new Date().toISOString(), entries: { nitrite: { value: 1, unit: 'mg/L NO2' }, pH: { value: 8.1 } } }),
+          body: JSON.stringify({
+            takenAt: new Date().toISOString(),
+            entries: { nitrite: { value: 1, unit: 'mg/L NO2' }, pH: { value: 8.1 } },
+          }),
         });
         return res.status;
       },
@@ -76,8 +109,16 @@ describe('the mentor desk, live', () => {
     expect(status).toBe(201);
 
     // The socket event moves the row (how fast belongs in a benchmark, not here), and the page was not reloaded.
-    await desk.waitForFunction((id) => document.querySelector('ol[aria-label="Tanks by need"] > li')?.getAttribute('data-tank-id') === id, tanks.keeper, { timeout: 5_000 });
-    await desk.getByText(/Nitrite/).first().waitFor();
+    await desk.waitForFunction(
+      (id) =>
+        document.querySelector('ol[aria-label="Tanks by need"] > li')?.getAttribute('data-tank-id') === id,
+      tanks.keeper,
+      { timeout: 5_000 },
+    );
+    await desk
+      .getByText(/Nitrite/)
+      .first()
+      .waitFor();
     await screenshot(desk, 'desk-after-urgent-desk');
     await expectAccessible(desk);
     expect(await desk.evaluate(() => 'deskNotReloaded' in window)).toBe(true);

@@ -21,9 +21,24 @@ describe('the feel of the app: keyboard, titles, dialogs, offline, dark mode', (
     const club = await makeClub(ds, 'Kelpwater Circle');
     const keeper = await makeMember(ds, club, 'Rosa Keeper');
     keeperEmail = keeper.user.email;
-    tankId = await insertTank(ds, { clubId: club.id, ownerId: keeper.user.id, systemType: 'tropical-freshwater', phase: 'established', volumeL: 120, name: 'Rosa’s river tank' });
-    for (const [daysAgo, nitrate] of [[6, 10], [4, 15], [2, 20]] as const) {
-      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY), { nitrate, pH: 7.2, temperature: 25 });
+    tankId = await insertTank(ds, {
+      clubId: club.id,
+      ownerId: keeper.user.id,
+      systemType: 'tropical-freshwater',
+      phase: 'established',
+      volumeL: 120,
+      name: 'Rosa’s river tank',
+    });
+    for (const [daysAgo, nitrate] of [
+      [6, 10],
+      [4, 15],
+      [2, 20],
+    ] as const) {
+      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY), {
+        nitrate,
+        pH: 7.2,
+        temperature: 25,
+      });
     }
   });
   afterAll(async () => {

@@ -29,19 +29,38 @@ describe('the home, on a phone at the tank and at a desk', () => {
     await assignMentor(ds, club, mentor.user, keeper.user);
     // Kai lives where "today" is rarely the UTC date; the home groups by his own calendar.
     await ds.query(`UPDATE app_user SET time_zone = 'Pacific/Auckland' WHERE id = $1`, [keeper.user.id]);
-    emails = { keeper: keeper.user.email, mentor: mentor.user.email, admin: admin.user.email, newcomer: newcomer.user.email };
+    emails = {
+      keeper: keeper.user.email,
+      mentor: mentor.user.email,
+      admin: admin.user.email,
+      newcomer: newcomer.user.email,
+    };
 
-    tankId = await insertTank(ds, { clubId, ownerId: keeper.user.id, systemType: 'tropical-freshwater', phase: 'cycling', name: 'Kai’s first tank', createdAt: new Date(Date.now() - 20 * 24 * HOUR) });
+    tankId = await insertTank(ds, {
+      clubId,
+      ownerId: keeper.user.id,
+      systemType: 'tropical-freshwater',
+      phase: 'cycling',
+      name: 'Kai’s first tank',
+      createdAt: new Date(Date.now() - 20 * 24 * HOUR),
+    });
     // Cycling, tropical freshwater: ammonia and nitrite daily, nitrate every 2 days, pH and temperature every 3
     // (the profile's cadences: common practice, no source). Ammonia and nitrite were last read 25 hours ago;
     // nitrate, pH and temperature 2 hours ago, so only ammonia and nitrite are due.
     await insertWaterTest(ds, tankId, new Date(Date.now() - 49 * HOUR), { ammonia: 0.5, nitrite: 0.25 });
     await insertWaterTest(ds, tankId, new Date(Date.now() - 25 * HOUR), { ammonia: 1, nitrite: 0.5 });
-    await insertWaterTest(ds, tankId, new Date(Date.now() - 2 * HOUR), { nitrate: 5, pH: 7.4, temperature: 26 });
+    await insertWaterTest(ds, tankId, new Date(Date.now() - 2 * HOUR), {
+      nitrate: 5,
+      pH: 7.4,
+      temperature: 26,
+    });
     await ds.transaction((tx) => reevaluateTank(tx, tankId));
 
     // Work waiting for the admin: a member asking for a mentor and an invite not yet accepted.
-    await ds.query(`INSERT INTO mentor_request (club_id, requester_id, note, state, created_at) VALUES ($1, $2, 'Starting a tank next week.', 'open', now() - interval '2 days')`, [clubId, newcomer.user.id]);
+    await ds.query(
+      `INSERT INTO mentor_request (club_id, requester_id, note, state, created_at) VALUES ($1, $2, 'Starting a tank next week.', 'open', now() - interval '2 days')`,
+      [clubId, newcomer.user.id],
+    );
     await ds.query(
       `INSERT INTO invite (club_id, email, role, token_hash, invited_by_id, expires_at, last_sent_at) VALUES ($1, 'reef.friend@test.example', 'member', 'home-e2e-hash', $2, now() + interval '5 days', now())`,
       [clubId, admin.user.id],
@@ -58,7 +77,10 @@ describe('the home, on a phone at the tank and at a desk', () => {
     await signInOn(laptop, emails.keeper, '/');
     await laptop.getByRole('heading', { name: 'Hello, Kai' }).waitFor();
     const laptopCard = laptop.locator(`li[data-tank-id="${tankId}"]`);
-    await laptopCard.getByText('Ammonia: due today').or(laptopCard.getByText(/Ammonia: 1 day late/)).waitFor();
+    await laptopCard
+      .getByText('Ammonia: due today')
+      .or(laptopCard.getByText(/Ammonia: 1 day late/))
+      .waitFor();
     await laptop.evaluate(() => Object.assign(window, { homeNotReloaded: true }));
 
     const phone = await (await browser.newContext(PHONE)).newPage();
@@ -81,9 +103,13 @@ describe('the home, on a phone at the tank and at a desk', () => {
     await screenshot(phone, 'home-member-phone');
 
     await action.click();
-    await phone.waitForURL((u) => u.pathname === `/tanks/${tankId}/tests/new` && u.searchParams.get('first') === 'ammonia,nitrite');
+    await phone.waitForURL(
+      (u) => u.pathname === `/tanks/${tankId}/tests/new` && u.searchParams.get('first') === 'ammonia,nitrite',
+    );
     await phone.getByText('To test today, at the top: Ammonia (total) and Nitrite.').waitFor();
-    const order = await phone.locator('fieldset[data-parameter]').evaluateAll((sets) => sets.map((s) => s.getAttribute('data-parameter')));
+    const order = await phone
+      .locator('fieldset[data-parameter]')
+      .evaluateAll((sets) => sets.map((s) => s.getAttribute('data-parameter')));
     expect(order.slice(0, 2)).toEqual(['ammonia', 'nitrite']);
     await screenshot(phone, 'home-log-test-phone');
     await phone.getByLabel('Ammonia (total)', { exact: true }).fill('2');
@@ -93,8 +119,13 @@ describe('the home, on a phone at the tank and at a desk', () => {
 
     // The laptop's home follows over the socket: nothing left to test today, the new figures shown, no reload.
     await laptopCard.getByText('Nothing to test today.').waitFor({ timeout: 10_000 });
-    await laptopCard.getByTestId('last-test').getByText(/Ammonia 2 mg\/L NH3 · Nitrite 1 mg\/L NO2/).waitFor();
-    expect(await laptop.evaluate(() => (window as unknown as { homeNotReloaded?: boolean }).homeNotReloaded)).toBe(true);
+    await laptopCard
+      .getByTestId('last-test')
+      .getByText(/Ammonia 2 mg\/L NH3 · Nitrite 1 mg\/L NO2/)
+      .waitFor();
+    expect(
+      await laptop.evaluate(() => (window as unknown as { homeNotReloaded?: boolean }).homeNotReloaded),
+    ).toBe(true);
     await screenshot(laptop, 'home-member-desk-after-test');
 
     // Back home on the phone through the app's own navigation.
@@ -110,11 +141,17 @@ describe('the home, on a phone at the tank and at a desk', () => {
     const questionId = await phone.evaluate(
       async ({ clubId, tankId }) => {
         const { token } = (await (await fetch('/api/csrf')).json()) as { token: string };
-        const tests = (await (await fetch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`)).json()) as { items: { id: string }[] };
+        const tests = (await (await fetch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`)).json()) as {
+          items: { id: string }[];
+        };
         const res = await fetch(`/api/clubs/${clubId}/tanks/${tankId}/questions`, {
           method: 'POST',
           headers: { 'Content-Type': 'application/json', 'X-CSRF-Token': token },
-          body: JSON.stringify({ title: 'Is ammonia 2 too much?', body: 'Day 20 of cycling.', waterTestId: tests.items[0]!.id }),
+          body: JSON.stringify({
+            title: 'Is ammonia 2 too much?',
+            body: 'Day 20 of cycling.',
+            waterTestId: tests.items[0]!.id,
+          }),
         });
         return ((await res.json()) as { question: { id: string } }).question.id;
       },
@@ -175,7 +212,8 @@ describe('the home, on a phone at the tank and at a desk', () => {
     const caution = phone.locator('aside').filter({ hasText: 'Ammonia is a hazardous chemical' });
     await caution.waitFor();
     const text = await caution.innerText();
-    for (const part of ['no soap, scent or colour', 'wear gloves', 'away from children', 'label']) expect(text).toContain(part);
+    for (const part of ['no soap, scent or colour', 'wear gloves', 'away from children', 'label'])
+      expect(text).toContain(part);
     await screenshot(phone, 'home-first-tank-phone');
   });
 });

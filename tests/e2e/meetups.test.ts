@@ -43,17 +43,30 @@ describe('meetups on a phone', () => {
     await form.getByLabel('Where').fill('Room 2, the invented harbour hall');
     await form.getByLabel('Places').fill('12');
     // A mistake first: the field says what is wrong before anything is sent.
-    await form.getByLabel('Ends').fill(await form.getByLabel('Starts').inputValue().then((v) => v.replace('19:00', '18:00')));
+    await form.getByLabel('Ends').fill(
+      await form
+        .getByLabel('Starts')
+        .inputValue()
+        .then((v) => v.replace('19:00', '18:00')),
+    );
     await form.getByRole('button', { name: 'Plan the meetup' }).click();
     await form.getByText('It has to end after it starts.').waitFor();
-    await form.getByLabel('Ends').fill(await form.getByLabel('Starts').inputValue().then((v) => v.replace('19:00', '21:00')));
+    await form.getByLabel('Ends').fill(
+      await form
+        .getByLabel('Starts')
+        .inputValue()
+        .then((v) => v.replace('19:00', '21:00')),
+    );
     await screenshot(ada.page, 'meetup-plan-phone');
     await expectAccessible(ada.page);
     await form.getByRole('button', { name: 'Plan the meetup' }).click();
     await ada.page.waitForURL(/\/meetups\/[0-9a-f-]{36}$/);
     const meetupPath = new URL(ada.page.url()).pathname;
     await ada.page.getByRole('heading', { name: 'Your first nitrogen cycle' }).waitFor();
-    await ada.page.getByText(/19:00–21:00 \((GMT|BST)\)/).first().waitFor();
+    await ada.page
+      .getByText(/19:00–21:00 \((GMT|BST)\)/)
+      .first()
+      .waitFor();
 
     // The member finds it in the list on her phone and says she is going.
     const bo = await openSignedIn(browser, PHONE, memberEmail, '/meetups');
@@ -84,9 +97,17 @@ describe('meetups on a phone', () => {
     // Ticked on screen well before the retry (2 s after the lost attempt) has reached the server.
     await expect.poll(() => row.getAttribute('aria-pressed'), { timeout: 1_500 }).toBe('true');
     await ada.page.getByText('1 of 1 here').waitFor({ timeout: 1_500 });
-    expect((await ds.query(`SELECT count(*)::int AS n FROM meetup_rsvp WHERE checked_in_at IS NOT NULL`))[0].n).toBe(0);
+    expect(
+      (await ds.query(`SELECT count(*)::int AS n FROM meetup_rsvp WHERE checked_in_at IS NOT NULL`))[0].n,
+    ).toBe(0);
     // The retry reaches the server: after a reload the list still says she is here.
-    await expect.poll(async () => (await ds.query(`SELECT count(*)::int AS n FROM meetup_rsvp WHERE checked_in_at IS NOT NULL`))[0].n, { timeout: 10_000 }).toBe(1);
+    await expect
+      .poll(
+        async () =>
+          (await ds.query(`SELECT count(*)::int AS n FROM meetup_rsvp WHERE checked_in_at IS NOT NULL`))[0].n,
+        { timeout: 10_000 },
+      )
+      .toBe(1);
     expect(dropped).toBeGreaterThanOrEqual(2);
     await ada.page.unroute('**/attendance/*');
     await ada.page.reload();
@@ -113,12 +134,18 @@ describe('meetups on a phone', () => {
     await bo.page.getByRole('link', { name: 'My attendance' }).click();
     await bo.page.getByRole('heading', { name: 'My meetups' }).waitFor();
     await bo.page.getByText('✓ Was there').waitFor();
-
   });
   it('when a member books a clinic slot for her tank, then the mentor running it saves the results straight onto that tank', async () => {
     const [bo] = await ds.query(`SELECT id FROM app_user WHERE email = $1`, [memberEmail]);
     const [maya] = await ds.query(`SELECT id FROM app_user WHERE email = $1`, [mentorEmail]);
-    const tankId = await insertTank(ds, { clubId, ownerId: bo.id, systemType: 'tropical-freshwater', phase: 'cycling', volumeL: 60, name: 'Guppy starter' });
+    const tankId = await insertTank(ds, {
+      clubId,
+      ownerId: bo.id,
+      systemType: 'tropical-freshwater',
+      phase: 'cycling',
+      volumeL: 60,
+      name: 'Guppy starter',
+    });
     const [clinic] = await ds.query(
       `INSERT INTO meetup (club_id, kind, title, starts_at, ends_at, place_text, capacity, host_id, slot_minutes)
        VALUES ($1, 'clinic', 'Bring-a-sample clinic', date_trunc('hour', now()) + interval '2 days', date_trunc('hour', now()) + interval '2 days 1 hour', 'The back room', 6, $2, 20)
@@ -149,7 +176,10 @@ describe('meetups on a phone', () => {
     await host.page.getByRole('button', { name: '✓ Results saved · record again' }).waitFor();
     await host.page.getByRole('button', { name: 'Bo Beginner: here' }).waitFor();
 
-    const saved = await ds.query(`SELECT w.created_by_id AS "by", w.ph FROM water_test w WHERE w.tank_id = $1`, [tankId]);
+    const saved = await ds.query(
+      `SELECT w.created_by_id AS "by", w.ph FROM water_test w WHERE w.tank_id = $1`,
+      [tankId],
+    );
     expect(saved).toEqual([{ by: maya.id, ph: 7.4 }]);
   });
 });

@@ -2,11 +2,18 @@ import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, it } from 'vitest';
 import { MentorAssignment } from '@server/modules/mentorship/mentor-assignment.entity';
-import { DESK, expectAccessible, launchBrowser, openPage, PHONE, screenshot, signInOn } from '../helpers/browser';
+import {
+  DESK,
+  expectAccessible,
+  launchBrowser,
+  openPage,
+  PHONE,
+  screenshot,
+  signInOn,
+} from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { makeClub, makeMember } from '../helpers/factories';
-
 
 describe('mentor requests and live notifications in the browser', () => {
   let browser: Browser;
@@ -39,8 +46,12 @@ describe('mentor requests and live notifications in the browser', () => {
     await signInOn(phone, beginner.user.email, '/');
     await phone.getByRole('heading', { name: 'Hello, Bo' }).waitFor();
     await phone.getByRole('heading', { name: 'Ask for a mentor' }).waitFor();
-    await phone.getByLabel('What would you like help with? (optional)').fill('My first 60 litre tank, cycling since Sunday.');
-    await phone.getByLabel('Someone in mind? (optional)').selectOption({ label: 'Maya Mentor — 0 of 5 mentees' });
+    await phone
+      .getByLabel('What would you like help with? (optional)')
+      .fill('My first 60 litre tank, cycling since Sunday.');
+    await phone
+      .getByLabel('Someone in mind? (optional)')
+      .selectOption({ label: 'Maya Mentor — 0 of 5 mentees' });
     await phone.getByRole('button', { name: 'Ask for a mentor' }).click();
     await phone.getByRole('heading', { name: 'Your mentor request' }).waitFor();
     await phone.getByText('You asked for Maya Mentor.').waitFor();
@@ -51,7 +62,10 @@ describe('mentor requests and live notifications in the browser', () => {
     await desk.getByRole('button', { name: 'Notifications, 1 unread' }).waitFor({ timeout: 5_000 });
     await desk.getByText('“My first 60 litre tank, cycling since Sunday.”').waitFor();
     await desk.getByRole('button', { name: 'Notifications, 1 unread' }).click();
-    await desk.getByRole('dialog', { name: 'Notifications' }).getByText('Bo Beginner asks for a mentor').waitFor();
+    await desk
+      .getByRole('dialog', { name: 'Notifications' })
+      .getByText('Bo Beginner asks for a mentor')
+      .waitFor();
     await screenshot(desk, 'admin-bell-mentor-request-desk');
     await expectAccessible(desk);
     await desk.keyboard.press('Escape');
@@ -68,7 +82,9 @@ describe('mentor requests and live notifications in the browser', () => {
     await phone.getByText('is your mentor.', { exact: false }).waitFor({ timeout: 5_000 });
     await screenshot(phone, 'mentor-assigned-phone');
     await phone.getByRole('button', { name: 'Notifications, 1 unread' }).click();
-    const item = phone.getByRole('dialog', { name: 'Notifications' }).getByRole('button', { name: /^Maya Mentor is now your mentor/ });
+    const item = phone
+      .getByRole('dialog', { name: 'Notifications' })
+      .getByRole('button', { name: /^Maya Mentor is now your mentor/ });
     await item.waitFor();
     await screenshot(phone, 'bell-open-phone');
     await expectAccessible(phone);

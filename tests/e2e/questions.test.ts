@@ -2,14 +2,20 @@ import type { Browser } from 'playwright-core';
 import type { DataSource } from 'typeorm';
 import { afterAll, beforeAll, describe, expect, inject, it } from 'vitest';
 import { reevaluateTank } from '@server/modules/concerns/reevaluate-tank';
-import { ARTIFACTS, DESK, expectAccessible, launchBrowser, openSignedIn, PHONE, screenshot } from '../helpers/browser';
+import {
+  ARTIFACTS,
+  DESK,
+  expectAccessible,
+  launchBrowser,
+  openSignedIn,
+  PHONE,
+  screenshot,
+} from '../helpers/browser';
 import { resetDatabase } from '../helpers/db';
 import { openE2eDataSource } from '../helpers/e2e-db';
 import { assignMentor, makeClub, makeMember } from '../helpers/factories';
 import { insertTank, insertWaterTest } from '../helpers/tank-rows';
 import { DAY_MS } from '@shared/care/time';
-
-
 
 describe('questions on a reading in the browser', () => {
   let browser: Browser;
@@ -29,10 +35,28 @@ describe('questions on a reading in the browser', () => {
     await assignMentor(ds, club, mentor.user, keeper.user);
     keeperEmail = keeper.user.email;
     mentorEmail = mentor.user.email;
-    tankId = await insertTank(ds, { clubId: club.id, ownerId: keeper.user.id, systemType: 'seahorse', phase: 'established', volumeL: 200, name: 'Seahorse corner' });
+    tankId = await insertTank(ds, {
+      clubId: club.id,
+      ownerId: keeper.user.id,
+      systemType: 'seahorse',
+      phase: 'established',
+      volumeL: 200,
+      name: 'Seahorse corner',
+    });
     // A week of nitrate creeping up, ending in the test she asks about.
-    for (const [daysAgo, nitrate] of [[9, 10], [7, 15], [5, 20], [3, 30], [1, 40]] as const) {
-      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY_MS), { nitrate, pH: 8.1, temperature: 24.5, salinity: 33 });
+    for (const [daysAgo, nitrate] of [
+      [9, 10],
+      [7, 15],
+      [5, 20],
+      [3, 30],
+      [1, 40],
+    ] as const) {
+      await insertWaterTest(ds, tankId, new Date(Date.now() - daysAgo * DAY_MS), {
+        nitrate,
+        pH: 8.1,
+        temperature: 24.5,
+        salinity: 33,
+      });
     }
     await ds.transaction((tx) => reevaluateTank(tx, tankId));
   });
@@ -49,9 +73,15 @@ describe('questions on a reading in the browser', () => {
     const form = bo.page.getByRole('form', { name: 'Ask your mentor about this reading' });
     await form.getByLabel('Your question').fill('Is this nitrate OK for my seahorses?');
     await expectAccessible(bo.page);
-    await form.getByLabel('Details').fill('It has gone up every test this week. I feed **frozen mysis** twice a day.\n- water change 10 % weekly\n- <script>alert(1)</script>');
+    await form
+      .getByLabel('Details')
+      .fill(
+        'It has gone up every test this week. I feed **frozen mysis** twice a day.\n- water change 10 % weekly\n- <script>alert(1)</script>',
+      );
     // The tank page is long: the section alone shows the form.
-    await bo.page.getByRole('region', { name: 'Ask your mentor' }).screenshot({ path: `${ARTIFACTS}/question-ask-form-phone.png` });
+    await bo.page
+      .getByRole('region', { name: 'Ask your mentor' })
+      .screenshot({ path: `${ARTIFACTS}/question-ask-form-phone.png` });
     const touch = await form.getByRole('button', { name: 'Send question' }).boundingBox();
     expect(touch!.height).toBeGreaterThanOrEqual(44);
     await form.getByRole('button', { name: 'Send question' }).click();
@@ -59,10 +89,14 @@ describe('questions on a reading in the browser', () => {
     const questionPath = new URL(bo.page.url()).pathname;
 
     await bo.page.getByRole('heading', { name: 'Is this nitrate OK for my seahorses?' }).waitFor();
-    await expect.poll(() => bo.page.locator('[data-figure="nitrate"]').textContent()).toContain('40 mg/L NO3');
+    await expect
+      .poll(() => bo.page.locator('[data-figure="nitrate"]').textContent())
+      .toContain('40 mg/L NO3');
     await bo.page.getByText('Concerns open then').waitFor();
     await bo.page.locator('[data-chart="nitrate"] .recharts-line').waitFor();
-    expect(await bo.page.locator('ol[aria-label="Thread"] strong').first().textContent()).toBe('frozen mysis');
+    expect(await bo.page.locator('ol[aria-label="Thread"] strong').first().textContent()).toBe(
+      'frozen mysis',
+    );
     expect(await bo.page.locator('ol[aria-label="Thread"] script').count()).toBe(0);
     await bo.page.getByText('Waiting for an answer').waitFor();
     await screenshot(bo.page, 'question-asked-phone');
@@ -89,7 +123,9 @@ describe('questions on a reading in the browser', () => {
     await maya.page.getByRole('option', { name: '@Ada Admin' }).click();
     await reply.pressSequentially('can you check our club guide too?');
     await reply.press('Enter');
-    await reply.pressSequentially('- do a **30 %** water change today\n- test again in two days, see https://guide.example/nitrate');
+    await reply.pressSequentially(
+      '- do a **30 %** water change today\n- test again in two days, see https://guide.example/nitrate',
+    );
     await maya.page.getByRole('button', { name: 'Send reply' }).click();
     await maya.page.getByText('Ada Admin will be told.').waitFor();
     const answer = maya.page.locator('ol[aria-label="Thread"] > li').nth(1);
@@ -101,10 +137,16 @@ describe('questions on a reading in the browser', () => {
     await expectAccessible(maya.page);
 
     // Her page follows live: the answer appears without a reload; she marks it answered.
-    await bo.page.locator('ol[aria-label="Thread"] > li').nth(1).getByText('30 %').waitFor({ timeout: 5_000 });
+    await bo.page
+      .locator('ol[aria-label="Thread"] > li')
+      .nth(1)
+      .getByText('30 %')
+      .waitFor({ timeout: 5_000 });
     await bo.page.getByRole('button', { name: 'Mark answered' }).click();
     await bo.page.getByText('✓ Answered').waitFor();
-    await expect.poll(() => bo.page.getByRole('button', { name: 'Reopen the question' }).isEnabled()).toBe(true);
+    await expect
+      .poll(() => bo.page.getByRole('button', { name: 'Reopen the question' }).isEnabled())
+      .toBe(true);
     await screenshot(bo.page, 'question-answered-phone');
     await expectAccessible(bo.page);
 

@@ -21,7 +21,9 @@ function cyclingLog(): { csv: string; good: number } {
     const ammonia = day < 12 ? Math.min(2, 0.25 + day * 0.2) : Math.max(0, 2 - (day - 12) * 0.3);
     const nitrite = day < 8 ? 0 : day < 24 ? Math.min(3, (day - 8) * 0.4) : Math.max(0, 3 - (day - 24) * 0.6);
     const nitrate = day < 14 ? 0 : Math.min(40, (day - 14) * 2.5);
-    lines.push(`${dmy(new Date(Date.now() - d * DAY_MS))},18:30,25.${d % 3},1.025,8.1,${round(ammonia)},${round(nitrite)},${round(nitrate)},${day === 0 ? 'Dosed ammonia to 2 ppm' : ''}`);
+    lines.push(
+      `${dmy(new Date(Date.now() - d * DAY_MS))},18:30,25.${d % 3},1.025,8.1,${round(ammonia)},${round(nitrite)},${round(nitrate)},${day === 0 ? 'Dosed ammonia to 2 ppm' : ''}`,
+    );
   }
   const bad = new Date(Date.now() - 3 * DAY_MS);
   lines.push(`${dmy(bad)},07:00,25.1,1.025,80,0.25,0.5,10,typo`);
@@ -34,14 +36,17 @@ function cyclingLog(): { csv: string; good: number } {
 function bigLog(rows = 5000): string {
   const lines = ['taken (UTC),temperature (°C),pH,nitrate (mg/L NO3)'];
   for (let i = rows; i >= 1; i--) {
-    lines.push(`${new Date(Date.now() - i * 2 * 3_600_000).toISOString()},${(24 + (i % 10) / 10).toFixed(1)},${(7 + (i % 5) / 10).toFixed(1)},${5 + (i % 20)}`);
+    lines.push(
+      `${new Date(Date.now() - i * 2 * 3_600_000).toISOString()},${(24 + (i % 10) / 10).toFixed(1)},${(7 + (i % 5) / 10).toFixed(1)},${5 + (i % 20)}`,
+    );
   }
   return lines.join('\n');
 }
 
-
 async function importFile(page: Page, name: string, csv: string) {
-  await page.locator('input[type=file]').setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(csv) });
+  await page
+    .locator('input[type=file]')
+    .setInputFiles({ name, mimeType: 'text/csv', buffer: Buffer.from(csv) });
   await page.getByRole('button', { name: 'Check the rows' }).waitFor({ timeout: 30_000 });
 }
 
@@ -64,7 +69,14 @@ describe('tanks in the browser', () => {
     await assignMentor(ds, club, mentor.user, bo.user);
     member = { email: bo.user.email, id: bo.user.id };
     mentorEmail = mentor.user.email;
-    await insertTank(ds, { clubId: club.id, ownerId: bo.user.id, systemType: 'tropical-freshwater', phase: 'established', volumeL: 180, name: 'Living-room community' });
+    await insertTank(ds, {
+      clubId: club.id,
+      ownerId: bo.user.id,
+      systemType: 'tropical-freshwater',
+      phase: 'established',
+      volumeL: 180,
+      name: 'Living-room community',
+    });
   });
   afterAll(async () => {
     await browser?.close();
@@ -84,7 +96,9 @@ describe('tanks in the browser', () => {
     await page.getByLabel('Height, cm').fill('60');
     await page.getByLabel('Taken up by rock and sand, %').fill('10');
     await page.getByText('Full to the brim: 243 L').waitFor();
-    await page.getByLabel('Equipment notes (optional)').fill('Sponge filter and a 150 W heater on a timer-free socket.');
+    await page
+      .getByLabel('Equipment notes (optional)')
+      .fill('Sponge filter and a 150 W heater on a timer-free socket.');
     await page.getByText(/RCD\/GFCI/).waitFor();
     await screenshot(page, 'tank-form-desk');
     await expectAccessible(page);
@@ -108,12 +122,16 @@ describe('tanks in the browser', () => {
     await screenshot(page, 'tank-import-review-desk');
     await expectAccessible(page);
     await page.getByRole('button', { name: `Save ${good} tests` }).click();
-    await page.getByText(`Saved ${good} tests from cycle-log.csv. 3 rows with errors were left out.`).waitFor({ timeout: 30_000 });
+    await page
+      .getByText(`Saved ${good} tests from cycle-log.csv. 3 rows with errors were left out.`)
+      .waitFor({ timeout: 30_000 });
     await page.getByRole('link', { name: 'See them on the charts' }).click();
 
     await page.locator('figure[data-chart="nitrogen-cycle"]').waitFor();
     await page.locator('figure[data-chart="ammonia"] .recharts-line').waitFor();
-    expect(await page.locator('figure[data-chart="pH"] [role=img]').getAttribute('aria-label')).toContain(`${good} readings`);
+    expect(await page.locator('figure[data-chart="pH"] [role=img]').getAttribute('aria-label')).toContain(
+      `${good} readings`,
+    );
     await screenshot(page, 'tank-page-desk');
     await expectAccessible(page);
   });
@@ -130,8 +148,14 @@ describe('tanks in the browser', () => {
     await page.getByLabel('Ammonia (total)', { exact: true }).fill('0.5');
     await page.getByLabel('Nitrite', { exact: true }).fill('1');
     await page.getByLabel('Nitrate', { exact: true }).fill('10');
-    await page.getByTestId('preview-salinity').getByText(/Practical salinity 3\d\.\d/).waitFor();
-    await page.getByTestId('preview-ammonia').getByText(/Free ammonia \(the toxic part\)/).waitFor();
+    await page
+      .getByTestId('preview-salinity')
+      .getByText(/Practical salinity 3\d\.\d/)
+      .waitFor();
+    await page
+      .getByTestId('preview-ammonia')
+      .getByText(/Free ammonia \(the toxic part\)/)
+      .waitFor();
     await page.getByText('6 readings ready to save.').waitFor();
     await screenshot(page, 'water-test-form-phone');
     await expectAccessible(page);
@@ -140,7 +164,9 @@ describe('tanks in the browser', () => {
     await page.getByText(/Test saved: 6 readings/).waitFor();
     const ph = page.locator('figure[data-chart="pH"]');
     await ph.locator('figcaption').getByText('pH 8.12').waitFor();
-    expect(await ph.locator('[role=img]').getAttribute('aria-label')).toMatch(/37 readings, latest pH 8\.12 /);
+    expect(await ph.locator('[role=img]').getAttribute('aria-label')).toMatch(
+      /37 readings, latest pH 8\.12 /,
+    );
     await ph.scrollIntoViewIfNeeded();
     // Nothing may push the page sideways on a phone (wide tables scroll inside their own box).
     expect(await page.evaluate(() => document.documentElement.scrollWidth)).toBeLessThanOrEqual(390);
@@ -157,7 +183,10 @@ describe('tanks in the browser', () => {
     await expectAccessible(page);
     await page.getByRole('button', { name: 'Save water change' }).click();
     await page.getByText('Water change saved. It is on the timeline.').waitFor();
-    await page.locator('figure[data-chart="pH"] .recharts-reference-line').first().waitFor({ state: 'attached' });
+    await page
+      .locator('figure[data-chart="pH"] .recharts-reference-line')
+      .first()
+      .waitFor({ state: 'attached' });
     await page.getByText('43.7 L (20 %) · Salt water I mixed').waitFor();
 
     // A slip noticed later: the newest test is edited, and the chart follows.
@@ -170,30 +199,39 @@ describe('tanks in the browser', () => {
     await page.locator('figure[data-chart="pH"] figcaption').getByText('pH 8.2').waitFor();
   });
 
-  it('when the beginner imports 5,000 old tests, then a bar shows while they save in one transaction and every one arrives', { timeout: 240_000 }, async () => {
-    const { page } = await openSignedIn(browser, DESK, member.email, '/tanks');
-    await page.getByRole('link', { name: /Living-room community/ }).click();
-    await page.getByRole('link', { name: /Import a CSV log/ }).click();
-    await importFile(page, 'five-thousand.csv', bigLog());
-    await page.getByText('five-thousand.csv · 5,000 rows').waitFor();
-    await page.getByRole('button', { name: 'Check the rows' }).click();
-    await page.getByRole('button', { name: 'Save 5,000 tests' }).click();
-    // The upload is quick on loopback; what a person sees is the bar while the server saves everything at once.
-    await page.getByRole('progressbar').first().waitFor();
-    await page.getByText('Saved 5,000 tests from five-thousand.csv.').waitFor({ timeout: 120_000 });
-    const [{ count }] = await ds.query(`SELECT count(*)::int AS count FROM water_test w JOIN tank t ON t.id = w.tank_id WHERE t.name = 'Living-room community'`);
-    expect(count).toBe(5000);
-    await page.goto(`${inject('baseUrl')}/tanks`);
-    await page.getByText('Last test 2 hours ago').waitFor();
-    await screenshot(page, 'tank-list-desk');
-    await expectAccessible(page);
-  });
+  it(
+    'when the beginner imports 5,000 old tests, then a bar shows while they save in one transaction and every one arrives',
+    { timeout: 240_000 },
+    async () => {
+      const { page } = await openSignedIn(browser, DESK, member.email, '/tanks');
+      await page.getByRole('link', { name: /Living-room community/ }).click();
+      await page.getByRole('link', { name: /Import a CSV log/ }).click();
+      await importFile(page, 'five-thousand.csv', bigLog());
+      await page.getByText('five-thousand.csv · 5,000 rows').waitFor();
+      await page.getByRole('button', { name: 'Check the rows' }).click();
+      await page.getByRole('button', { name: 'Save 5,000 tests' }).click();
+      // The upload is quick on loopback; what a person sees is the bar while the server saves everything at once.
+      await page.getByRole('progressbar').first().waitFor();
+      await page.getByText('Saved 5,000 tests from five-thousand.csv.').waitFor({ timeout: 120_000 });
+      const [{ count }] = await ds.query(
+        `SELECT count(*)::int AS count FROM water_test w JOIN tank t ON t.id = w.tank_id WHERE t.name = 'Living-room community'`,
+      );
+      expect(count).toBe(5000);
+      await page.goto(`${inject('baseUrl')}/tanks`);
+      await page.getByText('Last test 2 hours ago').waitFor();
+      await screenshot(page, 'tank-list-desk');
+      await expectAccessible(page);
+    },
+  );
 
   it("when the mentor opens the list, then they see whose tanks they are; another member is told the tank isn't theirs to see", async () => {
     const mentor = await openSignedIn(browser, DESK, mentorEmail, '/tanks');
     await mentor.page.getByRole('heading', { name: 'Tanks' }).waitFor();
     await mentor.page.getByText('Kept by Bo Beginner').first().waitFor();
-    await mentor.page.getByText(/^Last test/).nth(1).waitFor();
+    await mentor.page
+      .getByText(/^Last test/)
+      .nth(1)
+      .waitFor();
     expect(await mentor.page.getByText('Kept by Bo Beginner').count()).toBe(2);
     await screenshot(mentor.page, 'tank-list-mentor-desk');
     await expectAccessible(mentor.page);

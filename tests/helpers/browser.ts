@@ -3,7 +3,13 @@ import AxeBuilder from '@axe-core/playwright';
 import type { Result } from 'axe-core';
 import { onTestFinished } from 'vitest';
 import { TEST_PASSWORD } from './factories';
-import { chromium, type Browser, type BrowserContext, type BrowserContextOptions, type Page } from 'playwright-core';
+import {
+  chromium,
+  type Browser,
+  type BrowserContext,
+  type BrowserContextOptions,
+  type Page,
+} from 'playwright-core';
 
 export const ARTIFACTS = 'tests/e2e/artifacts';
 
@@ -23,7 +29,12 @@ export async function launchBrowser(): Promise<Browser> {
   });
 }
 
-export const PHONE: BrowserContextOptions = { viewport: { width: 390, height: 844 }, deviceScaleFactor: 2, isMobile: true, hasTouch: true };
+export const PHONE: BrowserContextOptions = {
+  viewport: { width: 390, height: 844 },
+  deviceScaleFactor: 2,
+  isMobile: true,
+  hasTouch: true,
+};
 export const DESK: BrowserContextOptions = { viewport: { width: 1280, height: 800 } };
 
 /** The whole page by default; `{ fullPage: false }` for what is on screen, e.g. a modal dialog over the page. */
@@ -64,24 +75,38 @@ export function guardPage(page: Page, expected: ExpectedFailure[] = [VISITOR_CHE
   const echoed: string[] = [];
   page.on('pageerror', (e) => found.push(`uncaught: ${e.message}`));
   page.on('response', (res) => {
-    if (res.status() >= 400) failed.push({ url: res.url(), status: res.status(), what: `${res.request().method()} ${new URL(res.url()).pathname} answered ${res.status()}` });
+    if (res.status() >= 400)
+      failed.push({
+        url: res.url(),
+        status: res.status(),
+        what: `${res.request().method()} ${new URL(res.url()).pathname} answered ${res.status()}`,
+      });
   });
   page.on('requestfailed', (req) => {
     const reason = req.failure()?.errorText ?? 'failed';
-    if (reason !== 'net::ERR_ABORTED') failed.push({ url: req.url(), what: `${req.method()} ${new URL(req.url()).pathname} failed: ${reason}` });
+    if (reason !== 'net::ERR_ABORTED')
+      failed.push({
+        url: req.url(),
+        what: `${req.method()} ${new URL(req.url()).pathname} failed: ${reason}`,
+      });
   });
   page.on('console', (m) => {
     if (m.type() !== 'error') return;
     if (/^Failed to load resource/.test(m.text())) echoed.push(m.location().url);
     else found.push(`console: ${m.text()}`);
   });
-  const isExpected = (url: string, status?: number) => expected.some((e) => e.path.test(new URL(url).pathname) && (e.status === undefined || e.status === status));
+  const isExpected = (url: string, status?: number) =>
+    expected.some(
+      (e) => e.path.test(new URL(url).pathname) && (e.status === undefined || e.status === status),
+    );
   return {
     expectFailure: (failure) => void expected.push(failure),
     problems: () => [
       ...found,
       ...failed.filter((f) => !isExpected(f.url, f.status)).map((f) => f.what),
-      ...echoed.filter((url) => !failed.some((f) => f.url === url)).map((url) => `console: failed to load ${url}`),
+      ...echoed
+        .filter((url) => !failed.some((f) => f.url === url))
+        .map((url) => `console: failed to load ${url}`),
     ],
   };
 }
@@ -90,7 +115,10 @@ export function guardPage(page: Page, expected: ExpectedFailure[] = [VISITOR_CHE
  * A fresh context and page on `viewport`, guarded: when the test ends it fails on anything the guard saw,
  * and the context closes.
  */
-export async function openPage(browser: Browser, viewport: BrowserContextOptions): Promise<{ context: BrowserContext; page: Page; guard: PageGuard }> {
+export async function openPage(
+  browser: Browser,
+  viewport: BrowserContextOptions,
+): Promise<{ context: BrowserContext; page: Page; guard: PageGuard }> {
   const context = await browser.newContext(viewport);
   const page = await context.newPage();
   const guard = guardPage(page);
@@ -117,7 +145,9 @@ const describeViolation = (v: Result) =>
 export async function expectAccessible(page: Page, what = new URL(page.url()).pathname): Promise<void> {
   const failures: string[] = [];
   // Colours ease between schemes (transition-colors); judge the settled colours, not a frame half-way.
-  const still = await page.addStyleTag({ content: '*, *::before, *::after { transition: none !important; animation: none !important; }' });
+  const still = await page.addStyleTag({
+    content: '*, *::before, *::after { transition: none !important; animation: none !important; }',
+  });
   for (const colorScheme of ['light', 'dark'] as const) {
     await page.emulateMedia({ colorScheme });
     const { violations } = await new AxeBuilder({ page }).withTags(WCAG_21_AA).analyze();
@@ -129,7 +159,12 @@ export async function expectAccessible(page: Page, what = new URL(page.url()).pa
 }
 
 /** Opens `path` as a visitor and signs in on the form it is sent to, the way a person would. */
-export async function signInOn(page: Page, email: string, path: string, password = TEST_PASSWORD): Promise<void> {
+export async function signInOn(
+  page: Page,
+  email: string,
+  path: string,
+  password = TEST_PASSWORD,
+): Promise<void> {
   const { inject } = await import('vitest');
   await page.goto(`${inject('baseUrl')}${path}`);
   await page.getByLabel('E-mail').fill(email);
@@ -138,7 +173,12 @@ export async function signInOn(page: Page, email: string, path: string, password
 }
 
 /** A guarded page (see openPage) signed in as `email` and landed on `path`. */
-export async function openSignedIn(browser: Browser, viewport: BrowserContextOptions, email: string, path: string): Promise<{ context: BrowserContext; page: Page; guard: PageGuard }> {
+export async function openSignedIn(
+  browser: Browser,
+  viewport: BrowserContextOptions,
+  email: string,
+  path: string,
+): Promise<{ context: BrowserContext; page: Page; guard: PageGuard }> {
   const opened = await openPage(browser, viewport);
   await signInOn(opened.page, email, path);
   await opened.page.waitForURL((u) => u.pathname === path);

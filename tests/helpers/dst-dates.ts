@@ -10,8 +10,13 @@ export function lastSundayOfMarch(year: number): Date {
 }
 
 /** Thursdays a week apart either side of next year's change to summer time, as club wall-clock dates. */
-export function thursdaysAroundSpringChange(now = new Date()): { before: string; after: string; change: Date } {
+export function thursdaysAroundSpringChange(now = new Date()): {
+  before: string;
+  after: string;
+  change: Date;
+} {
   const change = lastSundayOfMarch(now.getUTCFullYear() + 1);
-  const day = (offsetDays: number) => new Date(change.getTime() + offsetDays * 86_400_000).toISOString().slice(0, 10);
+  const day = (offsetDays: number) =>
+    new Date(change.getTime() + offsetDays * 86_400_000).toISOString().slice(0, 10);
   return { before: day(-3), after: day(4), change };
 }

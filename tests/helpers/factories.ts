@@ -12,20 +12,49 @@ export const TEST_PASSWORD = 'correct horse battery';
 let cachedHash: Promise<string> | undefined;
 
 export async function makeClub(ds: DataSource, name = 'Test Club'): Promise<Club> {
-  return ds.getRepository(Club).save({ name, slug: `${name.toLowerCase().replace(/\W+/g, '-')}-${randomUUID().slice(0, 8)}` });
+  return ds
+    .getRepository(Club)
+    .save({ name, slug: `${name.toLowerCase().replace(/\W+/g, '-')}-${randomUUID().slice(0, 8)}` });
 }
 
-export async function makeUser(ds: DataSource, name: string, email = `${name.toLowerCase().replace(/\W+/g, '.')}.${randomUUID().slice(0, 6)}@test.example`): Promise<User> {
+export async function makeUser(
+  ds: DataSource,
+  name: string,
+  email = `${name.toLowerCase().replace(/\W+/g, '.')}.${randomUUID().slice(0, 6)}@test.example`,
+): Promise<User> {
   const passwordHash = await (cachedHash ??= hashPassword(TEST_PASSWORD));
   return ds.getRepository(User).save({ email, displayName: name, passwordHash, disabledAt: null });
 }
 
-export async function makeMember(ds: DataSource, club: Club, name: string, role: Role = 'member', status: MembershipStatus = 'active') {
+export async function makeMember(
+  ds: DataSource,
+  club: Club,
+  name: string,
+  role: Role = 'member',
+  status: MembershipStatus = 'active',
+) {
   const user = await makeUser(ds, name);
-  const membership = await ds.getRepository(Membership).save({ clubId: club.id, userId: user.id, role, status, mentorCapacity: null });
+  const membership = await ds
+    .getRepository(Membership)
+    .save({ clubId: club.id, userId: user.id, role, status, mentorCapacity: null });
   return { user, membership };
 }
 
-export async function assignMentor(ds: DataSource, club: Club, mentor: User, mentee: User, endedAt: Date | null = null) {
-  return ds.getRepository(MentorAssignment).save({ clubId: club.id, mentorId: mentor.id, menteeId: mentee.id, startedAt: new Date(Date.now() - 90 * DAY_MS), endedAt, createdById: null });
+export async function assignMentor(
+  ds: DataSource,
+  club: Club,
+  mentor: User,
+  mentee: User,
+  endedAt: Date | null = null,
+) {
+  return ds
+    .getRepository(MentorAssignment)
+    .save({
+      clubId: club.id,
+      mentorId: mentor.id,
+      menteeId: mentee.id,
+      startedAt: new Date(Date.now() - 90 * DAY_MS),
+      endedAt,
+      createdById: null,
+    });
 }

@@ -39,7 +39,12 @@ export class Client {
     return this.csrf;
   }
 
-  async send(method: Method, path: string, body?: unknown, opts: { csrf?: boolean } = {}): Promise<request.Response> {
+  async send(
+    method: Method,
+    path: string,
+    body?: unknown,
+    opts: { csrf?: boolean } = {},
+  ): Promise<request.Response> {
     const unsafe = method !== 'get';
     const token = unsafe && opts.csrf !== false ? await this.csrfToken() : undefined;
     let req = request(this.app)[method](path).set('Cookie', this.cookie);
@@ -57,11 +62,19 @@ export class Client {
   delete = (path: string) => this.send('delete', path);
 
   /** A multipart POST, as a browser form sends files (with the CSRF header, like every unsafe request). */
-  async upload(path: string, files: UploadFile[], fields: Record<string, string> = {}): Promise<request.Response> {
+  async upload(
+    path: string,
+    files: UploadFile[],
+    fields: Record<string, string> = {},
+  ): Promise<request.Response> {
     const token = await this.csrfToken(); // first: fetching it may set the session cookie
     let req = request(this.app).post(path).set('Cookie', this.cookie).set('X-CSRF-Token', token);
     for (const [name, value] of Object.entries(fields)) req = req.field(name, value);
-    for (const f of files) req = req.attach(f.field ?? 'photos', f.data, { filename: f.name, contentType: f.type ?? 'application/octet-stream' });
+    for (const f of files)
+      req = req.attach(f.field ?? 'photos', f.data, {
+        filename: f.name,
+        contentType: f.type ?? 'application/octet-stream',
+      });
     const res = await req;
     this.remember(res);
     return res;
@@ -72,9 +85,14 @@ export class Client {
   }
 }
 
-export async function signedIn(app: Express | string, email: string, password = TEST_PASSWORD): Promise<Client> {
+export async function signedIn(
+  app: Express | string,
+  email: string,
+  password = TEST_PASSWORD,
+): Promise<Client> {
   const c = new Client(app);
   const res = await c.signIn(email, password);
-  if (res.status !== 200) throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
+  if (res.status !== 200)
+    throw new Error(`sign-in as ${email} failed: ${res.status} ${JSON.stringify(res.body)}`);
   return c;
 }

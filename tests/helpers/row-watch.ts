@@ -21,7 +21,9 @@ export async function watchRows(ds: DataSource, options: { ignore: string[] }): 
   );
   await ds.query(`DROP SCHEMA IF EXISTS ${SCHEMA} CASCADE`);
   await ds.query(`CREATE SCHEMA ${SCHEMA}`);
-  await ds.query(`CREATE TABLE ${SCHEMA}.change (id bigserial PRIMARY KEY, table_name text NOT NULL, op text NOT NULL)`);
+  await ds.query(
+    `CREATE TABLE ${SCHEMA}.change (id bigserial PRIMARY KEY, table_name text NOT NULL, op text NOT NULL)`,
+  );
   await ds.query(`
     CREATE FUNCTION ${SCHEMA}.log() RETURNS trigger LANGUAGE plpgsql AS $$
     BEGIN
@@ -29,7 +31,9 @@ export async function watchRows(ds: DataSource, options: { ignore: string[] }): 
       RETURN NULL;
     END $$`);
   for (const { tablename } of tables) {
-    await ds.query(`CREATE TRIGGER row_watch AFTER INSERT OR UPDATE OR DELETE ON public."${tablename}" FOR EACH ROW EXECUTE FUNCTION ${SCHEMA}.log()`);
+    await ds.query(
+      `CREATE TRIGGER row_watch AFTER INSERT OR UPDATE OR DELETE ON public."${tablename}" FOR EACH ROW EXECUTE FUNCTION ${SCHEMA}.log()`,
+    );
   }
   let seen = 0;
   return {

@@ -31,14 +31,31 @@ export function testConfig(overrides: Record<string, string> = {}): Config {
 }
 
 /** The real app on the real test database, without a port; photos go to a temporary folder removed on close. */
-export async function createTestApp(overrides: Record<string, string> = {}, options: { logTo?: DestinationStream } = {}): Promise<TestApp> {
+export async function createTestApp(
+  overrides: Record<string, string> = {},
+  options: { logTo?: DestinationStream } = {},
+): Promise<TestApp> {
   const uploadsDir = mkdtempSync(join(tmpdir(), 'shoalwise-uploads-'));
   const config = testConfig({ UPLOADS_DIR: uploadsDir, ...overrides });
   const logger = createLogger(config, options.logTo);
   const dataSource = await openDataSource(config.databaseUrl, logger);
-  const sessionPool = guardPool(new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }), logger, 'sessions');
-  const mail = await startMail(config, dataSource, logger, { pollingIntervalSeconds: 0.5, retryDelaySeconds: 1 });
-  const { app, api, deps } = createApp({ config, dataSource, sessionPool, logger, mailer: mail.mailer, hub: new RealtimeHub() });
+  const sessionPool = guardPool(
+    new pg.Pool({ connectionString: config.databaseUrl, ...POOL_DEFAULTS, max: 3 }),
+    logger,
+    'sessions',
+  );
+  const mail = await startMail(config, dataSource, logger, {
+    pollingIntervalSeconds: 0.5,
+    retryDelaySeconds: 1,
+  });
+  const { app, api, deps } = createApp({
+    config,
+    dataSource,
+    sessionPool,
+    logger,
+    mailer: mail.mailer,
+    hub: new RealtimeHub(),
+  });
   return {
     app,
     api,

@@ -5,10 +5,13 @@ import pg from 'pg';
  * own (`…_e2e_test`): vitest runs projects side by side, and the API suites empty their tables between tests.
  */
 export function testDatabaseUrl(kind: 'api' | 'e2e' = 'api'): string {
-  const base = process.env.DATABASE_URL ?? `postgres://shoalwise@127.0.0.1:${process.env.PGPORT ?? 5487}/shoalwise_test`;
+  const base =
+    process.env.DATABASE_URL ?? `postgres://shoalwise@127.0.0.1:${process.env.PGPORT ?? 5487}/shoalwise_test`;
   const url = new URL(base);
   if (!/_test$/.test(url.pathname)) {
-    throw new Error(`Refusing to run tests against ${base}: the database name must end in _test (./scripts/test sets it up).`);
+    throw new Error(
+      `Refusing to run tests against ${base}: the database name must end in _test (./scripts/test sets it up).`,
+    );
   }
   if (kind === 'e2e') url.pathname = url.pathname.replace(/_test$/, '_e2e_test');
   return url.toString();

@@ -19,11 +19,24 @@ export function Component() {
   const editable = d.source === 'club' && ability.can('update', asSubject('CareProfile', { clubId }));
   return (
     <>
-      <PageHeader title={d.profile.name} subtitle={d.source === 'club' ? `Club copy, version ${d.profile.version}, based on ${d.basedOnKey}` : 'Shipped with Shoalwise (make a club copy to adjust it)'} />
+      <PageHeader
+        title={d.profile.name}
+        subtitle={
+          d.source === 'club'
+            ? `Club copy, version ${d.profile.version}, based on ${d.basedOnKey}`
+            : 'Shipped with Shoalwise (make a club copy to adjust it)'
+        }
+      />
       <div className="space-y-4">
         <Card>
           {/* A fresh editor per version, so a save shows the new numbers as the starting point. */}
-          <ProfileRangesEditor key={d.profile.version} clubId={clubId} profile={d.profile} id={d.id} editable={editable} />
+          <ProfileRangesEditor
+            key={d.profile.version}
+            clubId={clubId}
+            profile={d.profile}
+            id={d.id}
+            editable={editable}
+          />
         </Card>
         {d.history.length ? (
           <Card>
@@ -31,11 +44,15 @@ export function Component() {
             <ol className="mt-2 space-y-3">
               {d.history.map((h) => (
                 <li key={h.version}>
-                  <p className="font-bold text-ink">Version {h.version} · {formatDate(h.changedAt)}</p>
+                  <p className="font-bold text-ink">
+                    Version {h.version} · {formatDate(h.changedAt)}
+                  </p>
                   <p className="text-sm text-ink-soft">{h.note}</p>
                   {h.changes.length ? (
                     <ul className="list-disc pl-5 text-sm text-ink-muted">
-                      {h.changes.map((c) => <li key={c}>{c}</li>)}
+                      {h.changes.map((c) => (
+                        <li key={c}>{c}</li>
+                      ))}
                     </ul>
                   ) : null}
                 </li>

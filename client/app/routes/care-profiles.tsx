@@ -23,16 +23,28 @@ export function Component() {
   const canCopy = ability.can('create', asSubject('CareProfile', { clubId }));
   return (
     <>
-      <PageHeader title="Care profiles" subtitle="The ranges each kind of tank is judged by. Shipped ones cite their sources; club copies can be adjusted." />
-      {profiles.isPending ? <Loading label="Loading…" /> : profiles.isError ? <Notice tone="error">{profiles.error.message}</Notice> : (
+      <PageHeader
+        title="Care profiles"
+        subtitle="The ranges each kind of tank is judged by. Shipped ones cite their sources; club copies can be adjusted."
+      />
+      {profiles.isPending ? (
+        <Loading label="Loading…" />
+      ) : profiles.isError ? (
+        <Notice tone="error">{profiles.error.message}</Notice>
+      ) : (
         <div className="space-y-4">
           <Card>
             <ul className="divide-y divide-line">
               {profiles.data.profiles.map((p) => (
                 <li key={p.key} className="flex flex-wrap items-center justify-between gap-2 py-3">
                   <div>
-                    <Link to={`/club/profiles/${p.key}`} className="font-bold text-ink underline">{p.name}</Link>
-                    <p className="text-sm text-ink-muted">{p.source === 'club' ? `Club copy, version ${p.version}` : 'Shipped with Shoalwise'} · for {p.animals}</p>
+                    <Link to={`/club/profiles/${p.key}`} className="font-bold text-ink underline">
+                      {p.name}
+                    </Link>
+                    <p className="text-sm text-ink-muted">
+                      {p.source === 'club' ? `Club copy, version ${p.version}` : 'Shipped with Shoalwise'} ·
+                      for {p.animals}
+                    </p>
                   </div>
                 </li>
               ))}
@@ -41,24 +53,44 @@ export function Component() {
           {canCopy ? (
             <Card>
               <h2 className="text-lg font-extrabold text-ink">Make a club copy</h2>
-              <p className="text-sm text-ink-muted">Start from a profile and adjust its ranges for your club. Tanks keep following the original until their keeper picks the copy.</p>
+              <p className="text-sm text-ink-muted">
+                Start from a profile and adjust its ranges for your club. Tanks keep following the original
+                until their keeper picks the copy.
+              </p>
               <div className="mt-3 grid gap-3 sm:grid-cols-[1fr_1fr_auto] sm:items-end">
                 <SelectField label="Start from" value={basedOn} onChange={(e) => setBasedOn(e.target.value)}>
                   <option value="">Choose…</option>
-                  {profiles.data.profiles.map((p) => <option key={p.key} value={p.key}>{p.name}</option>)}
+                  {profiles.data.profiles.map((p) => (
+                    <option key={p.key} value={p.key}>
+                      {p.name}
+                    </option>
+                  ))}
                 </SelectField>
                 <TextField label="Name of the copy" value={name} onChange={(e) => setName(e.target.value)} />
-                <Button busy={copy.isPending} onClick={async () => {
-                  setError(undefined);
-                  try {
-                    await copy.mutateAsync({ basedOn, name });
-                    setName('');
-                  } catch (e) {
-                    setError(e instanceof ApiError ? [e.message, ...e.issues.map((i) => i.message)].join(' ') : 'Could not copy.');
-                  }
-                }}>Copy</Button>
+                <Button
+                  busy={copy.isPending}
+                  onClick={async () => {
+                    setError(undefined);
+                    try {
+                      await copy.mutateAsync({ basedOn, name });
+                      setName('');
+                    } catch (e) {
+                      setError(
+                        e instanceof ApiError
+                          ? [e.message, ...e.issues.map((i) => i.message)].join(' ')
+                          : 'Could not copy.',
+                      );
+                    }
+                  }}
+                >
+                  Copy
+                </Button>
               </div>
-              {error ? <div className="mt-3"><Notice tone="error">{error}</Notice></div> : null}
+              {error ? (
+                <div className="mt-3">
+                  <Notice tone="error">{error}</Notice>
+                </div>
+              ) : null}
             </Card>
           ) : null}
         </div>

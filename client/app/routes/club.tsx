@@ -19,16 +19,25 @@ export function Component() {
       <PageHeader
         title={activeClub.clubName}
         subtitle={isAdmin ? 'Invite people, pair mentors with beginners.' : 'The people of your club.'}
-        actions={<ButtonLink variant="secondary" to="/club/profiles">Care profiles</ButtonLink>}
+        actions={
+          <ButtonLink variant="secondary" to="/club/profiles">
+            Care profiles
+          </ButtonLink>
+        }
       />
       <div className="space-y-5">
         <Can<AppAbility> I="create" this={asSubject('Invite', { clubId: activeClub.clubId })}>
           <InvitePanel clubId={activeClub.clubId} />
         </Can>
-        <Can<AppAbility> I="update" this={asSubject('MentorRequest', { clubId: activeClub.clubId, requesterId: '' })}>
+        <Can<AppAbility>
+          I="update"
+          this={asSubject('MentorRequest', { clubId: activeClub.clubId, requesterId: '' })}
+        >
           <MentorRequestsPanel clubId={activeClub.clubId} />
         </Can>
-        {activeClub.role !== 'member' ? <MentorCapacityCard clubId={activeClub.clubId} userId={me.user.id} /> : null}
+        {activeClub.role !== 'member' ? (
+          <MentorCapacityCard clubId={activeClub.clubId} userId={me.user.id} />
+        ) : null}
         <MembersPanel clubId={activeClub.clubId} isAdmin={isAdmin} />
       </div>
     </>

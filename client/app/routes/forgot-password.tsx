@@ -6,7 +6,11 @@ export function Component() {
   return (
     <AuthCard title="Forgot your password?" subtitle="We'll e-mail you a link to choose a new one.">
       <ForgotPasswordForm />
-      <p className="mt-4 text-center text-sm"><Link to="/sign-in" className="font-bold text-link underline">Back to sign in</Link></p>
+      <p className="mt-4 text-center text-sm">
+        <Link to="/sign-in" className="font-bold text-link underline">
+          Back to sign in
+        </Link>
+      </p>
     </AuthCard>
   );
 }

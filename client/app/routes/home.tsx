@@ -44,16 +44,26 @@ export function Component() {
   });
   const markRead = useMarkRead();
   const openQuestion = (q: HomeQuestion) => {
-    for (const id of q.unreadNotificationIds) markRead.mutate(id, { onSettled: () => void qc.invalidateQueries({ queryKey: homeKeys.club(clubId) }) });
+    for (const id of q.unreadNotificationIds)
+      markRead.mutate(id, {
+        onSettled: () => void qc.invalidateQueries({ queryKey: homeKeys.club(clubId) }),
+      });
   };
 
   const first = me.user.displayName.split(' ')[0];
-  const header = <PageHeader title={`Hello, ${first}`} subtitle={activeClub ? `${activeClub.clubName} · ${ROLE_LABELS[activeClub.role]}` : undefined} />;
+  const header = (
+    <PageHeader
+      title={`Hello, ${first}`}
+      subtitle={activeClub ? `${activeClub.clubName} · ${ROLE_LABELS[activeClub.role]}` : undefined}
+    />
+  );
   if (!activeClub) {
     return (
       <>
         {header}
-        <Notice tone="warning">You are not an active member of any club right now. Ask a club admin for an invitation.</Notice>
+        <Notice tone="warning">
+          You are not an active member of any club right now. Ask a club admin for an invitation.
+        </Notice>
       </>
     );
   }
@@ -65,10 +75,29 @@ export function Component() {
       wholeClub={isAdmin}
       deskMax={HOME_DESK_TANKS_MAX}
       desk={{ data: desk.data, error: desk.error?.message }}
-      requests={isAdmin ? { data: requests.data && { open: requests.data.requests.map((r) => ({ id: r.id, name: r.requester.displayName, at: r.createdAt })) }, error: requests.error?.message } : undefined}
+      requests={
+        isAdmin
+          ? {
+              data: requests.data && {
+                open: requests.data.requests.map((r) => ({
+                  id: r.id,
+                  name: r.requester.displayName,
+                  at: r.createdAt,
+                })),
+              },
+              error: requests.error?.message,
+            }
+          : undefined
+      }
       invites={
         isAdmin
-          ? { data: invites.data && { waiting: invites.data.invites.filter((i) => i.state === 'pending').length, expired: invites.data.invites.filter((i) => i.state === 'expired').length }, error: invites.error?.message }
+          ? {
+              data: invites.data && {
+                waiting: invites.data.invites.filter((i) => i.state === 'pending').length,
+                expired: invites.data.invites.filter((i) => i.state === 'expired').length,
+              },
+              error: invites.error?.message,
+            }
           : undefined
       }
     />
@@ -81,10 +110,17 @@ export function Component() {
         {work}
         <section aria-labelledby="today-heading">
           <div className="mb-2 flex items-baseline justify-between gap-2">
-            <h2 id="today-heading" className={`text-xl font-extrabold text-ink ${home.data && !tanks.length && !watchesOthers ? 'sr-only' : ''}`}>
+            <h2
+              id="today-heading"
+              className={`text-xl font-extrabold text-ink ${home.data && !tanks.length && !watchesOthers ? 'sr-only' : ''}`}
+            >
               {watchesOthers ? 'Your own tanks' : 'Your tanks today'}
             </h2>
-            {tanks.length ? <Link to="/tanks" className="text-sm font-bold text-link underline">All my tanks</Link> : null}
+            {tanks.length ? (
+              <Link to="/tanks" className="text-sm font-bold text-link underline">
+                All my tanks
+              </Link>
+            ) : null}
           </div>
           {home.isPending ? (
             <HomeSkeleton />
@@ -92,18 +128,33 @@ export function Component() {
             <Notice tone="error">Could not load your tanks: {home.error.message}</Notice>
           ) : tanks.length ? (
             <ul className="space-y-4" aria-label="Your tanks">
-              {tanks.map((t) => <TodayTankCard key={t.id} tank={t} now={now} timeZone={me.user.timeZone} prefs={me.user} />)}
+              {tanks.map((t) => (
+                <TodayTankCard key={t.id} tank={t} now={now} timeZone={me.user.timeZone} prefs={me.user} />
+              ))}
             </ul>
           ) : watchesOthers ? (
             <p className="text-sm text-ink-muted">
-              You keep no tank in this club yet.{canCreate ? <> <Link to="/tanks/new" className="font-bold underline">Add one</Link> to log its tests here.</> : null}
+              You keep no tank in this club yet.
+              {canCreate ? (
+                <>
+                  {' '}
+                  <Link to="/tanks/new" className="font-bold underline">
+                    Add one
+                  </Link>{' '}
+                  to log its tests here.
+                </>
+              ) : null}
             </p>
           ) : (
             <FirstTankStart canCreate={canCreate} />
           )}
         </section>
         {home.data && (home.data.questions.length || home.data.goodNews.length || tanks.length) ? (
-          <MentorWord questions={home.data.questions} goodNews={home.data.goodNews} onOpenQuestion={openQuestion} />
+          <MentorWord
+            questions={home.data.questions}
+            goodNews={home.data.goodNews}
+            onOpenQuestion={openQuestion}
+          />
         ) : null}
         {role === 'member' ? <AskForMentorCard key={clubId} clubId={clubId} userId={me.user.id} /> : null}
       </div>

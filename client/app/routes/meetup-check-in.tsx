@@ -20,12 +20,27 @@ export function Component() {
   if (meetup.isPending) return <PageSkeleton label="Loading the meetup…" />;
   const m = meetup.data;
   const subject = asSubject('Meetup', { clubId: m.clubId, hostId: m.host?.userId ?? null });
-  if (!ability.can('checkIn', subject)) return <Notice tone="warning">Club admins and whoever runs the meetup tick people in.</Notice>;
+  if (!ability.can('checkIn', subject))
+    return <Notice tone="warning">Club admins and whoever runs the meetup tick people in.</Notice>;
   const records = m.kind === 'clinic' && ability.can('recordResults', subject);
   return (
     <>
-      <PageHeader title="Check-in" subtitle={`${m.title} · ${m.when}`} actions={<ButtonLink variant="ghost" to={`/meetups/${m.id}`}>← Back to the meetup</ButtonLink>} />
-      <AttendanceList clubId={clubId} meetupId={m.id} renderExtra={records ? (row) => <ClinicResultForm clubId={clubId} meetupId={m.id} row={row} /> : undefined} />
+      <PageHeader
+        title="Check-in"
+        subtitle={`${m.title} · ${m.when}`}
+        actions={
+          <ButtonLink variant="ghost" to={`/meetups/${m.id}`}>
+            ← Back to the meetup
+          </ButtonLink>
+        }
+      />
+      <AttendanceList
+        clubId={clubId}
+        meetupId={m.id}
+        renderExtra={
+          records ? (row) => <ClinicResultForm clubId={clubId} meetupId={m.id} row={row} /> : undefined
+        }
+      />
     </>
   );
 }

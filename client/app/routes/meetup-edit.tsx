@@ -23,7 +23,8 @@ export function Component() {
   if (meetup.isError) throw meetup.error;
   if (!initial || !meetup.data || members.isPending) return <PageSkeleton label="Loading the meetup…" />;
   const m = meetup.data;
-  if (m.status === 'cancelled') return <Notice tone="warning">This meetup was cancelled; it can no longer be changed.</Notice>;
+  if (m.status === 'cancelled')
+    return <Notice tone="warning">This meetup was cancelled; it can no longer be changed.</Notice>;
   return (
     <>
       <PageHeader title="Change the meetup" subtitle={m.title} />

@@ -23,9 +23,13 @@ export function Component() {
   const navigate = useNavigate();
   const timeZone = club.data?.timeZone ?? 'UTC';
   const [openedAt] = useState(() => Date.now());
-  const initial = useMemo(() => blankMeetup(utcToClubTime(new Date(openedAt + WEEK), timeZone)), [openedAt, timeZone]);
+  const initial = useMemo(
+    () => blankMeetup(utcToClubTime(new Date(openedAt + WEEK), timeZone)),
+    [openedAt, timeZone],
+  );
   if (!activeClub) return <Notice tone="warning">You are not an active member of a club.</Notice>;
-  if (!ability.can('create', asSubject('Meetup', { clubId }))) return <Notice tone="warning">Club admins plan meetups.</Notice>;
+  if (!ability.can('create', asSubject('Meetup', { clubId })))
+    return <Notice tone="warning">Club admins plan meetups.</Notice>;
   if (club.isPending || members.isPending) return <PageSkeleton label="Loading…" />;
   return (
     <>

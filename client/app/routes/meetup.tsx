@@ -14,7 +14,6 @@ import { MeetupRouteError } from '@client/features/meetups/components/meetup-rou
 import { RsvpPanel } from '@client/features/meetups/components/rsvp-panel';
 import { useTankList } from '@client/features/tanks/api/tanks';
 
-
 export function Component() {
   const { meetupId = '' } = useParams();
   const { me, activeClub, ability } = useSession();
@@ -29,7 +28,9 @@ export function Component() {
   const subject = asSubject('Meetup', { clubId: m.clubId, hostId: m.host?.userId ?? null });
   const manages = ability.can('update', subject);
   const checksIn = ability.can('checkIn', subject);
-  const myTanks = (tanks.data?.tanks ?? []).filter((t) => t.owner.id === me.user.id).map((t) => ({ id: t.id, name: t.name }));
+  const myTanks = (tanks.data?.tanks ?? [])
+    .filter((t) => t.owner.id === me.user.id)
+    .map((t) => ({ id: t.id, name: t.name }));
 
   return (
     <>
@@ -40,34 +41,82 @@ export function Component() {
           m.status === 'scheduled' && (manages || checksIn) ? (
             <>
               {checksIn ? <ButtonLink to={`/meetups/${m.id}/check-in`}>Check people in</ButtonLink> : null}
-              {manages ? <ButtonLink variant="secondary" to={`/meetups/${m.id}/edit`}>Edit</ButtonLink> : null}
+              {manages ? (
+                <ButtonLink variant="secondary" to={`/meetups/${m.id}/edit`}>
+                  Edit
+                </ButtonLink>
+              ) : null}
             </>
           ) : undefined
         }
       />
-      {m.status === 'cancelled' ? <div className="mb-4"><Notice tone="warning">Cancelled: {m.cancelReason}</Notice></div> : null}
+      {m.status === 'cancelled' ? (
+        <div className="mb-4">
+          <Notice tone="warning">Cancelled: {m.cancelReason}</Notice>
+        </div>
+      ) : null}
       <div className="grid gap-4 lg:grid-cols-[minmax(0,1fr)_minmax(0,24rem)]">
         <div className="space-y-4">
           <Card>
             <dl className="grid gap-3 sm:grid-cols-[8rem_1fr]">
               <dt className="font-bold text-ink-soft">When</dt>
-              <dd>{m.when}<span className="block text-sm text-ink-muted">Club time ({m.timeZone})</span></dd>
+              <dd>
+                {m.when}
+                <span className="block text-sm text-ink-muted">Club time ({m.timeZone})</span>
+              </dd>
               <dt className="font-bold text-ink-soft">{m.kind === 'online' ? 'Join' : 'Where'}</dt>
               <dd>
-                {m.kind === 'online' && m.onlineUrl ? <a href={m.onlineUrl} rel="noopener noreferrer nofollow" target="_blank" className="font-bold text-link underline">{m.onlineUrl}</a> : m.placeText}
-                {m.mapUrl ? <a href={m.mapUrl} rel="noopener noreferrer nofollow" target="_blank" className="ml-2 font-bold text-link underline">Map</a> : null}
+                {m.kind === 'online' && m.onlineUrl ? (
+                  <a
+                    href={m.onlineUrl}
+                    rel="noopener noreferrer nofollow"
+                    target="_blank"
+                    className="font-bold text-link underline"
+                  >
+                    {m.onlineUrl}
+                  </a>
+                ) : (
+                  m.placeText
+                )}
+                {m.mapUrl ? (
+                  <a
+                    href={m.mapUrl}
+                    rel="noopener noreferrer nofollow"
+                    target="_blank"
+                    className="ml-2 font-bold text-link underline"
+                  >
+                    Map
+                  </a>
+                ) : null}
               </dd>
-              {m.host ? (<><dt className="font-bold text-ink-soft">Run by</dt><dd>{m.host.displayName}</dd></>) : null}
+              {m.host ? (
+                <>
+                  <dt className="font-bold text-ink-soft">Run by</dt>
+                  <dd>{m.host.displayName}</dd>
+                </>
+              ) : null}
             </dl>
             {m.description ? <p className="mt-4 whitespace-pre-line text-ink">{m.description}</p> : null}
-            <a href={`/api/clubs/${m.clubId}/meetups/${m.id}/calendar.ics`} className="mt-4 inline-flex min-h-touch items-center font-bold text-link underline">Add to my calendar (.ics)</a>
+            <a
+              href={`/api/clubs/${m.clubId}/meetups/${m.id}/calendar.ics`}
+              className="mt-4 inline-flex min-h-touch items-center font-bold text-link underline"
+            >
+              Add to my calendar (.ics)
+            </a>
           </Card>
           {m.kind === 'swap' ? <CautionFor kind="buyingAnimals" title="Swapping and buying animals" /> : null}
           {m.kind === 'tour' ? <CautionFor kind="electricity" title="Around other people’s tanks" /> : null}
         </div>
         <div className="space-y-4">
           <RsvpPanel clubId={clubId} meetup={m} />
-          {isClinic ? <ClinicBooking key={`${m.mine?.status}-${m.mine?.slotStartsAt}`} clubId={clubId} meetup={m} tanks={myTanks} /> : null}
+          {isClinic ? (
+            <ClinicBooking
+              key={`${m.mine?.status}-${m.mine?.slotStartsAt}`}
+              clubId={clubId}
+              meetup={m}
+              tanks={myTanks}
+            />
+          ) : null}
           {manages && m.status === 'scheduled' ? <CancelMeetup clubId={clubId} meetup={m} /> : null}
         </div>
       </div>

@@ -15,7 +15,6 @@ const TABS: { value: MeetupListWhen; label: string }[] = [
   { value: 'past', label: 'Past' },
 ];
 
-
 export function Component() {
   const { me, activeClub, ability } = useSession();
   const [when, setWhen] = useState<MeetupListWhen>('upcoming');
@@ -31,7 +30,9 @@ export function Component() {
       />
       <div className="mb-4 flex flex-wrap items-center justify-between gap-3">
         <Segmented label="Which meetups" options={TABS} value={when} onChange={setWhen} inline />
-        <ButtonLink variant="ghost" to={`/meetups/attendance/${me.user.id}`}>My attendance</ButtonLink>
+        <ButtonLink variant="ghost" to={`/meetups/attendance/${me.user.id}`}>
+          My attendance
+        </ButtonLink>
       </div>
       <div className="grid gap-6 lg:grid-cols-[minmax(0,1fr)_minmax(0,22rem)]">
         <MeetupList clubId={clubId} when={when} />

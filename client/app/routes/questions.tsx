@@ -29,14 +29,31 @@ export function Component() {
     <>
       <PageHeader
         title={answers ? 'Questions' : 'My questions'}
-        subtitle={answers ? 'What your mentees and the club’s keepers asked about their readings.' : 'Ask from any water test or observation on your tank’s page.'}
+        subtitle={
+          answers
+            ? 'What your mentees and the club’s keepers asked about their readings.'
+            : 'Ask from any water test or observation on your tank’s page.'
+        }
       />
-      <Segmented label="Which questions" options={TABS} value={status} onChange={setStatus} inline className="mb-4" />
+      <Segmented
+        label="Which questions"
+        options={TABS}
+        value={status}
+        onChange={setStatus}
+        inline
+        className="mb-4"
+      />
       <QuestionList
         clubId={clubId}
         status={status}
         showAsker={answers}
-        empty={status === 'open' ? 'No open questions. When someone asks about a reading, it shows here.' : answers ? 'No questions yet.' : 'You have not asked anything yet. Open a tank and press “Ask about this” beside a test.'}
+        empty={
+          status === 'open'
+            ? 'No open questions. When someone asks about a reading, it shows here.'
+            : answers
+              ? 'No questions yet.'
+              : 'You have not asked anything yet. Open a tank and press “Ask about this” beside a test.'
+        }
       />
     </>
   );

@@ -8,7 +8,8 @@ import { newEventDraft, POSTED_KINDS, type PostedKind } from '@client/features/r
 import { TankLoadError, TankRouteError } from '@client/features/tanks/components/tank-route-error';
 import { useTankRoute } from '../use-tank-route';
 
-const isPosted = (k: string | null): k is PostedKind => (POSTED_KINDS as readonly (string | null)[]).includes(k);
+const isPosted = (k: string | null): k is PostedKind =>
+  (POSTED_KINDS as readonly (string | null)[]).includes(k);
 
 export function Component() {
   const [params, setParams] = useSearchParams();
@@ -39,7 +40,11 @@ export function Component() {
           onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })}
         />
       ) : (
-        <Notice tone="warning">{t.archivedAt ? 'This tank is archived: restore it from the tank page to log new entries.' : 'Only the keeper of this tank can add entries to it.'}</Notice>
+        <Notice tone="warning">
+          {t.archivedAt
+            ? 'This tank is archived: restore it from the tank page to log new entries.'
+            : 'Only the keeper of this tank can add entries to it.'}
+        </Notice>
       )}
     </>
   );

@@ -18,7 +18,10 @@ export function Component() {
         {allowed ? (
           <ImportFlow clubId={clubId} tankId={tankId} prefs={me.user} timeZone={me.user.timeZone} />
         ) : (
-          <Notice tone="warning">Only the keeper of this tank can import tests into it{t.archivedAt ? ', and not while it is archived' : ''}.</Notice>
+          <Notice tone="warning">
+            Only the keeper of this tank can import tests into it
+            {t.archivedAt ? ', and not while it is archived' : ''}.
+          </Notice>
         )}
       </Card>
     </>

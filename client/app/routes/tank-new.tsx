@@ -14,7 +14,10 @@ export function Component() {
   const { me, activeClub, ability } = useSession();
   const clubId = activeClub?.clubId ?? '';
   const navigate = useNavigate();
-  const initial = useMemo(() => newTankDraft(me.user, SYSTEM_TYPES[0], defaultProfileFor(SYSTEM_TYPES[0]).key), [me.user]);
+  const initial = useMemo(
+    () => newTankDraft(me.user, SYSTEM_TYPES[0], defaultProfileFor(SYSTEM_TYPES[0]).key),
+    [me.user],
+  );
   if (!activeClub || !ability.can('create', asSubject('Tank', { clubId, ownerId: me.user.id }))) {
     return <Notice tone="warning">You need to be an active member of a club to add a tank.</Notice>;
   }
@@ -27,7 +30,17 @@ export function Component() {
           prefs={me.user}
           initial={initial}
           submitLabel="Add the tank"
-          onSaved={(tank) => navigate(`/tanks/${tank.id}`, { replace: true, state: { saved: { message: 'Tank added. Log your first water test whenever you are ready.', warnings: [] } } })}
+          onSaved={(tank) =>
+            navigate(`/tanks/${tank.id}`, {
+              replace: true,
+              state: {
+                saved: {
+                  message: 'Tank added. Log your first water test whenever you are ready.',
+                  warnings: [],
+                },
+              },
+            })
+          }
         />
       </Card>
     </>

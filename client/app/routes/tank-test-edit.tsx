@@ -23,11 +23,15 @@ export function Component() {
   const navigate = useNavigate();
   const [confirming, setConfirming] = useState(false);
   const memory = useMemo(() => loadEntryMemory(tankId), [tankId]);
-  const initial = useMemo(() => (test.data ? draftFromTest(test.data.waterTest, me.user) : undefined), [test.data, me.user]);
+  const initial = useMemo(
+    () => (test.data ? draftFromTest(test.data.waterTest, me.user) : undefined),
+    [test.data, me.user],
+  );
 
   if (tank.isError) return <TankLoadError error={tank.error} />;
   if (test.isError) return <TankLoadError error={test.error} />;
-  if (tank.isPending || test.isPending || !profile || !initial) return <PageSkeleton label="Loading the test…" />;
+  if (tank.isPending || test.isPending || !profile || !initial)
+    return <PageSkeleton label="Loading the test…" />;
   const t = tank.data;
   const allowed = mayLog('update', 'WaterTest');
   const back = (saved: SavedNotice) => navigate(`/tanks/${tankId}`, { state: { saved } });
@@ -36,12 +40,28 @@ export function Component() {
     <>
       <PageHeader title="Change a water test" subtitle={t.name} />
       {!allowed ? (
-        <Notice tone="warning">Only the keeper of this tank can change its tests{t.archivedAt ? ', and not while it is archived' : ''}.</Notice>
+        <Notice tone="warning">
+          Only the keeper of this tank can change its tests
+          {t.archivedAt ? ', and not while it is archived' : ''}.
+        </Notice>
       ) : (
         <div className="space-y-6">
-          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} editing={test.data.waterTest} lastKnown={test.data.lastKnown} submitLabel="Save changes" onSaved={back} />
+          <WaterTestForm
+            clubId={clubId}
+            tank={t}
+            profile={profile}
+            prefs={me.user}
+            initial={initial}
+            memory={memory}
+            editing={test.data.waterTest}
+            lastKnown={test.data.lastKnown}
+            submitLabel="Save changes"
+            onSaved={back}
+          />
           <div className="border-t border-line pt-4">
-            <Button variant="ghost" className="text-danger" onClick={() => setConfirming(true)}>Delete this test</Button>
+            <Button variant="ghost" className="text-danger" onClick={() => setConfirming(true)}>
+              Delete this test
+            </Button>
           </div>
           <ConfirmDialog
             open={confirming}

@@ -33,17 +33,38 @@ export function Component() {
         <>
           {firstReadings.length ? (
             <p className="mb-2 font-bold text-ink">
-              To test today, at the top: {new Intl.ListFormat('en', { type: 'conjunction' }).format(firstReadings.map((k) => parameterInfo(k).label))}.
+              To test today, at the top:{' '}
+              {new Intl.ListFormat('en', { type: 'conjunction' }).format(
+                firstReadings.map((k) => parameterInfo(k).label),
+              )}
+              .
             </p>
           ) : null}
           <p className="mb-4 text-sm text-ink-muted">
             Fill in what you tested; leave the rest empty. Not a test?{' '}
-            <Link to={`/tanks/${tankId}/entries/new`} className="font-bold text-link underline">Log a water change, a dose or what you saw</Link>.
+            <Link to={`/tanks/${tankId}/entries/new`} className="font-bold text-link underline">
+              Log a water change, a dose or what you saw
+            </Link>
+            .
           </p>
-          <WaterTestForm clubId={clubId} tank={t} profile={profile} prefs={me.user} initial={initial} memory={memory} lastKnown={t.lastKnown} firstReadings={firstReadings} onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })} />
+          <WaterTestForm
+            clubId={clubId}
+            tank={t}
+            profile={profile}
+            prefs={me.user}
+            initial={initial}
+            memory={memory}
+            lastKnown={t.lastKnown}
+            firstReadings={firstReadings}
+            onSaved={(saved) => navigate(`/tanks/${tankId}`, { state: { saved } })}
+          />
         </>
       ) : (
-        <Notice tone="warning">{t.archivedAt ? 'This tank is archived, so no new tests can be logged. Restore it from the tank page first.' : 'Only the keeper of this tank can log tests on it.'}</Notice>
+        <Notice tone="warning">
+          {t.archivedAt
+            ? 'This tank is archived, so no new tests can be logged. Restore it from the tank page first.'
+            : 'Only the keeper of this tank can log tests on it.'}
+        </Notice>
       )}
     </>
   );

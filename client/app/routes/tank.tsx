@@ -45,34 +45,94 @@ export function Component() {
 
   return (
     <>
-      <TankHeader tank={t} prefs={me.user} profileName={profile?.name} photo={tankPhoto} isOwn={t.owner.id === me.user.id} canLog={canLog} canEdit={canEdit} />
+      <TankHeader
+        tank={t}
+        prefs={me.user}
+        profileName={profile?.name}
+        photo={tankPhoto}
+        isOwn={t.owner.id === me.user.id}
+        canLog={canLog}
+        canEdit={canEdit}
+      />
       <div className="space-y-8">
         {saved ? (
           <Notice tone={saved.warnings.length ? 'warning' : 'success'}>
             {saved.message}
-            {saved.toCharts ? <> <a href="#readings-heading" className="font-bold underline">Go to the charts</a></> : null}
-            {saved.warnings.length ? <ul className="mt-1 list-disc pl-5">{saved.warnings.map((w) => <li key={w}>{w}</li>)}</ul> : null}
+            {saved.toCharts ? (
+              <>
+                {' '}
+                <a href="#readings-heading" className="font-bold underline">
+                  Go to the charts
+                </a>
+              </>
+            ) : null}
+            {saved.warnings.length ? (
+              <ul className="mt-1 list-disc pl-5">
+                {saved.warnings.map((w) => (
+                  <li key={w}>{w}</li>
+                ))}
+              </ul>
+            ) : null}
           </Notice>
         ) : null}
         {!active ? (
           <Notice tone="info">
             This tank is archived: its history stays, but nothing new can be logged.{' '}
-            {ability.can('update', subject) ? <Button variant="secondary" className="ml-2" busy={restore.isPending} onClick={() => restore.mutate(false)}>Restore it</Button> : null}
+            {ability.can('update', subject) ? (
+              <Button
+                variant="secondary"
+                className="ml-2"
+                busy={restore.isPending}
+                onClick={() => restore.mutate(false)}
+              >
+                Restore it
+              </Button>
+            ) : null}
           </Notice>
         ) : null}
-        <TankCarePanel clubId={clubId} tankId={t.id} ownerId={t.owner.id} phase={t.phase} timeZone={me.user.timeZone} />
-        <TankHistory clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} cycling={t.phase === 'cycling'} editable={canLog} />
+        <TankCarePanel
+          clubId={clubId}
+          tankId={t.id}
+          ownerId={t.owner.id}
+          phase={t.phase}
+          timeZone={me.user.timeZone}
+        />
+        <TankHistory
+          clubId={clubId}
+          tankId={t.id}
+          profile={profile}
+          prefs={me.user}
+          cycling={t.phase === 'cycling'}
+          editable={canLog}
+        />
         <Section title={t.owner.id === me.user.id ? 'Ask your mentor' : 'Questions'}>
-          <Card><AskAboutRecent clubId={clubId} tankId={t.id} ownerId={t.owner.id} prefs={me.user} canAsk={active && ability.can('create', asSubject('Question', { clubId: t.clubId, askerId: t.owner.id }))} /></Card>
+          <Card>
+            <AskAboutRecent
+              clubId={clubId}
+              tankId={t.id}
+              ownerId={t.owner.id}
+              prefs={me.user}
+              canAsk={
+                active &&
+                ability.can('create', asSubject('Question', { clubId: t.clubId, askerId: t.owner.id }))
+              }
+            />
+          </Card>
         </Section>
         <Section title="Timeline">
-          <Card><Timeline clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} editable={canLog} /></Card>
+          <Card>
+            <Timeline clubId={clubId} tankId={t.id} profile={profile} prefs={me.user} editable={canLog} />
+          </Card>
         </Section>
         <Section title="Animals">
-          <Card><LivestockPanel clubId={clubId} tankId={t.id} livestock={t.livestock} editable={canEdit} /></Card>
+          <Card>
+            <LivestockPanel clubId={clubId} tankId={t.id} livestock={t.livestock} editable={canEdit} />
+          </Card>
         </Section>
         <Section title="Records">
-          <Card><TankRecords clubId={clubId} tankId={t.id} canImport={canLog} /></Card>
+          <Card>
+            <TankRecords clubId={clubId} tankId={t.id} canImport={canLog} />
+          </Card>
         </Section>
       </div>
     </>

@@ -6,7 +6,10 @@ import { TankRouteError } from '@client/features/tanks/components/tank-route-err
 
 export function Component() {
   const { me, activeClub, ability } = useSession();
-  if (!activeClub) return <Notice tone="warning">You are not an active member of a club, so there are no tanks to show.</Notice>;
+  if (!activeClub)
+    return (
+      <Notice tone="warning">You are not an active member of a club, so there are no tanks to show.</Notice>
+    );
   const { clubId } = activeClub;
   return (
     <TankList

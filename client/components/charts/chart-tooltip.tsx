@@ -8,7 +8,15 @@ interface Entry {
 }
 
 /** Tooltip body for the time charts: the date, then each value as the member reads it. */
-export function ChartTooltip({ active, payload, format }: { active?: boolean; payload?: readonly Entry[]; format: (name: string, value: number) => string }) {
+export function ChartTooltip({
+  active,
+  payload,
+  format,
+}: {
+  active?: boolean;
+  payload?: readonly Entry[];
+  format: (name: string, value: number) => string;
+}) {
   if (!active || !payload?.length) return null;
   const t = payload[0]?.payload?.t;
   return (

@@ -17,7 +17,16 @@ export interface ChartMarker {
 export const gridLines = () => <CartesianGrid stroke={CHART_COLOURS.grid} vertical={false} />;
 
 export const timeAxis = ([from, to]: readonly [number, number]) => (
-  <XAxis dataKey="t" type="number" scale="time" domain={[from, to]} tickFormatter={formatDay} stroke={CHART_COLOURS.axis} fontSize={12} minTickGap={28} />
+  <XAxis
+    dataKey="t"
+    type="number"
+    scale="time"
+    domain={[from, to]}
+    tickFormatter={formatDay}
+    stroke={CHART_COLOURS.axis}
+    fontSize={12}
+    minTickGap={28}
+  />
 );
 
 export const markerLines = (markers: readonly ChartMarker[], yAxisId?: string) =>

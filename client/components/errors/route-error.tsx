@@ -15,15 +15,35 @@ export interface RouteErrorWords {
 }
 
 function describe(error: unknown, words: RouteErrorWords): Words {
-  const notFound = (error instanceof ApiError && error.isNotFound) || (isRouteErrorResponse(error) && error.status === 404);
-  if (error instanceof ApiError && error.isForbidden) return words.forbidden ?? { title: "That isn't yours to see", detail: error.message };
-  if (notFound) return words.notFound ?? (error instanceof ApiError ? { title: "We couldn't find that", detail: error.message } : { title: "We couldn't find that page", detail: 'The link may be old.' });
-  if (isRouteErrorResponse(error)) return { title: `Something went wrong (${error.status})`, detail: error.statusText };
+  const notFound =
+    (error instanceof ApiError && error.isNotFound) || (isRouteErrorResponse(error) && error.status === 404);
+  if (error instanceof ApiError && error.isForbidden)
+    return words.forbidden ?? { title: "That isn't yours to see", detail: error.message };
+  if (notFound)
+    return (
+      words.notFound ??
+      (error instanceof ApiError
+        ? { title: "We couldn't find that", detail: error.message }
+        : { title: "We couldn't find that page", detail: 'The link may be old.' })
+    );
+  if (isRouteErrorResponse(error))
+    return { title: `Something went wrong (${error.status})`, detail: error.statusText };
   if (error instanceof ApiError) return { title: 'Something went wrong', detail: error.message };
-  return { title: 'Something went wrong', detail: 'Please reload the page. If it keeps happening, tell your club admin.' };
+  return {
+    title: 'Something went wrong',
+    detail: 'Please reload the page. If it keeps happening, tell your club admin.',
+  };
 }
 
-function ErrorMessage({ words, back, className }: { words: Words; back: { to: string; label: string }; className: string }) {
+function ErrorMessage({
+  words,
+  back,
+  className,
+}: {
+  words: Words;
+  back: { to: string; label: string };
+  className: string;
+}) {
   return (
     <div className={className}>
       <PageTitle title={words.title} />
@@ -40,16 +60,32 @@ function ErrorMessage({ words, back, className }: { words: Words; back: { to: st
 export function RouteError() {
   return (
     <main role="alert" className="mx-auto max-w-md px-4 py-16 text-center">
-      <ErrorMessage words={describe(useRouteError(), {})} back={{ to: '/', label: 'Back to the start' }} className="" />
+      <ErrorMessage
+        words={describe(useRouteError(), {})}
+        back={{ to: '/', label: 'Back to the start' }}
+        className=""
+      />
     </main>
   );
 }
 
 /** What a screen shows when its data could not be had: a refusal or a missing record is an answer, not a crash. */
-export function SectionError({ error, words, back }: { error: unknown; words: RouteErrorWords; back: { to: string; label: string } }) {
+export function SectionError({
+  error,
+  words,
+  back,
+}: {
+  error: unknown;
+  words: RouteErrorWords;
+  back: { to: string; label: string };
+}) {
   return (
     <section role="alert">
-      <ErrorMessage words={describe(error, words)} back={back} className="mx-auto max-w-md py-12 text-center" />
+      <ErrorMessage
+        words={describe(error, words)}
+        back={back}
+        className="mx-auto max-w-md py-12 text-center"
+      />
     </section>
   );
 }

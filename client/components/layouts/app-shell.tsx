@@ -21,9 +21,23 @@ function Brand() {
 }
 
 /** The same links in the header (wide screens) and the bottom bar (phones), each with its look. */
-function NavLinks({ nav, look, short }: { nav: NavItem[]; look: (active: boolean) => string; short?: boolean }) {
+function NavLinks({
+  nav,
+  look,
+  short,
+}: {
+  nav: NavItem[];
+  look: (active: boolean) => string;
+  short?: boolean;
+}) {
   return nav.map((item) => (
-    <NavLink key={item.to} to={item.to} end={item.end} aria-label={short && item.short ? item.label : undefined} className={({ isActive }) => look(isActive)}>
+    <NavLink
+      key={item.to}
+      to={item.to}
+      end={item.end}
+      aria-label={short && item.short ? item.label : undefined}
+      className={({ isActive }) => look(isActive)}
+    >
       {short ? (item.short ?? item.label) : item.label}
     </NavLink>
   ));
@@ -38,11 +52,18 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         <div className="mx-auto flex max-w-5xl items-center justify-between gap-4 px-4 py-3">
           <Brand />
           <nav aria-label="Main" className="hidden gap-1 sm:flex">
-            <NavLinks nav={nav} look={(on) => `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-chrome-active text-on-chrome' : 'text-on-chrome-muted hover:bg-chrome-active'}`} />
+            <NavLinks
+              nav={nav}
+              look={(on) =>
+                `rounded-full px-3 py-2 text-sm font-bold ${on ? 'bg-chrome-active text-on-chrome' : 'text-on-chrome-muted hover:bg-chrome-active'}`
+              }
+            />
           </nav>
           {headerEnd}
         </div>
-        {navigation.state === 'loading' ? <div className="h-0.5 animate-pulse bg-on-chrome-muted" aria-hidden /> : null}
+        {navigation.state === 'loading' ? (
+          <div className="h-0.5 animate-pulse bg-on-chrome-muted" aria-hidden />
+        ) : null}
       </header>
       <OfflineBanner />
       <main id={MAIN_ID} tabIndex={-1} className="mx-auto max-w-5xl px-4 pt-6 pb-24 outline-none sm:pb-10">
@@ -53,7 +74,13 @@ export function AppShell({ nav, headerEnd }: { nav: NavItem[]; headerEnd?: React
         style={{ gridTemplateColumns: `repeat(${nav.length}, minmax(0, 1fr))` }}
         className="fixed inset-x-0 bottom-0 grid border-t border-line bg-surface sm:hidden"
       >
-        <NavLinks nav={nav} short look={(on) => `flex min-h-14 items-center justify-center border-t-4 text-xs font-bold ${on ? 'border-accent text-ink' : 'border-transparent text-ink-muted'}`} />
+        <NavLinks
+          nav={nav}
+          short
+          look={(on) =>
+            `flex min-h-14 items-center justify-center border-t-4 text-xs font-bold ${on ? 'border-accent text-ink' : 'border-transparent text-ink-muted'}`
+          }
+        />
       </nav>
     </div>
   );

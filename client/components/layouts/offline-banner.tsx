@@ -7,7 +7,8 @@ export function OfflineBanner() {
     <div role="status" aria-live="polite">
       {online ? null : (
         <p className="bg-watch-soft px-4 py-2 text-center text-sm font-bold text-watch">
-          <span aria-hidden>! </span>You are offline. What you type stays on this page; save once the connection is back.
+          <span aria-hidden>! </span>You are offline. What you type stays on this page; save once the
+          connection is back.
         </p>
       )}
     </div>

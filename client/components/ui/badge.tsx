@@ -15,9 +15,22 @@ export const TONES: Record<Tone, string> = {
  * A short status: always a word, with a mark (a shape) before it, so the meaning never rests on colour alone.
  * `title` explains the word on hover.
  */
-export function Badge({ tone = 'neutral', mark, title, children }: { tone?: Tone; mark?: ReactNode; title?: string; children: ReactNode }) {
+export function Badge({
+  tone = 'neutral',
+  mark,
+  title,
+  children,
+}: {
+  tone?: Tone;
+  mark?: ReactNode;
+  title?: string;
+  children: ReactNode;
+}) {
   return (
-    <span title={title} className={`inline-flex items-center gap-1 rounded-full px-2.5 py-0.5 text-xs font-extrabold ring-1 ${TONES[tone]}`}>
+    <span
+      title={title}
+      className={`inline-flex items-center gap-1 rounded-full px-2.5 py-0.5 text-xs font-extrabold ring-1 ${TONES[tone]}`}
+    >
       {mark ? <span aria-hidden>{mark}</span> : null}
       {children}
     </span>

@@ -14,18 +14,46 @@ const SIZES = { md: 'min-h-touch px-5', lg: 'min-h-14 px-6 text-lg' } as const;
 export const buttonClass = (variant: ButtonVariant = 'primary', size: keyof typeof SIZES = 'md') =>
   `inline-flex items-center justify-center gap-2 rounded-full font-bold transition-colors disabled:cursor-not-allowed disabled:opacity-50 ${SIZES[size]} ${VARIANTS[variant]}`;
 
-type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & { variant?: ButtonVariant; size?: keyof typeof SIZES; busy?: boolean };
+type ButtonProps = ButtonHTMLAttributes<HTMLButtonElement> & {
+  variant?: ButtonVariant;
+  size?: keyof typeof SIZES;
+  busy?: boolean;
+};
 
-export function Button({ variant, size, className = '', busy, children, type = 'button', ...rest }: ButtonProps) {
+export function Button({
+  variant,
+  size,
+  className = '',
+  busy,
+  children,
+  type = 'button',
+  ...rest
+}: ButtonProps) {
   return (
-    <button {...rest} type={type} disabled={rest.disabled || busy} aria-busy={busy || undefined} className={`${buttonClass(variant, size)} ${className}`}>
-      {busy ? <span className="size-4 animate-spin rounded-full border-2 border-current border-t-transparent" aria-hidden /> : null}
+    <button
+      {...rest}
+      type={type}
+      disabled={rest.disabled || busy}
+      aria-busy={busy || undefined}
+      className={`${buttonClass(variant, size)} ${className}`}
+    >
+      {busy ? (
+        <span
+          className="size-4 animate-spin rounded-full border-2 border-current border-t-transparent"
+          aria-hidden
+        />
+      ) : null}
       {children}
     </button>
   );
 }
 
 /** A link that looks like a button: it goes somewhere rather than doing something. */
-export function ButtonLink({ variant, size, className = '', ...rest }: LinkProps & { variant?: ButtonVariant; size?: keyof typeof SIZES }) {
+export function ButtonLink({
+  variant,
+  size,
+  className = '',
+  ...rest
+}: LinkProps & { variant?: ButtonVariant; size?: keyof typeof SIZES }) {
   return <Link {...rest} className={`${buttonClass(variant, size)} ${className}`} />;
 }

@@ -3,7 +3,17 @@ import { TONES, type Tone } from './badge';
 import { PageTitle } from './page-title';
 
 /** A white (in dark mode, deep) panel: the unit every screen is built from. `title` gives it a heading. */
-export function Card({ children, title, actions, className = '' }: { children: ReactNode; title?: ReactNode; actions?: ReactNode; className?: string }) {
+export function Card({
+  children,
+  title,
+  actions,
+  className = '',
+}: {
+  children: ReactNode;
+  title?: ReactNode;
+  actions?: ReactNode;
+  className?: string;
+}) {
   return (
     <section className={`rounded-card bg-surface p-5 shadow-card ring-1 ring-line ${className}`}>
       {title ? (
@@ -29,14 +39,27 @@ const NOTICE: Record<NoticeTone, { tone: Tone; mark: string }> = {
 export function Notice({ tone = 'info', children }: { tone?: NoticeTone; children: ReactNode }) {
   const look = NOTICE[tone];
   return (
-    <div role={tone === 'error' ? 'alert' : 'status'} className={`flex gap-2 rounded-control px-4 py-3 text-sm font-semibold ring-1 ${TONES[look.tone]}`}>
-      <span aria-hidden className="font-extrabold">{look.mark}</span>
+    <div
+      role={tone === 'error' ? 'alert' : 'status'}
+      className={`flex gap-2 rounded-control px-4 py-3 text-sm font-semibold ring-1 ${TONES[look.tone]}`}
+    >
+      <span aria-hidden className="font-extrabold">
+        {look.mark}
+      </span>
       <div className="min-w-0 flex-1">{children}</div>
     </div>
   );
 }
 
-export function AuthCard({ title, subtitle, children }: { title: string; subtitle?: string; children: ReactNode }) {
+export function AuthCard({
+  title,
+  subtitle,
+  children,
+}: {
+  title: string;
+  subtitle?: string;
+  children: ReactNode;
+}) {
   return (
     <div className="mx-auto max-w-md">
       <Card>

@@ -21,7 +21,9 @@ export const CAUTIONS = {
 export function Caution({ children, title = 'Take care' }: { children: ReactNode; title?: string }) {
   return (
     <aside className={`flex gap-3 rounded-control px-4 py-3 text-sm ring-1 ${TONES.watch}`}>
-      <span aria-hidden className="mt-0.5 text-base font-extrabold">!</span>
+      <span aria-hidden className="mt-0.5 text-base font-extrabold">
+        !
+      </span>
       <p>
         <strong className="font-extrabold">{title}: </strong>
         {children}

@@ -12,10 +12,10 @@ const SHAPES = {
  * One option of a radio (or checkbox) group drawn as a button-like tile: the input stays in the page for the
  * keyboard and screen readers, and its focus shows on the tile.
  */
-export const Choice = forwardRef<HTMLInputElement, InputHTMLAttributes<HTMLInputElement> & { children: ReactNode; shape?: keyof typeof SHAPES }>(function Choice(
-  { children, shape = 'tile', type = 'radio', className = '', ...rest },
-  ref,
-) {
+export const Choice = forwardRef<
+  HTMLInputElement,
+  InputHTMLAttributes<HTMLInputElement> & { children: ReactNode; shape?: keyof typeof SHAPES }
+>(function Choice({ children, shape = 'tile', type = 'radio', className = '', ...rest }, ref) {
   return (
     <label className={`${BASE} ${SHAPES[shape]} ${className}`}>
       <input ref={ref} type={type} className="sr-only" {...rest} />

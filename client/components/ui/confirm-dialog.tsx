@@ -30,8 +30,12 @@ export function ConfirmDialog({
       onClose={onCancel}
       footer={
         <>
-          <Button variant="secondary" onClick={onCancel}>Cancel</Button>
-          <Button variant={tone} busy={busy} onClick={onConfirm}>{confirmLabel}</Button>
+          <Button variant="secondary" onClick={onCancel}>
+            Cancel
+          </Button>
+          <Button variant={tone} busy={busy} onClick={onConfirm}>
+            {confirmLabel}
+          </Button>
         </>
       }
     >
@@ -65,7 +69,9 @@ export function ConfirmButton({
   const toast = useToast();
   return (
     <>
-      <Button variant={variant} busy={busy} onClick={() => setOpen(true)}>{children}</Button>
+      <Button variant={variant} busy={busy} onClick={() => setOpen(true)}>
+        {children}
+      </Button>
       <ConfirmDialog
         open={open}
         title={title}
@@ -77,7 +83,9 @@ export function ConfirmButton({
           try {
             await onConfirm();
           } catch (e) {
-            toast.error(e instanceof Error ? e.message : 'That did not work. Check your connection and try again.');
+            toast.error(
+              e instanceof Error ? e.message : 'That did not work. Check your connection and try again.',
+            );
           } finally {
             setOpen(false);
           }

@@ -1,6 +1,7 @@
 import { useEffect, useId, useRef, type KeyboardEvent, type ReactNode } from 'react';
 
-const FOCUSABLE = 'button:not([disabled]), [href], input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
+const FOCUSABLE =
+  'button:not([disabled]), [href], input:not([disabled]), select:not([disabled]), textarea:not([disabled]), [tabindex]:not([tabindex="-1"])';
 
 /** showModal() keeps focus off the page behind, but Tab past the last button would leave for the browser's own bar. */
 function keepTabInside(dialog: HTMLDialogElement, e: KeyboardEvent<HTMLDialogElement>) {
@@ -21,7 +22,19 @@ function keepTabInside(dialog: HTMLDialogElement, e: KeyboardEvent<HTMLDialogEle
  * A modal dialog on the native <dialog>: showModal() makes the rest of the page inert (focus stays inside)
  * and Escape cancels; Tab cycles through the dialog's own controls. Focus goes back to whatever had it before the dialog opened.
  */
-export function Dialog({ open, title, children, footer, onClose }: { open: boolean; title: ReactNode; children: ReactNode; footer?: ReactNode; onClose: () => void }) {
+export function Dialog({
+  open,
+  title,
+  children,
+  footer,
+  onClose,
+}: {
+  open: boolean;
+  title: ReactNode;
+  children: ReactNode;
+  footer?: ReactNode;
+  onClose: () => void;
+}) {
   const ref = useRef<HTMLDialogElement>(null);
   const opener = useRef<Element | null>(null);
   const titleId = useId();
@@ -53,7 +66,9 @@ export function Dialog({ open, title, children, footer, onClose }: { open: boole
     >
       {open ? (
         <div className="p-5">
-          <h2 id={titleId} className="text-lg font-extrabold text-ink">{title}</h2>
+          <h2 id={titleId} className="text-lg font-extrabold text-ink">
+            {title}
+          </h2>
           <div className="mt-2 space-y-2">{children}</div>
           {footer ? <div className="mt-5 flex flex-wrap justify-end gap-2">{footer}</div> : null}
         </div>

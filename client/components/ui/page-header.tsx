@@ -1,7 +1,15 @@
 import type { ReactNode } from 'react';
 import { PageTitle } from './page-title';
 
-export function PageHeader({ title, subtitle, actions }: { title: string; subtitle?: string; actions?: ReactNode }) {
+export function PageHeader({
+  title,
+  subtitle,
+  actions,
+}: {
+  title: string;
+  subtitle?: string;
+  actions?: ReactNode;
+}) {
   return (
     <header className="mb-5 flex flex-wrap items-end justify-between gap-3">
       <PageTitle title={title} />

@@ -19,8 +19,17 @@ function Thumb({ file, onRemove }: { file: File; onRemove: () => void }) {
   useEffect(() => () => URL.revokeObjectURL(url), [url]);
   return (
     <li className="relative">
-      <img src={url} alt={`Chosen photo ${file.name}`} className="size-20 rounded-xl object-cover ring-1 ring-line" />
-      <button type="button" onClick={onRemove} aria-label={`Remove ${file.name}`} className="absolute -top-2 -right-2 grid size-8 place-items-center rounded-full bg-ink text-sm font-bold text-surface">
+      <img
+        src={url}
+        alt={`Chosen photo ${file.name}`}
+        className="size-20 rounded-xl object-cover ring-1 ring-line"
+      />
+      <button
+        type="button"
+        onClick={onRemove}
+        aria-label={`Remove ${file.name}`}
+        className="absolute -top-2 -right-2 grid size-8 place-items-center rounded-full bg-ink text-sm font-bold text-surface"
+      >
         ×
       </button>
     </li>
@@ -28,7 +37,19 @@ function Thumb({ file, onRemove }: { file: File; onRemove: () => void }) {
 }
 
 /** Pick up to PHOTO_MAX_FILES pictures from the camera or the gallery; the caller uploads them after saving. */
-export function PhotoPicker({ label, hint, files, onChange, disabled }: { label: string; hint?: string; files: File[]; onChange: (files: File[]) => void; disabled?: boolean }) {
+export function PhotoPicker({
+  label,
+  hint,
+  files,
+  onChange,
+  disabled,
+}: {
+  label: string;
+  hint?: string;
+  files: File[];
+  onChange: (files: File[]) => void;
+  disabled?: boolean;
+}) {
   const id = useId();
   const [error, setError] = useState<string>();
   return (
@@ -39,12 +60,19 @@ export function PhotoPicker({ label, hint, files, onChange, disabled }: { label:
         {files.length ? (
           <ul className="flex flex-wrap gap-3">
             {files.map((f, i) => (
-              <Thumb key={`${f.name}-${i}`} file={f} onRemove={() => onChange(files.filter((_, j) => j !== i))} />
+              <Thumb
+                key={`${f.name}-${i}`}
+                file={f}
+                onRemove={() => onChange(files.filter((_, j) => j !== i))}
+              />
             ))}
           </ul>
         ) : null}
         {files.length < PHOTO_MAX_FILES ? (
-          <label htmlFor={id} className={`inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-surface px-4 font-bold text-ink-soft ring-1 ring-line-strong hover:bg-tint ${disabled ? 'pointer-events-none opacity-50' : ''}`}>
+          <label
+            htmlFor={id}
+            className={`inline-flex min-h-touch cursor-pointer items-center gap-2 rounded-full bg-surface px-4 font-bold text-ink-soft ring-1 ring-line-strong hover:bg-tint ${disabled ? 'pointer-events-none opacity-50' : ''}`}
+          >
             <CameraIcon /> {files.length ? 'Add another' : 'Add a photo'}
           </label>
         ) : null}
@@ -64,7 +92,11 @@ export function PhotoPicker({ label, hint, files, onChange, disabled }: { label:
           }}
         />
       </div>
-      {error ? <p role="alert" className="mt-1 text-sm font-semibold text-danger">{error}</p> : null}
+      {error ? (
+        <p role="alert" className="mt-1 text-sm font-semibold text-danger">
+          {error}
+        </p>
+      ) : null}
     </div>
   );
 }

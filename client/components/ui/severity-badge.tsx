@@ -10,5 +10,9 @@ const LOOK: Record<Severity, { label: string; mark: string; tone: Tone }> = {
 
 export function SeverityBadge({ severity }: { severity: Severity }) {
   const look = LOOK[severity];
-  return <Badge tone={look.tone} mark={look.mark}>{look.label}</Badge>;
+  return (
+    <Badge tone={look.tone} mark={look.mark}>
+      {look.label}
+    </Badge>
+  );
 }

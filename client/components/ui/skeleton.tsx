@@ -2,7 +2,12 @@ import type { ReactNode } from 'react';
 
 /** A grey shape where content will be: the page keeps its layout while data arrives. */
 export function Skeleton({ className = 'h-4 w-full' }: { className?: string }) {
-  return <span aria-hidden className={`block animate-pulse rounded-control bg-tint-strong motion-reduce:animate-none ${className}`} />;
+  return (
+    <span
+      aria-hidden
+      className={`block animate-pulse rounded-control bg-tint-strong motion-reduce:animate-none ${className}`}
+    />
+  );
 }
 
 /**

@@ -34,14 +34,28 @@ export function ToastProvider({ children }: { children: ReactNode }) {
     [dismiss],
   );
   const region = (tone: ToastTone) => (
-    <div role={tone === 'error' ? 'alert' : 'status'} aria-live={tone === 'error' ? 'assertive' : 'polite'} className="contents">
+    <div
+      role={tone === 'error' ? 'alert' : 'status'}
+      aria-live={tone === 'error' ? 'assertive' : 'polite'}
+      className="contents"
+    >
       {items
         .filter((t) => t.tone === tone)
         .map((t) => (
-          <div key={t.id} className={`pointer-events-auto flex items-start gap-2 rounded-control px-4 py-3 text-sm font-bold shadow-card ring-1 ${LOOK[tone].className}`}>
+          <div
+            key={t.id}
+            className={`pointer-events-auto flex items-start gap-2 rounded-control px-4 py-3 text-sm font-bold shadow-card ring-1 ${LOOK[tone].className}`}
+          >
             <span aria-hidden>{LOOK[tone].mark}</span>
             <p className="flex-1">{t.message}</p>
-            <button type="button" onClick={() => dismiss(t.id)} className="-my-1 rounded-full px-2 text-base leading-none" aria-label="Dismiss">×</button>
+            <button
+              type="button"
+              onClick={() => dismiss(t.id)}
+              className="-my-1 rounded-full px-2 text-base leading-none"
+              aria-label="Dismiss"
+            >
+              ×
+            </button>
           </div>
         ))}
     </div>
@@ -61,5 +75,11 @@ export function ToastProvider({ children }: { children: ReactNode }) {
 export function useToast() {
   const show = useContext(ToastContext);
   if (!show) throw new Error('useToast outside ToastProvider');
-  return useMemo(() => ({ success: (message: string) => show(message, 'success'), error: (message: string) => show(message, 'error') }), [show]);
+  return useMemo(
+    () => ({
+      success: (message: string) => show(message, 'success'),
+      error: (message: string) => show(message, 'error'),
+    }),
+    [show],
+  );
 }

@@ -8,12 +8,25 @@ const TONE: Record<Verdict['level'], string> = {
 
 /** A shape per level (circle, triangle, octagon) so the meaning never rests on colour alone. */
 export function VerdictIcon({ level, direction }: Pick<Verdict, 'level' | 'direction'>) {
-  const common = { width: 18, height: 18, viewBox: '0 0 20 20', 'aria-hidden': true, className: 'shrink-0' } as const;
+  const common = {
+    width: 18,
+    height: 18,
+    viewBox: '0 0 20 20',
+    'aria-hidden': true,
+    className: 'shrink-0',
+  } as const;
   if (level === 'ok') {
     return (
       <svg {...common}>
         <circle cx="10" cy="10" r="9" fill="currentColor" />
-        <path d="M5.5 10.5l3 3 6-6.5" stroke="white" strokeWidth="2.2" fill="none" strokeLinecap="round" strokeLinejoin="round" />
+        <path
+          d="M5.5 10.5l3 3 6-6.5"
+          stroke="white"
+          strokeWidth="2.2"
+          fill="none"
+          strokeLinecap="round"
+          strokeLinejoin="round"
+        />
       </svg>
     );
   }
@@ -21,7 +34,13 @@ export function VerdictIcon({ level, direction }: Pick<Verdict, 'level' | 'direc
     return (
       <svg {...common}>
         <path d="M10 1.5l9 16.5H1z" fill="currentColor" />
-        <path d={direction === 'low' ? 'M10 7v6m-2.5-2.5L10 13l2.5-2.5' : 'M10 14V8m-2.5 2.5L10 8l2.5 2.5'} stroke="white" strokeWidth="1.8" fill="none" strokeLinecap="round" />
+        <path
+          d={direction === 'low' ? 'M10 7v6m-2.5-2.5L10 13l2.5-2.5' : 'M10 14V8m-2.5 2.5L10 8l2.5 2.5'}
+          stroke="white"
+          strokeWidth="1.8"
+          fill="none"
+          strokeLinecap="round"
+        />
       </svg>
     );
   }

@@ -84,7 +84,9 @@ export class AccountsClubsRoles1764627000000 implements MigrationInterface {
     await q.query(`CREATE INDEX idx_mentor_assignment_mentor ON mentor_assignment (mentor_id, club_id)`);
     await q.query(`CREATE INDEX idx_mentor_assignment_mentee ON mentor_assignment (mentee_id, club_id)`);
     // A mentee has at most one running mentor per club.
-    await q.query(`CREATE UNIQUE INDEX uq_mentor_assignment_current ON mentor_assignment (club_id, mentee_id) WHERE ended_at IS NULL`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_mentor_assignment_current ON mentor_assignment (club_id, mentee_id) WHERE ended_at IS NULL`,
+    );
     await q.query(`
       CREATE TABLE audit_event (
         id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
@@ -113,7 +115,16 @@ export class AccountsClubsRoles1764627000000 implements MigrationInterface {
 
   async down(q: QueryRunner): Promise<void> {
     await q.query(`DROP INDEX IF EXISTS idx_session_user`);
-    for (const t of ['captured_mail', 'audit_event', 'mentor_assignment', 'password_reset', 'invite', 'membership', 'club', 'app_user']) {
+    for (const t of [
+      'captured_mail',
+      'audit_event',
+      'mentor_assignment',
+      'password_reset',
+      'invite',
+      'membership',
+      'club',
+      'app_user',
+    ]) {
       await q.query(`DROP TABLE ${t}`);
     }
   }

@@ -85,7 +85,9 @@ export class TanksReadingsPhotos1764628000000 implements MigrationInterface {
     await q.query(`COMMENT ON COLUMN water_test.nitrite_mg_l IS 'mg/L as NO2'`);
     await q.query(`COMMENT ON COLUMN water_test.nitrate_mg_l IS 'mg/L as NO3'`);
     await q.query(`COMMENT ON COLUMN water_test.phosphate_mg_l IS 'mg/L as PO4'`);
-    await q.query(`COMMENT ON COLUMN water_test.free_ammonia_mg_l IS 'derived: un-ionized NH3, mg/L as NH3; how in derived'`);
+    await q.query(
+      `COMMENT ON COLUMN water_test.free_ammonia_mg_l IS 'derived: un-ionized NH3, mg/L as NH3; how in derived'`,
+    );
 
     await q.query(`
       CREATE TABLE tank_event (
@@ -103,8 +105,12 @@ export class TanksReadingsPhotos1764628000000 implements MigrationInterface {
         updated_at timestamptz NOT NULL DEFAULT now(),
         CONSTRAINT ck_tank_event_livestock CHECK ((kind IN ('livestock-added','livestock-removed')) = (livestock_id IS NOT NULL))
       )`);
-    await q.query(`CREATE INDEX idx_tank_event_tank_occurred ON tank_event (tank_id, occurred_at DESC, id DESC)`);
-    await q.query(`CREATE UNIQUE INDEX uq_tank_event_livestock_kind ON tank_event (livestock_id, kind) WHERE livestock_id IS NOT NULL`);
+    await q.query(
+      `CREATE INDEX idx_tank_event_tank_occurred ON tank_event (tank_id, occurred_at DESC, id DESC)`,
+    );
+    await q.query(
+      `CREATE UNIQUE INDEX uq_tank_event_livestock_kind ON tank_event (livestock_id, kind) WHERE livestock_id IS NOT NULL`,
+    );
 
     await q.query(`
       CREATE TABLE photo (
@@ -124,11 +130,14 @@ export class TanksReadingsPhotos1764628000000 implements MigrationInterface {
       )`);
     await q.query(`CREATE UNIQUE INDEX uq_photo_storage_key ON photo (storage_key)`);
     await q.query(`CREATE INDEX idx_photo_tank ON photo (tank_id, created_at)`);
-    await q.query(`CREATE INDEX idx_photo_water_test ON photo (water_test_id) WHERE water_test_id IS NOT NULL`);
+    await q.query(
+      `CREATE INDEX idx_photo_water_test ON photo (water_test_id) WHERE water_test_id IS NOT NULL`,
+    );
     await q.query(`CREATE INDEX idx_photo_event ON photo (event_id) WHERE event_id IS NOT NULL`);
   }
 
   async down(q: QueryRunner): Promise<void> {
-    for (const t of ['photo', 'tank_event', 'water_test', 'livestock', 'tank']) await q.query(`DROP TABLE ${t}`);
+    for (const t of ['photo', 'tank_event', 'water_test', 'livestock', 'tank'])
+      await q.query(`DROP TABLE ${t}`);
   }
 }

@@ -26,7 +26,9 @@ export class ClubCareProfiles1764631000000 implements MigrationInterface {
         changed_by_id uuid REFERENCES app_user(id) ON DELETE SET NULL,
         changed_at timestamptz NOT NULL DEFAULT now()
       )`);
-    await q.query(`CREATE UNIQUE INDEX uq_club_care_profile_version ON club_care_profile_version (profile_id, version)`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_club_care_profile_version ON club_care_profile_version (profile_id, version)`,
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {

@@ -23,17 +23,27 @@ export class MentorRequests1764634500000 implements MigrationInterface {
         CONSTRAINT ck_mentor_request_not_self CHECK (preferred_mentor_id IS NULL OR preferred_mentor_id <> requester_id)
       )`);
     // One open request per member per club; answered ones stay as history.
-    await q.query(`CREATE UNIQUE INDEX uq_mentor_request_open ON mentor_request (club_id, requester_id) WHERE state = 'open'`);
-    await q.query(`CREATE INDEX idx_mentor_request_club_state ON mentor_request (club_id, state, created_at)`);
-    await q.query(`CREATE INDEX idx_mentor_request_requester ON mentor_request (requester_id, club_id, created_at DESC)`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_mentor_request_open ON mentor_request (club_id, requester_id) WHERE state = 'open'`,
+    );
+    await q.query(
+      `CREATE INDEX idx_mentor_request_club_state ON mentor_request (club_id, state, created_at)`,
+    );
+    await q.query(
+      `CREATE INDEX idx_mentor_request_requester ON mentor_request (requester_id, club_id, created_at DESC)`,
+    );
     await q.query(`UPDATE membership SET mentor_capacity = 20 WHERE mentor_capacity > 20`);
     await q.query(`ALTER TABLE membership DROP CONSTRAINT IF EXISTS membership_mentor_capacity_check`);
-    await q.query(`ALTER TABLE membership ADD CONSTRAINT ck_membership_mentor_capacity CHECK (mentor_capacity IS NULL OR mentor_capacity BETWEEN 0 AND 20)`);
+    await q.query(
+      `ALTER TABLE membership ADD CONSTRAINT ck_membership_mentor_capacity CHECK (mentor_capacity IS NULL OR mentor_capacity BETWEEN 0 AND 20)`,
+    );
   }
 
   async down(q: QueryRunner): Promise<void> {
     await q.query(`ALTER TABLE membership DROP CONSTRAINT ck_membership_mentor_capacity`);
-    await q.query(`ALTER TABLE membership ADD CONSTRAINT membership_mentor_capacity_check CHECK (mentor_capacity IS NULL OR mentor_capacity BETWEEN 0 AND 100)`);
+    await q.query(
+      `ALTER TABLE membership ADD CONSTRAINT membership_mentor_capacity_check CHECK (mentor_capacity IS NULL OR mentor_capacity BETWEEN 0 AND 100)`,
+    );
     await q.query(`DROP TABLE mentor_request`);
   }
 }

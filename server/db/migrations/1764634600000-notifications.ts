@@ -16,7 +16,9 @@ export class Notifications1764634600000 implements MigrationInterface {
         created_at timestamptz NOT NULL DEFAULT now()
       )`);
     // The claim: whichever worker inserts this row first sends that day's digest.
-    await q.query(`CREATE UNIQUE INDEX uq_notification_digest_user_date ON notification_digest (user_id, digest_date)`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_notification_digest_user_date ON notification_digest (user_id, digest_date)`,
+    );
     await q.query(`
       CREATE TABLE notification (
         id uuid PRIMARY KEY DEFAULT gen_random_uuid(),
@@ -34,9 +36,15 @@ export class Notifications1764634600000 implements MigrationInterface {
         digest_id uuid REFERENCES notification_digest(id) ON DELETE SET NULL,
         CONSTRAINT ck_notification_subject CHECK ((subject_type IS NULL) = (subject_id IS NULL))
       )`);
-    await q.query(`CREATE INDEX idx_notification_user_created ON notification (user_id, created_at DESC, id DESC)`);
-    await q.query(`CREATE INDEX idx_notification_user_unread ON notification (user_id) WHERE read_at IS NULL`);
-    await q.query(`CREATE INDEX idx_notification_pending_email ON notification (user_id, created_at) WHERE emailed_at IS NULL AND read_at IS NULL`);
+    await q.query(
+      `CREATE INDEX idx_notification_user_created ON notification (user_id, created_at DESC, id DESC)`,
+    );
+    await q.query(
+      `CREATE INDEX idx_notification_user_unread ON notification (user_id) WHERE read_at IS NULL`,
+    );
+    await q.query(
+      `CREATE INDEX idx_notification_pending_email ON notification (user_id, created_at) WHERE emailed_at IS NULL AND read_at IS NULL`,
+    );
     await q.query(`CREATE INDEX idx_notification_club ON notification (club_id)`);
     await q.query(`
       CREATE TABLE notification_preference (
@@ -52,6 +60,7 @@ export class Notifications1764634600000 implements MigrationInterface {
 
   async down(q: QueryRunner): Promise<void> {
     await q.query(`ALTER TABLE captured_mail DROP COLUMN headers`);
-    for (const t of ['notification_preference', 'notification', 'notification_digest']) await q.query(`DROP TABLE ${t}`);
+    for (const t of ['notification_preference', 'notification', 'notification_digest'])
+      await q.query(`DROP TABLE ${t}`);
   }
 }

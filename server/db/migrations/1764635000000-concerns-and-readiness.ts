@@ -33,9 +33,13 @@ export class ConcernsAndReadiness1764635000000 implements MigrationInterface {
         CONSTRAINT ck_concern_resolved CHECK ((status = 'resolved') = (resolved_at IS NOT NULL))
       )`);
     // One live concern per cause per tank: re-evaluation updates it instead of adding another.
-    await q.query(`CREATE UNIQUE INDEX uq_concern_live_rule ON concern (tank_id, rule) WHERE status <> 'resolved'`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_concern_live_rule ON concern (tank_id, rule) WHERE status <> 'resolved'`,
+    );
     await q.query(`CREATE INDEX idx_concern_tank_status ON concern (tank_id, status, raised_at DESC)`);
-    await q.query(`CREATE INDEX idx_concern_club_owner ON concern (club_id, owner_id) WHERE status <> 'resolved'`);
+    await q.query(
+      `CREATE INDEX idx_concern_club_owner ON concern (club_id, owner_id) WHERE status <> 'resolved'`,
+    );
     await q.query(`
       CREATE TABLE tank_readiness (
         tank_id uuid PRIMARY KEY REFERENCES tank(id) ON DELETE CASCADE,

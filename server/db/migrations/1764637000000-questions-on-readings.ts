@@ -23,11 +23,15 @@ export class QuestionsOnReadings1764637000000 implements MigrationInterface {
         CONSTRAINT ck_question_answered CHECK ((status = 'answered') = (answered_at IS NOT NULL))
       )`);
     // The desk counts open questions per tank; lists page through a club newest first.
-    await q.query(`CREATE INDEX idx_question_club_tank_open ON question (club_id, tank_id) WHERE status = 'open'`);
+    await q.query(
+      `CREATE INDEX idx_question_club_tank_open ON question (club_id, tank_id) WHERE status = 'open'`,
+    );
     await q.query(`CREATE INDEX idx_question_club_created ON question (club_id, created_at DESC, id DESC)`);
     await q.query(`CREATE INDEX idx_question_asker ON question (asker_id)`);
     await q.query(`CREATE INDEX idx_question_tank ON question (tank_id)`);
-    await q.query(`CREATE INDEX idx_question_water_test ON question (water_test_id) WHERE water_test_id IS NOT NULL`);
+    await q.query(
+      `CREATE INDEX idx_question_water_test ON question (water_test_id) WHERE water_test_id IS NOT NULL`,
+    );
     await q.query(`CREATE INDEX idx_question_event ON question (event_id) WHERE event_id IS NOT NULL`);
     // clock_timestamp, not now(): two replies in one transaction still get an order.
     await q.query(`
@@ -38,7 +42,9 @@ export class QuestionsOnReadings1764637000000 implements MigrationInterface {
         body text NOT NULL CHECK (length(body) BETWEEN 1 AND 5000),
         created_at timestamptz NOT NULL DEFAULT clock_timestamp()
       )`);
-    await q.query(`CREATE INDEX idx_question_reply_question_created ON question_reply (question_id, created_at, id)`);
+    await q.query(
+      `CREATE INDEX idx_question_reply_question_created ON question_reply (question_id, created_at, id)`,
+    );
     await q.query(`CREATE INDEX idx_question_reply_author ON question_reply (author_id)`);
   }
 

@@ -38,9 +38,13 @@ export class Meetups1765500000000 implements MigrationInterface {
       )`);
     await q.query(`CREATE INDEX idx_meetup_club_starts ON meetup (club_id, starts_at)`);
     // The reminder job scans what is about to start.
-    await q.query(`CREATE INDEX idx_meetup_scheduled_starts ON meetup (starts_at) WHERE status = 'scheduled'`);
+    await q.query(
+      `CREATE INDEX idx_meetup_scheduled_starts ON meetup (starts_at) WHERE status = 'scheduled'`,
+    );
     await q.query(`CREATE INDEX idx_meetup_host ON meetup (host_id) WHERE host_id IS NOT NULL`);
-    await q.query(`CREATE INDEX idx_meetup_created_by ON meetup (created_by_id) WHERE created_by_id IS NOT NULL`);
+    await q.query(
+      `CREATE INDEX idx_meetup_created_by ON meetup (created_by_id) WHERE created_by_id IS NOT NULL`,
+    );
 
     // Arrival order of answers: taken while the meetup row is locked, so it is the order places were handed out.
     await q.query(`CREATE SEQUENCE meetup_rsvp_arrival_seq AS bigint`);
@@ -63,12 +67,18 @@ export class Meetups1765500000000 implements MigrationInterface {
     await q.query(`ALTER SEQUENCE meetup_rsvp_arrival_seq OWNED BY meetup_rsvp.arrival`);
     await q.query(`CREATE UNIQUE INDEX uq_meetup_rsvp_meetup_user ON meetup_rsvp (meetup_id, user_id)`);
     // One sample per clinic slot, whoever books at the same moment.
-    await q.query(`CREATE UNIQUE INDEX uq_meetup_rsvp_slot ON meetup_rsvp (meetup_id, slot_starts_at) WHERE slot_starts_at IS NOT NULL`);
+    await q.query(
+      `CREATE UNIQUE INDEX uq_meetup_rsvp_slot ON meetup_rsvp (meetup_id, slot_starts_at) WHERE slot_starts_at IS NOT NULL`,
+    );
     await q.query(`CREATE INDEX idx_meetup_rsvp_queue ON meetup_rsvp (meetup_id, status, arrival)`);
     await q.query(`CREATE INDEX idx_meetup_rsvp_user ON meetup_rsvp (user_id)`);
     await q.query(`CREATE INDEX idx_meetup_rsvp_tank ON meetup_rsvp (tank_id) WHERE tank_id IS NOT NULL`);
-    await q.query(`CREATE INDEX idx_meetup_rsvp_water_test ON meetup_rsvp (water_test_id) WHERE water_test_id IS NOT NULL`);
-    await q.query(`CREATE INDEX idx_meetup_rsvp_checked_in_by ON meetup_rsvp (checked_in_by_id) WHERE checked_in_by_id IS NOT NULL`);
+    await q.query(
+      `CREATE INDEX idx_meetup_rsvp_water_test ON meetup_rsvp (water_test_id) WHERE water_test_id IS NOT NULL`,
+    );
+    await q.query(
+      `CREATE INDEX idx_meetup_rsvp_checked_in_by ON meetup_rsvp (checked_in_by_id) WHERE checked_in_by_id IS NOT NULL`,
+    );
 
     // The claim: whichever run inserts this row first sends the reminder. A moved meetup is reminded of again.
     await q.query(`
@@ -90,7 +100,9 @@ export class Meetups1765500000000 implements MigrationInterface {
       )`);
 
     for (const table of ['notification', 'notification_preference']) {
-      await q.query(`ALTER TABLE ${table} DROP CONSTRAINT ${table}_kind_check, ADD CONSTRAINT ${table}_kind_check CHECK (kind IN ${KINDS_AFTER})`);
+      await q.query(
+        `ALTER TABLE ${table} DROP CONSTRAINT ${table}_kind_check, ADD CONSTRAINT ${table}_kind_check CHECK (kind IN ${KINDS_AFTER})`,
+      );
     }
     // The fake SMTP server keeps attachments (a reminder's .ics) so tests can read them.
     await q.query(`ALTER TABLE captured_mail ADD COLUMN attachments jsonb NOT NULL DEFAULT '[]'`);
@@ -101,8 +113,11 @@ export class Meetups1765500000000 implements MigrationInterface {
     await q.query(`DELETE FROM notification_preference WHERE kind = 'meetup'`);
     await q.query(`DELETE FROM notification WHERE kind = 'meetup'`);
     for (const table of ['notification', 'notification_preference']) {
-      await q.query(`ALTER TABLE ${table} DROP CONSTRAINT ${table}_kind_check, ADD CONSTRAINT ${table}_kind_check CHECK (kind IN ${KINDS_BEFORE})`);
+      await q.query(
+        `ALTER TABLE ${table} DROP CONSTRAINT ${table}_kind_check, ADD CONSTRAINT ${table}_kind_check CHECK (kind IN ${KINDS_BEFORE})`,
+      );
     }
-    for (const t of ['calendar_feed', 'meetup_reminder', 'meetup_rsvp', 'meetup']) await q.query(`DROP TABLE ${t}`);
+    for (const t of ['calendar_feed', 'meetup_reminder', 'meetup_rsvp', 'meetup'])
+      await q.query(`DROP TABLE ${t}`);
   }
 }

@@ -12,4 +12,17 @@ import { IdempotentRequests1765100100000 } from './1765100100000-idempotent-requ
 import { Meetups1765500000000 } from './1765500000000-meetups';
 
 /** Every migration in the order it must run. Never edit a migration once it has landed: add a new one. */
-export const migrations = [CreateSessionStore1764626000000, AccountsClubsRoles1764627000000, SocketIoAttachments1764627500000, TanksReadingsPhotos1764628000000, ClubCareProfiles1764631000000, MentorRequests1764634500000, Notifications1764634600000, ConcernsAndReadiness1764635000000, QuestionsOnReadings1764637000000, RateLimitHits1765100000000, IdempotentRequests1765100100000, Meetups1765500000000];
+export const migrations = [
+  CreateSessionStore1764626000000,
+  AccountsClubsRoles1764627000000,
+  SocketIoAttachments1764627500000,
+  TanksReadingsPhotos1764628000000,
+  ClubCareProfiles1764631000000,
+  MentorRequests1764634500000,
+  Notifications1764634600000,
+  ConcernsAndReadiness1764635000000,
+  QuestionsOnReadings1764637000000,
+  RateLimitHits1765100000000,
+  IdempotentRequests1765100100000,
+  Meetups1765500000000,
+];

@@ -19,11 +19,24 @@ export async function seedDemoClub(dataSource: DataSource): Promise<{ created: b
     const users = new Map<string, User>();
     for (const p of DEMO_PEOPLE) {
       const user = await tx.save(
-        tx.create(User, { email: p.email, displayName: p.displayName, experienceLevel: p.experienceLevel, passwordHash, timeZone: 'Europe/London', disabledAt: null }),
+        tx.create(User, {
+          email: p.email,
+          displayName: p.displayName,
+          experienceLevel: p.experienceLevel,
+          passwordHash,
+          timeZone: 'Europe/London',
+          disabledAt: null,
+        }),
       );
       users.set(p.email, user);
       for (const [slug, role] of Object.entries(p.roles)) {
-        await tx.insert(Membership, { clubId: clubs.get(slug)!.id, userId: user.id, role, status: 'active', mentorCapacity: role === 'member' ? null : 4 });
+        await tx.insert(Membership, {
+          clubId: clubs.get(slug)!.id,
+          userId: user.id,
+          role,
+          status: 'active',
+          mentorCapacity: role === 'member' ? null : 4,
+        });
       }
     }
     for (const p of DEMO_PEOPLE) {
@@ -40,7 +53,12 @@ export async function seedDemoClub(dataSource: DataSource): Promise<{ created: b
     }
     const ids = Object.fromEntries([...users].map(([email, u]) => [email, u.id]));
     await seedDemoTanks(tx, clubs.get(DEMO_CLUBS[0].slug)!.id, ids);
-    await seedDemoMeetups(tx, { clubId: clubs.get(DEMO_CLUBS[0].slug)!.id, timeZone: DEMO_CLUBS[0].timeZone, people: ids, adminEmail: DEMO_PEOPLE[0]!.email });
+    await seedDemoMeetups(tx, {
+      clubId: clubs.get(DEMO_CLUBS[0].slug)!.id,
+      timeZone: DEMO_CLUBS[0].timeZone,
+      people: ids,
+      adminEmail: DEMO_PEOPLE[0]!.email,
+    });
     return { created: true };
   });
 }

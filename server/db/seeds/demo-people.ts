@@ -33,10 +33,48 @@ export interface DemoPerson {
 }
 
 export const DEMO_PEOPLE: DemoPerson[] = [
-  { email: 'marisol@harbourlight.example', displayName: 'Marisol Okonkwo-Hale', experienceLevel: 'experienced', roles: { harbourlight: 'admin' }, blurb: 'runs the Harbourlight club' },
-  { email: 'teodor@harbourlight.example', displayName: 'Teodor Vanstone', experienceLevel: 'experienced', roles: { harbourlight: 'mentor' }, blurb: 'mentors Jonah and Ines' },
-  { email: 'priya@harbourlight.example', displayName: 'Priya Lindqvist-Rao', experienceLevel: 'experienced', roles: { harbourlight: 'mentor', saltmarsh: 'admin' }, blurb: 'mentor at Harbourlight, admin of Saltmarsh' },
-  { email: 'jonah@harbourlight.example', displayName: 'Jonah Abernethy-Cole', experienceLevel: 'beginner', roles: { harbourlight: 'member' }, mentoredBy: { harbourlight: 'teodor@harbourlight.example' }, blurb: 'beginner, first seahorse tank' },
-  { email: 'ines@harbourlight.example', displayName: 'Ines Carvalho-Reyes', experienceLevel: 'beginner', roles: { harbourlight: 'member', saltmarsh: 'member' }, mentoredBy: { harbourlight: 'teodor@harbourlight.example' }, blurb: 'beginner, fish-only marine tank' },
-  { email: 'wendell@harbourlight.example', displayName: 'Wendell Thorsby', experienceLevel: 'some-experience', roles: { harbourlight: 'member' }, blurb: 'member without a mentor yet' },
+  {
+    email: 'marisol@harbourlight.example',
+    displayName: 'Marisol Okonkwo-Hale',
+    experienceLevel: 'experienced',
+    roles: { harbourlight: 'admin' },
+    blurb: 'runs the Harbourlight club',
+  },
+  {
+    email: 'teodor@harbourlight.example',
+    displayName: 'Teodor Vanstone',
+    experienceLevel: 'experienced',
+    roles: { harbourlight: 'mentor' },
+    blurb: 'mentors Jonah and Ines',
+  },
+  {
+    email: 'priya@harbourlight.example',
+    displayName: 'Priya Lindqvist-Rao',
+    experienceLevel: 'experienced',
+    roles: { harbourlight: 'mentor', saltmarsh: 'admin' },
+    blurb: 'mentor at Harbourlight, admin of Saltmarsh',
+  },
+  {
+    email: 'jonah@harbourlight.example',
+    displayName: 'Jonah Abernethy-Cole',
+    experienceLevel: 'beginner',
+    roles: { harbourlight: 'member' },
+    mentoredBy: { harbourlight: 'teodor@harbourlight.example' },
+    blurb: 'beginner, first seahorse tank',
+  },
+  {
+    email: 'ines@harbourlight.example',
+    displayName: 'Ines Carvalho-Reyes',
+    experienceLevel: 'beginner',
+    roles: { harbourlight: 'member', saltmarsh: 'member' },
+    mentoredBy: { harbourlight: 'teodor@harbourlight.example' },
+    blurb: 'beginner, fish-only marine tank',
+  },
+  {
+    email: 'wendell@harbourlight.example',
+    displayName: 'Wendell Thorsby',
+    experienceLevel: 'some-experience',
+    roles: { harbourlight: 'member' },
+    blurb: 'member without a mentor yet',
+  },
 ];

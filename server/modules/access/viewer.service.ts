@@ -20,7 +20,11 @@ export interface ViewerContext {
 }
 
 /** Loads everything the permission rules need for one user, fresh from the database. */
-export async function loadViewer(manager: EntityManager, userId: string, now = new Date()): Promise<ViewerContext | null> {
+export async function loadViewer(
+  manager: EntityManager,
+  userId: string,
+  now = new Date(),
+): Promise<ViewerContext | null> {
   const user = await manager.getRepository<User>('User').findOneBy({ id: userId });
   if (!user || user.disabledAt) return null;
   const memberships: MembershipView[] = await manager.query(

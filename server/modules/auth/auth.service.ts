@@ -19,36 +19,60 @@ export async function checkCredentials(m: EntityManager, email: string, password
   const user = await userByEmail(m, email);
   const ok = await verifyPassword(user?.passwordHash, password);
   if (!user || !ok || user.disabledAt) {
-    await audit(m, { actorId: user?.id ?? null, action: 'sign-in.failed', details: { known: Boolean(user) } });
+    await audit(m, {
+      actorId: user?.id ?? null,
+      action: 'sign-in.failed',
+      details: { known: Boolean(user) },
+    });
     throw errors.unauthenticated(BAD_CREDENTIALS);
   }
   await audit(m, { actorId: user.id, action: 'sign-in' });
   return user;
 }
 
-export async function updateOwnProfile(m: EntityManager, userId: string, changes: z.output<typeof updateProfileSchema>): Promise<User> {
+export async function updateOwnProfile(
+  m: EntityManager,
+  userId: string,
+  changes: z.output<typeof updateProfileSchema>,
+): Promise<User> {
   await m.update(User, { id: userId }, changes);
   return (await findUser(m, userId))!;
 }
 
 /** A reset link by e-mail for an active account; nothing (and no hint) for any other address. */
-export async function requestPasswordReset(deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>, email: string): Promise<void> {
+export async function requestPasswordReset(
+  deps: Pick<Deps, 'dataSource' | 'mailer' | 'config'>,
+  email: string,
+): Promise<void> {
   const m = deps.dataSource.manager;
   const user = await userByEmail(m, email);
   if (!user || user.disabledAt) return;
   const { token, hash } = newToken();
-  await m.insert(PasswordReset, { userId: user.id, tokenHash: hash, expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_MINUTES * 60_000) });
+  await m.insert(PasswordReset, {
+    userId: user.id,
+    tokenHash: hash,
+    expiresAt: new Date(Date.now() + PASSWORD_RESET_VALID_MINUTES * 60_000),
+  });
   const link = `${deps.config.baseUrl}/reset-password?token=${encodeURIComponent(token)}`;
   await deps.mailer.enqueue({ to: user.email, ...passwordResetMail({ clubName: 'Shoalwise', link }) });
   await audit(m, { actorId: user.id, action: 'password-reset.requested' });
 }
 
 /** Uses a reset link once: the new password is set and every session of the account ends. Returns the user's id. */
-export async function confirmPasswordReset(tx: EntityManager, token: string, passwordHash: string): Promise<string> {
-  const reset = await tx.createQueryBuilder(PasswordReset, 'r').setLock('pessimistic_write').where('r.token_hash = :hash', { hash: hashToken(token) }).getOne();
+export async function confirmPasswordReset(
+  tx: EntityManager,
+  token: string,
+  passwordHash: string,
+): Promise<string> {
+  const reset = await tx
+    .createQueryBuilder(PasswordReset, 'r')
+    .setLock('pessimistic_write')
+    .where('r.token_hash = :hash', { hash: hashToken(token) })
+    .getOne();
   if (!reset) throw errors.notFound('That reset link');
   if (reset.usedAt) throw errors.gone('That reset link was already used. Ask for a new one.');
-  if (reset.expiresAt.getTime() < Date.now()) throw errors.gone('That reset link has expired. Ask for a new one.');
+  if (reset.expiresAt.getTime() < Date.now())
+    throw errors.gone('That reset link has expired. Ask for a new one.');
   await tx.update(PasswordReset, { id: reset.id }, { usedAt: new Date() });
   await tx.update(User, { id: reset.userId }, { passwordHash });
   await endSessionsOfUser(tx, reset.userId);

@@ -4,7 +4,9 @@ import { csrfTokenFor } from '../../middleware/csrf';
 
 /** New session id at sign-in (ASVS 7.2.4): regenerate, then set the user, then save before answering. */
 export async function startSignedInSession(req: Request, userId: string, clubId?: string): Promise<string> {
-  await new Promise<void>((resolve, reject) => req.session.regenerate((err) => (err ? reject(err) : resolve())));
+  await new Promise<void>((resolve, reject) =>
+    req.session.regenerate((err) => (err ? reject(err) : resolve())),
+  );
   req.session.userId = userId;
   req.session.signedInAt = Date.now();
   if (clubId) req.session.activeClubId = clubId;
@@ -18,7 +20,11 @@ export function destroySession(req: Request): Promise<void> {
 }
 
 /** Ends every session of a user on the server (password reset, disabling), except one if given. */
-export async function endSessionsOfUser(manager: EntityManager, userId: string, exceptSid?: string): Promise<number> {
+export async function endSessionsOfUser(
+  manager: EntityManager,
+  userId: string,
+  exceptSid?: string,
+): Promise<number> {
   const rows: unknown[] = await manager.query(
     `DELETE FROM "session" WHERE sess->>'userId' = $1 AND ($2::text IS NULL OR sid <> $2) RETURNING sid`,
     [userId, exceptSid ?? null],

@@ -18,8 +18,16 @@ export interface ProfileSummary {
   basedOnKey?: string;
 }
 
-const summary = (p: CareProfile, extra: Partial<ProfileSummary> & Pick<ProfileSummary, 'source'>): ProfileSummary => ({
-  key: p.key, name: p.name, version: p.version, systemTypes: p.systemTypes, animals: p.animals, ...extra,
+const summary = (
+  p: CareProfile,
+  extra: Partial<ProfileSummary> & Pick<ProfileSummary, 'source'>,
+): ProfileSummary => ({
+  key: p.key,
+  name: p.name,
+  version: p.version,
+  systemTypes: p.systemTypes,
+  animals: p.animals,
+  ...extra,
 });
 
 async function currentDefinitions(manager: EntityManager, clubId: string) {
@@ -36,18 +44,33 @@ async function currentDefinitions(manager: EntityManager, clubId: string) {
 export async function listProfiles(manager: EntityManager, clubId: string): Promise<ProfileSummary[]> {
   const { entities, raw } = await currentDefinitions(manager, clubId);
   const club = entities.map((v, i) =>
-    summary(v.definition, { source: 'club', id: v.profileId, basedOnKey: (raw[i] as { based_on_key: string }).based_on_key }),
+    summary(v.definition, {
+      source: 'club',
+      id: v.profileId,
+      basedOnKey: (raw[i] as { based_on_key: string }).based_on_key,
+    }),
   );
-  return [...BUILT_IN_PROFILES.map((p) => summary(p, { source: 'built-in' })), ...club.sort((a, b) => a.name.localeCompare(b.name))];
+  return [
+    ...BUILT_IN_PROFILES.map((p) => summary(p, { source: 'built-in' })),
+    ...club.sort((a, b) => a.name.localeCompare(b.name)),
+  ];
 }
 
 /** The profile a tank of this club follows: a built-in by key, or the club's copy at its newest version. */
-export async function resolveProfile(manager: EntityManager, clubId: string, key: string): Promise<CareProfile | undefined> {
+export async function resolveProfile(
+  manager: EntityManager,
+  clubId: string,
+  key: string,
+): Promise<CareProfile | undefined> {
   return (await resolveProfiles(manager, clubId, [key])).get(key);
 }
 
 /** `resolveProfile` for several keys in at most one query: built-in profiles need none; unknown keys are left out. */
-export async function resolveProfiles(manager: EntityManager, clubId: string, keys: readonly string[]): Promise<Map<string, CareProfile>> {
+export async function resolveProfiles(
+  manager: EntityManager,
+  clubId: string,
+  keys: readonly string[],
+): Promise<Map<string, CareProfile>> {
   const found = new Map<string, CareProfile>();
   const clubKeys: string[] = [];
   for (const key of new Set(keys)) {
@@ -70,19 +93,55 @@ export async function resolveProfiles(manager: EntityManager, clubId: string, ke
 export async function loadClubProfile(manager: EntityManager, clubId: string, profileId: string) {
   const profile = await manager.findOneBy(ClubCareProfile, { id: profileId, clubId });
   if (!profile) throw errors.notFound('That care profile');
-  const versions = await manager.find(ClubCareProfileVersion, { where: { profileId }, order: { version: 'DESC' } });
+  const versions = await manager.find(ClubCareProfileVersion, {
+    where: { profileId },
+    order: { version: 'DESC' },
+  });
   return { profile, versions };
 }
 
-export async function copyProfile(tx: EntityManager, p: { clubId: string; basedOn: string; name: string; actorId: string }) {
+export async function copyProfile(
+  tx: EntityManager,
+  p: { clubId: string; basedOn: string; name: string; actorId: string },
+) {
   const source = await resolveProfile(tx, p.clubId, p.basedOn);
-  if (!source) throw errors.badRequest('Choose a profile to start from.', [{ path: 'basedOn', message: 'No profile with that key in this club.' }]);
-  const slug = p.name.toLowerCase().replace(/[^a-z0-9]+/g, '-').replace(/^-+|-+$/g, '').slice(0, 40) || 'profile';
+  if (!source)
+    throw errors.badRequest('Choose a profile to start from.', [
+      { path: 'basedOn', message: 'No profile with that key in this club.' },
+    ]);
+  const slug =
+    p.name
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, '-')
+      .replace(/^-+|-+$/g, '')
+      .slice(0, 40) || 'profile';
   const key = `${slug}-${randomBytes(3).toString('hex')}`;
   const definition: CareProfile = { ...structuredClone(source), key, name: p.name, version: 1 };
-  const profile = await tx.save(tx.create(ClubCareProfile, { clubId: p.clubId, key, basedOnKey: source.key, currentVersion: 1, createdById: p.actorId }));
-  await tx.insert(ClubCareProfileVersion, { profileId: profile.id, version: 1, definition, changes: [], note: `Copied from ${source.name} (version ${source.version}).`, changedById: p.actorId });
-  await audit(tx, { actorId: p.actorId, clubId: p.clubId, action: 'care-profile.copied', targetType: 'CareProfile', targetId: profile.id, details: { basedOn: source.key } });
+  const profile = await tx.save(
+    tx.create(ClubCareProfile, {
+      clubId: p.clubId,
+      key,
+      basedOnKey: source.key,
+      currentVersion: 1,
+      createdById: p.actorId,
+    }),
+  );
+  await tx.insert(ClubCareProfileVersion, {
+    profileId: profile.id,
+    version: 1,
+    definition,
+    changes: [],
+    note: `Copied from ${source.name} (version ${source.version}).`,
+    changedById: p.actorId,
+  });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: p.clubId,
+    action: 'care-profile.copied',
+    targetType: 'CareProfile',
+    targetId: profile.id,
+    details: { basedOn: source.key },
+  });
   return profile;
 }
 
@@ -90,21 +149,59 @@ export async function copyProfile(tx: EntityManager, p: { clubId: string; basedO
  * Stores an edited definition as the next version, noting who changed what. Concurrent edits: the later one gets 409.
  * Every tank that follows the profile is judged again by the new version, in the same transaction.
  */
-export async function updateProfile(tx: EntityManager, deps: Pick<Deps, 'tankChanges'>, p: { clubId: string; profileId: string; definition: unknown; note: string; actorId: string; expectedVersion?: number }) {
+export async function updateProfile(
+  tx: EntityManager,
+  deps: Pick<Deps, 'tankChanges'>,
+  p: {
+    clubId: string;
+    profileId: string;
+    definition: unknown;
+    note: string;
+    actorId: string;
+    expectedVersion?: number;
+  },
+) {
   const { profile, versions } = await loadClubProfile(tx, p.clubId, p.profileId);
   const current = versions[0]!.definition;
-  const next = careProfileSchema.parse({ ...(p.definition as object), key: profile.key, version: profile.currentVersion + 1 }) as CareProfile;
+  const next = careProfileSchema.parse({
+    ...(p.definition as object),
+    key: profile.key,
+    version: profile.currentVersion + 1,
+  }) as CareProfile;
   const changes = describeChanges({ ...current, version: undefined }, { ...next, version: undefined });
-  if (changes.length === 0) throw errors.badRequest('Nothing changed.', [{ path: 'definition', message: 'Change at least one value.' }]);
+  if (changes.length === 0)
+    throw errors.badRequest('Nothing changed.', [
+      { path: 'definition', message: 'Change at least one value.' },
+    ]);
   const bumped = await tx
     .createQueryBuilder()
     .update(ClubCareProfile)
     .set({ currentVersion: next.version })
-    .where('id = :id AND current_version = :v', { id: profile.id, v: p.expectedVersion ?? profile.currentVersion })
+    .where('id = :id AND current_version = :v', {
+      id: profile.id,
+      v: p.expectedVersion ?? profile.currentVersion,
+    })
     .execute();
-  if (bumped.affected !== 1) throw errors.conflict('Someone else changed this profile meanwhile. Reload it and make your change again.');
-  await tx.insert(ClubCareProfileVersion, { profileId: profile.id, version: next.version, definition: next, changes, note: p.note, changedById: p.actorId });
-  await audit(tx, { actorId: p.actorId, clubId: p.clubId, action: 'care-profile.changed', targetType: 'CareProfile', targetId: profile.id, details: { version: next.version, changes: changes.length } });
+  if (bumped.affected !== 1)
+    throw errors.conflict(
+      'Someone else changed this profile meanwhile. Reload it and make your change again.',
+    );
+  await tx.insert(ClubCareProfileVersion, {
+    profileId: profile.id,
+    version: next.version,
+    definition: next,
+    changes,
+    note: p.note,
+    changedById: p.actorId,
+  });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: p.clubId,
+    action: 'care-profile.changed',
+    targetType: 'CareProfile',
+    targetId: profile.id,
+    details: { version: next.version, changes: changes.length },
+  });
   await deps.tankChanges.publishForProfile(tx, p.clubId, profile.key);
   return { profile: { ...profile, currentVersion: next.version }, definition: next, changes };
 }
@@ -120,6 +217,12 @@ export async function profileDetail(manager: EntityManager, clubId: string, key:
     source: clubRow ? ('club' as const) : ('built-in' as const),
     id: clubRow?.id,
     basedOnKey: clubRow?.basedOnKey,
-    history: history.map((v) => ({ version: v.version, note: v.note, changes: v.changes, changedById: v.changedById, changedAt: v.changedAt.toISOString() })),
+    history: history.map((v) => ({
+      version: v.version,
+      note: v.note,
+      changes: v.changes,
+      changedById: v.changedById,
+      changedAt: v.changedAt.toISOString(),
+    })),
   };
 }

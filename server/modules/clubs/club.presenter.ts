@@ -20,7 +20,14 @@ export const presentMember = (m: Membership, p: { withEmail: boolean; loads: Map
   role: m.role,
   status: m.status,
   joinedAt: m.joinedAt.toISOString(),
-  ...(m.role !== 'member' ? { mentorCapacity: m.mentorCapacity ?? DEFAULT_MENTOR_CAPACITY, menteeCount: p.loads.get(m.userId) ?? 0 } : {}),
+  ...(m.role !== 'member'
+    ? { mentorCapacity: m.mentorCapacity ?? DEFAULT_MENTOR_CAPACITY, menteeCount: p.loads.get(m.userId) ?? 0 }
+    : {}),
 });
 
-export const presentMembership = (m: Membership) => ({ membershipId: m.id, userId: m.userId, role: m.role, status: m.status });
+export const presentMembership = (m: Membership) => ({
+  membershipId: m.id,
+  userId: m.userId,
+  role: m.role,
+  status: m.status,
+});

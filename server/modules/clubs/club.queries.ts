@@ -9,8 +9,15 @@ export async function findClub(m: EntityManager, clubId: string): Promise<Club |
 }
 
 /** The club's memberships the viewer may read, with their people, by name. */
-export async function membersOf(m: EntityManager, ability: AppAbility, clubId: string): Promise<Membership[]> {
-  const qb = m.createQueryBuilder(Membership, 'ms').innerJoinAndSelect('ms.user', 'u').where('ms.club_id = :clubId', { clubId });
+export async function membersOf(
+  m: EntityManager,
+  ability: AppAbility,
+  clubId: string,
+): Promise<Membership[]> {
+  const qb = m
+    .createQueryBuilder(Membership, 'ms')
+    .innerJoinAndSelect('ms.user', 'u')
+    .where('ms.club_id = :clubId', { clubId });
   whereAllowed(qb, ability, 'read', 'Membership', { clubId: 'ms.club_id', userId: 'ms.user_id' });
   return qb.orderBy('u.display_name', 'ASC').getMany();
 }
@@ -24,6 +31,10 @@ export async function mentorLoads(m: EntityManager, clubId: string): Promise<Map
   return new Map(loads.map((l) => [l.mentorId, Number(l.n)]));
 }
 
-export async function findMembership(m: EntityManager, clubId: string, membershipId: string): Promise<Membership | null> {
+export async function findMembership(
+  m: EntityManager,
+  clubId: string,
+  membershipId: string,
+): Promise<Membership | null> {
   return m.findOneBy(Membership, { id: membershipId, clubId });
 }

@@ -27,21 +27,30 @@ export function clubRouter(deps: Pick<Deps, 'dataSource'>): Router {
     const { ability } = viewerOf(req);
     const { clubId } = inputOf(res, { params: clubIdParams }).params;
     const withEmail = ability.can('update', asSubject('Membership', { clubId, userId: '' }));
-    const [rows, loads] = await Promise.all([membersOf(dataSource.manager, ability, clubId), mentorLoads(dataSource.manager, clubId)]);
+    const [rows, loads] = await Promise.all([
+      membersOf(dataSource.manager, ability, clubId),
+      mentorLoads(dataSource.manager, clubId),
+    ]);
     res.json({ members: rows.map((m) => presentMember(m, { withEmail, loads })) });
   });
 
   const update = { params: membershipParams, body: updateMembershipSchema };
-  router.patch('/clubs/:clubId/members/:membershipId', requireSignIn, validate(update), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, update);
-    authorize(req, 'update', 'Membership', { clubId: params.clubId, userId: '' });
-    const result = await dataSource.transaction(async (tx) => {
-      const m = await findMembership(tx, params.clubId, params.membershipId);
-      if (!m) throw errors.notFound('That membership');
-      return changeMembership(tx, m, body, viewerOf(req).user.id);
-    });
-    res.json({ membership: presentMembership(result) });
-  });
+  router.patch(
+    '/clubs/:clubId/members/:membershipId',
+    requireSignIn,
+    validate(update),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, update);
+      authorize(req, 'update', 'Membership', { clubId: params.clubId, userId: '' });
+      const result = await dataSource.transaction(async (tx) => {
+        const m = await findMembership(tx, params.clubId, params.membershipId);
+        if (!m) throw errors.notFound('That membership');
+        return changeMembership(tx, m, body, viewerOf(req).user.id);
+      });
+      res.json({ membership: presentMembership(result) });
+    },
+  );
 
   return router;
 }

@@ -17,7 +17,8 @@ export class ConcernRow {
   @Column({ type: 'text' }) severity!: Severity;
   @Column({ type: 'text' }) reason!: string;
   @Column({ type: 'jsonb', default: [] }) nextSteps!: string[];
-  @Column({ type: 'jsonb', nullable: true }) waterChanges!: { litres: number; fraction: number; resulting: number }[] | null;
+  @Column({ type: 'jsonb', nullable: true }) waterChanges!:
+    { litres: number; fraction: number; resulting: number }[] | null;
   @Column({ type: 'double precision', nullable: true }) value!: number | null;
   @Column({ type: 'text', nullable: true }) unit!: string | null;
   @Column({ type: 'text', default: 'open' }) status!: ConcernStatus;

@@ -20,32 +20,83 @@ export async function handleConcern(
   const now = new Date();
   const patch =
     action === 'acknowledge'
-      ? { status: 'acknowledged' as const, acknowledgedById: p.actorId, acknowledgedAt: now, acknowledgeNote: p.note || null }
-      : { status: 'resolved' as const, resolvedById: p.actorId, resolvedAt: now, resolveNote: p.note || null, resolvedByTest: false };
+      ? {
+          status: 'acknowledged' as const,
+          acknowledgedById: p.actorId,
+          acknowledgedAt: now,
+          acknowledgeNote: p.note || null,
+        }
+      : {
+          status: 'resolved' as const,
+          resolvedById: p.actorId,
+          resolvedAt: now,
+          resolveNote: p.note || null,
+          resolvedByTest: false,
+        };
   await tx.update(ConcernRow, { id: c.id }, patch);
-  await audit(tx, { actorId: p.actorId, clubId: c.clubId, action: `concern.${action}d`, targetType: 'Concern', targetId: c.id });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: c.clubId,
+    action: `concern.${action}d`,
+    targetType: 'Concern',
+    targetId: c.id,
+  });
   await deps.tankChanges.publish(tx, c.tankId, 'concern');
   return { ...c, ...patch };
 }
 
-export async function saveChecklist(m: EntityManager, tankId: string, checklist: Partial<Pick<TankReadiness, 'equipmentRunning' | 'quarantinePlan' | 'foodReady' | 'notes'>>): Promise<void> {
+export async function saveChecklist(
+  m: EntityManager,
+  tankId: string,
+  checklist: Partial<Pick<TankReadiness, 'equipmentRunning' | 'quarantinePlan' | 'foodReady' | 'notes'>>,
+): Promise<void> {
   await m.getRepository(TankReadiness).upsert({ tankId, ...checklist }, ['tankId']);
 }
 
 /** The keeper's mentor signs the tank off as ready for animals: refused (409) until everything else is met. */
-export async function signOff(tx: EntityManager, deps: Changes, tank: TankForCare, p: { actorId: string; note: string }): Promise<void> {
+export async function signOff(
+  tx: EntityManager,
+  deps: Changes,
+  tank: TankForCare,
+  p: { actorId: string; note: string },
+): Promise<void> {
   const summary = await careSummary(tx, tank);
   const missing = summary.readiness.items.filter((i) => i.key !== 'mentor-sign-off' && !i.met);
   if (missing.length) {
-    throw errors.conflict(`Not ready to sign off yet: ${missing.map((i) => i.label.toLowerCase()).join('; ')}.`);
+    throw errors.conflict(
+      `Not ready to sign off yet: ${missing.map((i) => i.label.toLowerCase()).join('; ')}.`,
+    );
   }
-  await tx.getRepository(TankReadiness).upsert({ tankId: tank.id, signedOffById: p.actorId, signedOffAt: new Date(), signOffNote: p.note }, ['tankId']);
-  await audit(tx, { actorId: p.actorId, clubId: tank.clubId, action: 'tank.signed-off', targetType: 'Tank', targetId: tank.id });
+  await tx
+    .getRepository(TankReadiness)
+    .upsert({ tankId: tank.id, signedOffById: p.actorId, signedOffAt: new Date(), signOffNote: p.note }, [
+      'tankId',
+    ]);
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: tank.clubId,
+    action: 'tank.signed-off',
+    targetType: 'Tank',
+    targetId: tank.id,
+  });
   await deps.tankChanges.publish(tx, tank.id, 'sign-off');
 }
 
-export async function withdrawSignOff(tx: EntityManager, deps: Changes, tank: TankForCare, actorId: string): Promise<void> {
-  await tx.getRepository(TankReadiness).update({ tankId: tank.id }, { signedOffById: null, signedOffAt: null, signOffNote: null });
-  await audit(tx, { actorId, clubId: tank.clubId, action: 'tank.sign-off-withdrawn', targetType: 'Tank', targetId: tank.id });
+export async function withdrawSignOff(
+  tx: EntityManager,
+  deps: Changes,
+  tank: TankForCare,
+  actorId: string,
+): Promise<void> {
+  await tx
+    .getRepository(TankReadiness)
+    .update({ tankId: tank.id }, { signedOffById: null, signedOffAt: null, signOffNote: null });
+  await audit(tx, {
+    actorId,
+    clubId: tank.clubId,
+    action: 'tank.sign-off-withdrawn',
+    targetType: 'Tank',
+    targetId: tank.id,
+  });
   await deps.tankChanges.publish(tx, tank.id, 'sign-off');
 }

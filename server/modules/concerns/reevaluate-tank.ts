@@ -31,7 +31,10 @@ function stockingConcern(): Concern {
     severity: 'caution',
     rule: STOCKED_WITHOUT_SIGN_OFF,
     reason: 'Animals were added before a mentor signed the tank off as ready.',
-    nextSteps: ['Test ammonia and nitrite daily for the next two weeks.', 'Ask your mentor to look over the tank.'],
+    nextSteps: [
+      'Test ammonia and nitrite daily for the next two weeks.',
+      'Ask your mentor to look over the tank.',
+    ],
   };
 }
 
@@ -42,7 +45,12 @@ function measuredBy(latest: WaterTestInput | undefined, concern: ConcernRow): bo
   return (latest.values as Record<string, number | undefined>)[p] !== undefined;
 }
 
-export async function concernsFor(m: EntityManager, tank: TankForCare, profile: CareProfile, now: Date): Promise<{ concerns: Concern[]; latest?: WaterTestInput }> {
+export async function concernsFor(
+  m: EntityManager,
+  tank: TankForCare,
+  profile: CareProfile,
+  now: Date,
+): Promise<{ concerns: Concern[]; latest?: WaterTestInput }> {
   const history = await careHistory(m, tank.id, now);
   const latest = history.at(-1);
   const fired: Concern[] = [];
@@ -50,7 +58,12 @@ export async function concernsFor(m: EntityManager, tank: TankForCare, profile: 
     const sourceNitrate = await lastSourceNitrate(m, tank.id);
     fired.push(
       ...evaluateReading(latest, profile, {
-        tank: { volumeL: tank.volumeL, phase: tank.phase, systemType: tank.systemType, hasLivestock: tank.hasLivestock },
+        tank: {
+          volumeL: tank.volumeL,
+          phase: tank.phase,
+          systemType: tank.systemType,
+          hasLivestock: tank.hasLivestock,
+        },
         history,
         // The same last known values the test's stored free ammonia used, however old.
         lastKnown: await lastKnownBefore(m, tank.id, latest),
@@ -59,7 +72,15 @@ export async function concernsFor(m: EntityManager, tank: TankForCare, profile: 
       }),
     );
   }
-  fired.push(...overdueConcerns(dueTests({ phase: tank.phase, systemType: tank.systemType, profile, createdAt: tank.createdAt }, history, now.toISOString())));
+  fired.push(
+    ...overdueConcerns(
+      dueTests(
+        { phase: tank.phase, systemType: tank.systemType, profile, createdAt: tank.createdAt },
+        history,
+        now.toISOString(),
+      ),
+    ),
+  );
   if (tank.hasLivestock) {
     const readiness = await m.findOneBy(TankReadiness, { tankId: tank.id });
     if (!readiness?.signedOffAt) fired.push(stockingConcern());
@@ -71,7 +92,11 @@ export async function concernsFor(m: EntityManager, tank: TankForCare, profile: 
  * Brings a tank's stored concerns in line with its current readings: one live concern per cause,
  * updated in place; a cause that a later test no longer shows is resolved (and stays in history).
  */
-export async function reevaluateTank(tx: EntityManager, tankId: string, now = new Date()): Promise<Reevaluation> {
+export async function reevaluateTank(
+  tx: EntityManager,
+  tankId: string,
+  now = new Date(),
+): Promise<Reevaluation> {
   const result: Reevaluation = { raised: [], changed: [], cleared: [] };
   const tank = await tankForCare(tx, tankId);
   if (!tank || tank.archived) return result;
@@ -89,8 +114,14 @@ export async function reevaluateTank(tx: EntityManager, tankId: string, now = ne
 
   for (const c of concerns) {
     const fields = {
-      parameter: c.parameter, severity: c.severity, reason: c.reason, nextSteps: c.nextSteps, waterChanges: c.waterChanges ?? null,
-      value: c.value ?? null, unit: c.unit ?? null, lastSeenAt: now,
+      parameter: c.parameter,
+      severity: c.severity,
+      reason: c.reason,
+      nextSteps: c.nextSteps,
+      waterChanges: c.waterChanges ?? null,
+      value: c.value ?? null,
+      unit: c.unit ?? null,
+      lastSeenAt: now,
     };
     const existing = liveByRule.get(c.rule);
     if (existing) {
@@ -99,20 +130,45 @@ export async function reevaluateTank(tx: EntityManager, tankId: string, now = ne
       const same = existing.severity === c.severity && existing.reason === c.reason;
       // A concern that got worse needs eyes again even if someone had acknowledged it.
       const status = worse ? 'open' : existing.status;
-      await tx.update(ConcernRow, { id: existing.id }, { ...fields, status, waterTestId: RECOMPUTED(c.rule) ? existing.waterTestId : latestId });
+      await tx.update(
+        ConcernRow,
+        { id: existing.id },
+        { ...fields, status, waterTestId: RECOMPUTED(c.rule) ? existing.waterTestId : latestId },
+      );
       if (!same) result.changed.push({ ...existing, ...fields, status });
     } else {
       const row = tx.create(ConcernRow, {
-        ...fields, clubId: tank.clubId, tankId, ownerId: tank.ownerId, rule: c.rule, status: 'open', raisedAt: now,
+        ...fields,
+        clubId: tank.clubId,
+        tankId,
+        ownerId: tank.ownerId,
+        rule: c.rule,
+        status: 'open',
+        raisedAt: now,
         waterTestId: RECOMPUTED(c.rule) ? null : latestId,
-        acknowledgedById: null, acknowledgedAt: null, acknowledgeNote: null, resolvedById: null, resolvedAt: null, resolveNote: null, resolvedByTest: false,
+        acknowledgedById: null,
+        acknowledgedAt: null,
+        acknowledgeNote: null,
+        resolvedById: null,
+        resolvedAt: null,
+        resolveNote: null,
+        resolvedByTest: false,
       });
       result.raised.push(await tx.save(row));
     }
   }
   const toClear = [...liveByRule.values()].filter((c) => RECOMPUTED(c.rule) || measuredBy(latest, c));
   if (toClear.length) {
-    await tx.update(ConcernRow, { id: In(toClear.map((c) => c.id)) }, { status: 'resolved', resolvedAt: now, resolvedByTest: true, resolveNote: 'A later test no longer shows it.' });
+    await tx.update(
+      ConcernRow,
+      { id: In(toClear.map((c) => c.id)) },
+      {
+        status: 'resolved',
+        resolvedAt: now,
+        resolvedByTest: true,
+        resolveNote: 'A later test no longer shows it.',
+      },
+    );
     result.cleared.push(...toClear.map((c) => ({ ...c, status: 'resolved' as const, resolvedAt: now })));
   }
   return result;

@@ -3,7 +3,14 @@ import { PARAMETER_KEYS, parameterInfo } from '@shared/care/parameters';
 import { parameterHeader } from '@shared/readings/csv-columns';
 import { valuesOf, type TankEvent, type WaterTest } from '../tanks';
 
-export const EXPORT_HEADERS = ['record', 'date (UTC)', ...PARAMETER_KEYS.map(parameterHeader), parameterHeader('freeAmmonia'), 'note', 'details'];
+export const EXPORT_HEADERS = [
+  'record',
+  'date (UTC)',
+  ...PARAMETER_KEYS.map(parameterHeader),
+  parameterHeader('freeAmmonia'),
+  'note',
+  'details',
+];
 
 /** A little more precision than the screen shows, so a re-import gives back the same readings. */
 const number = (key: Parameters<typeof parameterInfo>[0], v: number | null | undefined) =>
@@ -22,7 +29,10 @@ function plain(value: unknown): string {
 
 /** "water-change: 20 L (25 %), sourceWater ro-di-fresh" — readable in a spreadsheet cell. */
 function describeEvent(e: TankEvent): string {
-  const amount = e.computed.litres !== undefined ? `${Number(e.computed.litres.toFixed(1))} L (${Math.round((e.computed.fraction ?? 0) * 100)} %)` : '';
+  const amount =
+    e.computed.litres !== undefined
+      ? `${Number(e.computed.litres.toFixed(1))} L (${Math.round((e.computed.fraction ?? 0) * 100)} %)`
+      : '';
   const { volumeL: _v, percent: _p, livestockId: _l, ...rest } = e.details as Record<string, unknown>;
   return [amount, plain(rest)].filter(Boolean).join(', ');
 }
@@ -37,12 +47,26 @@ export function exportCsv(tests: readonly WaterTest[], events: readonly TankEven
       const values = valuesOf(t);
       return {
         at: t.takenAt.getTime(),
-        cells: ['water-test', t.takenAt.toISOString(), ...PARAMETER_KEYS.map((k) => number(k, values[k])), number('freeAmmonia', t.freeAmmoniaMgL), t.note, ''],
+        cells: [
+          'water-test',
+          t.takenAt.toISOString(),
+          ...PARAMETER_KEYS.map((k) => number(k, values[k])),
+          number('freeAmmonia', t.freeAmmoniaMgL),
+          t.note,
+          '',
+        ],
       };
     }),
     ...events.map((e) => ({
       at: e.occurredAt.getTime(),
-      cells: [e.kind, e.occurredAt.toISOString(), ...PARAMETER_KEYS.map(() => ''), '', e.note, describeEvent(e)],
+      cells: [
+        e.kind,
+        e.occurredAt.toISOString(),
+        ...PARAMETER_KEYS.map(() => ''),
+        '',
+        e.note,
+        describeEvent(e),
+      ],
     })),
   ].sort((a, b) => a.at - b.at);
   return `\uFEFF${Papa.unparse({ fields: EXPORT_HEADERS, data: rows.map((r) => r.cells) }, { escapeFormulae: true, newline: '\r\n' })}\r\n`;

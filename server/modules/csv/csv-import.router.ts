@@ -16,26 +16,38 @@ export function csvImportRouter(deps: Pick<Deps, 'dataSource' | 'tankChanges'>):
   const router = Router();
   const route = { params: tankParams, body: csvImportSchema };
 
-  router.post(`${IMPORT_ROUTES_PREFIX}/preview`, requireSignIn, validate(route), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, route);
-    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
-    authorize(req, 'create', 'WaterTest', ownedBy(tank));
-    requireActive(tank);
-    const { preview } = await analyzeForTank(dataSource.manager, tank, body, viewerOf(req).user.timeZone);
-    res.json(preview);
-  });
-
-  router.post(`${IMPORT_ROUTES_PREFIX}/commit`, requireSignIn, validate(route), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, route);
-    const { user } = viewerOf(req);
-    const result = await dataSource.transaction(async (tx) => {
-      const tank = await loadTank(tx, params.clubId, params.tankId);
+  router.post(
+    `${IMPORT_ROUTES_PREFIX}/preview`,
+    requireSignIn,
+    validate(route),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, route);
+      const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
       authorize(req, 'create', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      return commitImport(tx, deps, tank, body, user.timeZone, user.id);
-    });
-    res.json(result);
-  });
+      const { preview } = await analyzeForTank(dataSource.manager, tank, body, viewerOf(req).user.timeZone);
+      res.json(preview);
+    },
+  );
+
+  router.post(
+    `${IMPORT_ROUTES_PREFIX}/commit`,
+    requireSignIn,
+    validate(route),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, route);
+      const { user } = viewerOf(req);
+      const result = await dataSource.transaction(async (tx) => {
+        const tank = await loadTank(tx, params.clubId, params.tankId);
+        authorize(req, 'create', 'WaterTest', ownedBy(tank));
+        requireActive(tank);
+        return commitImport(tx, deps, tank, body, user.timeZone, user.id);
+      });
+      res.json(result);
+    },
+  );
 
   return router;
 }

@@ -16,7 +16,14 @@ export function deskRouter(deps: Pick<Deps, 'dataSource'>): Router {
     const role = viewer.memberships.find((m) => m.clubId === params.clubId)?.role;
     // The desk is for people who watch other people's tanks; a member's own tanks are on their tank list.
     if (role === 'member') throw errors.forbidden('The mentor desk is for mentors and club admins.');
-    res.json(await buildDesk(deps.dataSource.manager, { clubId: params.clubId, viewerId: viewer.user.id, ability: viewer.ability, filters: query }));
+    res.json(
+      await buildDesk(deps.dataSource.manager, {
+        clubId: params.clubId,
+        viewerId: viewer.user.id,
+        ability: viewer.ability,
+        filters: query,
+      }),
+    );
   });
   return router;
 }

@@ -1,6 +1,14 @@
 import type { EntityManager } from 'typeorm';
 import type { AppAbility } from '@shared/abilities';
-import { cycleStage, isTrendRule, parameterInfo, rankTanks, severityRank, type ParameterKey, type TankState } from '@shared/care';
+import {
+  cycleStage,
+  isTrendRule,
+  parameterInfo,
+  rankTanks,
+  severityRank,
+  type ParameterKey,
+  type TankState,
+} from '@shared/care';
 import type { DeskRow, DeskView } from '@shared/schemas/desk.schema';
 import { abilityCondition } from '../access';
 import { ConcernRow } from '../concerns';
@@ -38,10 +46,21 @@ export async function buildDesk(
   const watch = abilityCondition(p.ability, 'watch', 'Tank', { clubId: 't.club_id', ownerId: 't.owner_id' });
   const tanks: TankRow[] = await m
     .createQueryBuilder()
-    .select(['t.id AS id', 't.name AS name', 't.owner_id AS "ownerId"', 'u.display_name AS "ownerName"', 't.phase AS phase', 't.system_type AS "systemType"', 't.created_at AS "createdAt"'])
+    .select([
+      't.id AS id',
+      't.name AS name',
+      't.owner_id AS "ownerId"',
+      'u.display_name AS "ownerName"',
+      't.phase AS phase',
+      't.system_type AS "systemType"',
+      't.created_at AS "createdAt"',
+    ])
     .from('tank', 't')
     .innerJoin('app_user', 'u', 'u.id = t.owner_id')
-    .where('t.club_id = :clubId AND t.archived_at IS NULL AND t.owner_id <> :viewerId', { clubId: p.clubId, viewerId: p.viewerId })
+    .where('t.club_id = :clubId AND t.archived_at IS NULL AND t.owner_id <> :viewerId', {
+      clubId: p.clubId,
+      viewerId: p.viewerId,
+    })
     .andWhere(watch.sql, watch.params)
     .getRawMany();
   if (!tanks.length) return { rows: [], total: 0, generatedAt: now.toISOString() };
@@ -58,9 +77,27 @@ export async function buildDesk(
   for (const t of tanks) {
     const history = await careHistory(m, t.id, now, 60);
     const last = history.at(-1);
-    const mine = concerns.filter((c) => c.tankId === t.id).sort((a, b) => severityRank(b.severity) - severityRank(a.severity) || +b.raisedAt - +a.raisedAt);
+    const mine = concerns
+      .filter((c) => c.tankId === t.id)
+      .sort((a, b) => severityRank(b.severity) - severityRank(a.severity) || +b.raisedAt - +a.raisedAt);
     const worst = mine[0];
-    const sparkParam = worst && worst.parameter in { temperature: 1, salinity: 1, pH: 1, ammonia: 1, nitrite: 1, nitrate: 1, alkalinity: 1, calcium: 1, magnesium: 1, phosphate: 1 } ? (worst.parameter as ParameterKey) : undefined;
+    const sparkParam =
+      worst &&
+      worst.parameter in
+        {
+          temperature: 1,
+          salinity: 1,
+          pH: 1,
+          ammonia: 1,
+          nitrite: 1,
+          nitrate: 1,
+          alkalinity: 1,
+          calcium: 1,
+          magnesium: 1,
+          phosphate: 1,
+        }
+        ? (worst.parameter as ParameterKey)
+        : undefined;
     const sinceSpark = now.getTime() - SPARK_DAYS * DAY_MS;
     const createdAt = new Date(t.createdAt).toISOString();
     states.push({
@@ -88,7 +125,14 @@ export async function buildDesk(
         info: mine.filter((c) => c.severity === 'info').length,
       },
       worstConcern: worst
-        ? { id: worst.id, severity: worst.severity, reason: worst.reason, parameter: worst.parameter, raisedAt: worst.raisedAt.toISOString(), status: worst.status as 'open' | 'acknowledged' }
+        ? {
+            id: worst.id,
+            severity: worst.severity,
+            reason: worst.reason,
+            parameter: worst.parameter,
+            raisedAt: worst.raisedAt.toISOString(),
+            status: worst.status as 'open' | 'acknowledged',
+          }
         : null,
       sparkline: sparkParam
         ? {

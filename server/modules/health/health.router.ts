@@ -12,7 +12,9 @@ export function healthRouter({ dataSource }: Pick<Deps, 'dataSource'>): Router {
     if (up) return void res.json({ status: 'ok', database: 'up', uptimeSeconds });
     // The same error shape as every other 503, so a client shows one message for "the service is down".
     const { code, message } = errors.unavailable();
-    res.status(503).json({ status: 'unavailable', database: 'down', uptimeSeconds, error: { code, message } });
+    res
+      .status(503)
+      .json({ status: 'unavailable', database: 'down', uptimeSeconds, error: { code, message } });
   });
   return router;
 }

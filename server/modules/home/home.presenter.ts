@@ -4,10 +4,13 @@ import type { HomeGoodNews, HomeQuestion, HomeTank, HomeView } from '@shared/sch
 import type { ConcernRow } from '../concerns';
 import type { GoodNewsRow, HomeData, QuestionRow } from './home.queries';
 
-const excerpt = (text: string) => (text.length > HOME_REPLY_EXCERPT_MAX ? `${text.slice(0, HOME_REPLY_EXCERPT_MAX - 1).trimEnd()}…` : text);
+const excerpt = (text: string) =>
+  text.length > HOME_REPLY_EXCERPT_MAX ? `${text.slice(0, HOME_REPLY_EXCERPT_MAX - 1).trimEnd()}…` : text;
 
 function worstOf(concerns: readonly ConcernRow[]): ConcernRow | undefined {
-  return [...concerns].sort((a, b) => severityRank(b.severity) - severityRank(a.severity) || +b.raisedAt - +a.raisedAt)[0];
+  return [...concerns].sort(
+    (a, b) => severityRank(b.severity) - severityRank(a.severity) || +b.raisedAt - +a.raisedAt,
+  )[0];
 }
 
 function presentQuestion(q: QuestionRow): HomeQuestion {
@@ -19,17 +22,32 @@ function presentQuestion(q: QuestionRow): HomeQuestion {
     status: q.status,
     lastActivityAt: new Date(q.lastActivityAt).toISOString(),
     lastReply: q.lastReply
-      ? { author: { userId: q.lastReply.authorId, displayName: q.lastReply.authorName }, excerpt: excerpt(q.lastReply.excerpt), at: new Date(q.lastReply.at).toISOString() }
+      ? {
+          author: { userId: q.lastReply.authorId, displayName: q.lastReply.authorName },
+          excerpt: excerpt(q.lastReply.excerpt),
+          at: new Date(q.lastReply.at).toISOString(),
+        }
       : null,
     unreadNotificationIds: q.unreadNotificationIds,
   };
 }
 
 function presentGoodNews(g: GoodNewsRow): HomeGoodNews {
-  const base = { tankId: g.tankId, tankName: g.tankName, by: { userId: g.byId, displayName: g.byName }, at: new Date(g.at).toISOString(), note: g.note ?? '' };
+  const base = {
+    tankId: g.tankId,
+    tankName: g.tankName,
+    by: { userId: g.byId, displayName: g.byName },
+    at: new Date(g.at).toISOString(),
+    note: g.note ?? '',
+  };
   return g.kind === 'signed-off'
     ? { kind: 'signed-off', ...base }
-    : { kind: 'concern-resolved', ...base, parameter: g.parameter as Extract<HomeGoodNews, { kind: 'concern-resolved' }>['parameter'], reason: g.reason ?? '' };
+    : {
+        kind: 'concern-resolved',
+        ...base,
+        parameter: g.parameter as Extract<HomeGoodNews, { kind: 'concern-resolved' }>['parameter'],
+        reason: g.reason ?? '',
+      };
 }
 
 /** The home from what `loadHome` read: the care engine judges each tank (cycle stage, tests due) at `now`. */
@@ -49,12 +67,27 @@ export function presentHome(data: HomeData, now: Date): HomeView {
       cycleStage: cycleStage(history, { now: iso }).stage,
       hasLivestock,
       worstConcern: worst
-        ? { id: worst.id, severity: worst.severity, parameter: worst.parameter, reason: worst.reason, raisedAt: worst.raisedAt.toISOString() }
+        ? {
+            id: worst.id,
+            severity: worst.severity,
+            parameter: worst.parameter,
+            reason: worst.reason,
+            raisedAt: worst.raisedAt.toISOString(),
+          }
         : null,
       liveConcerns: mine.length,
-      due: dueTests({ phase: tank.phase, systemType: tank.systemType, profile, createdAt: tank.createdAt.toISOString() }, history, iso),
+      due: dueTests(
+        { phase: tank.phase, systemType: tank.systemType, profile, createdAt: tank.createdAt.toISOString() },
+        history,
+        iso,
+      ),
       lastTest: last ? { id: last.id, takenAt: last.takenAt, values: last.values } : null,
     };
   });
-  return { generatedAt: iso, tanks, questions: data.questions.map(presentQuestion), goodNews: data.goodNews.map(presentGoodNews) };
+  return {
+    generatedAt: iso,
+    tanks,
+    questions: data.questions.map(presentQuestion),
+    goodNews: data.goodNews.map(presentGoodNews),
+  };
 }

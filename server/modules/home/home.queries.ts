@@ -45,15 +45,25 @@ export interface HomeData {
 
 /** Concerns still open or acknowledged on these tanks, as far as the viewer may read them. */
 function liveConcerns(m: EntityManager, ability: AppAbility, tankIds: string[]): Promise<ConcernRow[]> {
-  const qb = m.createQueryBuilder(ConcernRow, 'c').where("c.tank_id IN (:...tankIds) AND c.status <> 'resolved'", { tankIds });
-  return whereAllowed(qb, ability, 'read', 'Concern', { clubId: 'c.club_id', ownerId: 'c.owner_id' }).getMany();
+  const qb = m
+    .createQueryBuilder(ConcernRow, 'c')
+    .where("c.tank_id IN (:...tankIds) AND c.status <> 'resolved'", { tankIds });
+  return whereAllowed(qb, ability, 'read', 'Concern', {
+    clubId: 'c.club_id',
+    ownerId: 'c.owner_id',
+  }).getMany();
 }
 
 /**
  * The viewer's own questions in the club that are open or carry a notification they have not read, newest activity
  * first, each with its latest reply and those unread notifications.
  */
-function myQuestions(m: EntityManager, ability: AppAbility, clubId: string, viewerId: string): Promise<QuestionRow[]> {
+function myQuestions(
+  m: EntityManager,
+  ability: AppAbility,
+  clubId: string,
+  viewerId: string,
+): Promise<QuestionRow[]> {
   const unread = `ARRAY(SELECT n.id FROM notification n
      WHERE n.user_id = :viewerId AND n.read_at IS NULL AND n.subject_type = 'Question' AND n.subject_id = q.id::text
      ORDER BY n.created_at)`;
@@ -68,13 +78,20 @@ function myQuestions(m: EntityManager, ability: AppAbility, clubId: string, view
     .addSelect('t.name', 'tankName')
     .addSelect('q.title', 'title')
     .addSelect('q.status', 'status')
-    .addSelect('COALESCE((SELECT max(r.created_at) FROM question_reply r WHERE r.question_id = q.id), q.created_at)', 'lastActivityAt')
+    .addSelect(
+      'COALESCE((SELECT max(r.created_at) FROM question_reply r WHERE r.question_id = q.id), q.created_at)',
+      'lastActivityAt',
+    )
     .addSelect(lastReply, 'lastReply')
     .addSelect(unread, 'unreadNotificationIds')
     .where('q.club_id = :clubId AND q.asker_id = :viewerId', { clubId, viewerId })
     .andWhere(`(q.status = 'open' OR cardinality(${unread}) > 0)`);
   whereAllowed(qb, ability, 'read', 'Question', { clubId: 'q.club_id', askerId: 'q.asker_id' });
-  return qb.orderBy('"lastActivityAt"', 'DESC').addOrderBy('q.id', 'DESC').limit(HOME_QUESTIONS_MAX).getRawMany<QuestionRow>();
+  return qb
+    .orderBy('"lastActivityAt"', 'DESC')
+    .addOrderBy('q.id', 'DESC')
+    .limit(HOME_QUESTIONS_MAX)
+    .getRawMany<QuestionRow>();
 }
 
 /** Sign-offs of these tanks and concerns on them resolved by someone other than the keeper, since `since`. */
@@ -100,13 +117,21 @@ async function goodNewsOf(m: EntityManager, tankIds: string[], since: Date): Pro
  * however many tanks there are: tanks (2), test histories (1), club profiles (0–1), concerns (1), questions (1),
  * good news (1). Every list is filtered by the viewer's permission rules in SQL.
  */
-export async function loadHome(m: EntityManager, p: { ability: AppAbility; clubId: string; viewerId: string; now: Date }): Promise<HomeData> {
+export async function loadHome(
+  m: EntityManager,
+  p: { ability: AppAbility; clubId: string; viewerId: string; now: Date },
+): Promise<HomeData> {
   const tanks = await listTanks(m, p.ability, p.clubId, { ownerId: p.viewerId });
   const ids = tanks.map((t) => t.tank.id);
   const questions = await myQuestions(m, p.ability, p.clubId, p.viewerId);
-  if (!ids.length) return { tanks, histories: new Map(), profiles: new Map(), concerns: [], questions, goodNews: [] };
+  if (!ids.length)
+    return { tanks, histories: new Map(), profiles: new Map(), concerns: [], questions, goodNews: [] };
   const histories = await careHistories(m, ids, p.now);
-  const profiles = await resolveProfiles(m, p.clubId, tanks.map((t) => t.tank.careProfileKey));
+  const profiles = await resolveProfiles(
+    m,
+    p.clubId,
+    tanks.map((t) => t.tank.careProfileKey),
+  );
   const concerns = await liveConcerns(m, p.ability, ids);
   const goodNews = await goodNewsOf(m, ids, new Date(p.now.getTime() - GOOD_NEWS_DAYS * DAY_MS));
   return { tanks, histories, profiles, concerns, questions, goodNews };

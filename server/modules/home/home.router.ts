@@ -15,7 +15,12 @@ export function homeRouter(deps: Pick<Deps, 'dataSource'>): Router {
     const viewer = viewerOf(req);
     authorize(req, 'read', 'Club', { id: params.clubId });
     const now = new Date();
-    const data = await loadHome(deps.dataSource.manager, { ability: viewer.ability, clubId: params.clubId, viewerId: viewer.user.id, now });
+    const data = await loadHome(deps.dataSource.manager, {
+      ability: viewer.ability,
+      clubId: params.clubId,
+      viewerId: viewer.user.id,
+      now,
+    });
     res.json(presentHome(data, now));
   });
   return router;

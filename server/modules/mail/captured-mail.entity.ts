@@ -12,6 +12,10 @@ export class CapturedMail {
   /** Raw header values by lower-case name (e.g. list-unsubscribe). */
   @Column({ type: 'jsonb', default: {} }) headers!: Record<string, string>;
   /** Attachments as text (the test mail server only ever sees small text ones, such as .ics files). */
-  @Column({ type: 'jsonb', default: [] }) attachments!: { filename: string; contentType: string; content: string }[];
+  @Column({ type: 'jsonb', default: [] }) attachments!: {
+    filename: string;
+    contentType: string;
+    content: string;
+  }[];
   @CreateDateColumn({ type: 'timestamptz' }) receivedAt!: Date;
 }

@@ -28,7 +28,8 @@ ${m.attachments.map((a) => `<details><summary>Attachment ${escapeHtml(a.filename
 </article>`,
       )
       .join('');
-    res.type('html').send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
+    res.type('html')
+      .send(`<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width,initial-scale=1">
 <title>Outbox · Shoalwise (development)</title><link rel="icon" href="/favicon.svg">
 <style>body{font-family:Nunito,system-ui,sans-serif;background:#fbf9f4;color:#0a2631;max-width:860px;margin:auto;padding:16px}
 article{background:#fff;border-radius:14px;padding:16px;margin:12px 0;box-shadow:0 1px 4px #0a263118}h2{margin:0 0 4px;font-size:1.1rem}

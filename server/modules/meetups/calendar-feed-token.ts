@@ -5,8 +5,10 @@ import { safeEqual } from '../../lib/tokens';
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 // A key of its own, derived from the session secret: a signature made here is worthless for anything else.
-const keyFrom = (secret: string) => createHmac('sha256', secret).update('shoalwise:calendar-feed:v1').digest();
-const sign = (secret: string, payload: string) => createHmac('sha256', keyFrom(secret)).update(payload).digest('base64url');
+const keyFrom = (secret: string) =>
+  createHmac('sha256', secret).update('shoalwise:calendar-feed:v1').digest();
+const sign = (secret: string, payload: string) =>
+  createHmac('sha256', keyFrom(secret)).update(payload).digest('base64url');
 
 /**
  * `<base64url(userId:generation)>.<HMAC-SHA256>`. It only ever reads that person's meetups; resetting the link
@@ -17,7 +19,10 @@ export function signFeedToken(secret: string, userId: string, generation: number
   return `${payload}.${sign(secret, payload)}`;
 }
 
-export function verifyFeedToken(secret: string, token: string): { userId: string; generation: number } | null {
+export function verifyFeedToken(
+  secret: string,
+  token: string,
+): { userId: string; generation: number } | null {
   const [payload, signature, extra] = token.split('.');
   if (!payload || !signature || extra !== undefined) return null;
   if (!safeEqual(signature, sign(secret, payload))) return null;
@@ -27,7 +32,9 @@ export function verifyFeedToken(secret: string, token: string): { userId: string
 }
 
 export async function feedGeneration(manager: EntityManager, userId: string): Promise<number> {
-  const [row] = (await manager.query(`SELECT generation FROM calendar_feed WHERE user_id = $1`, [userId])) as { generation: number }[];
+  const [row] = (await manager.query(`SELECT generation FROM calendar_feed WHERE user_id = $1`, [
+    userId,
+  ])) as { generation: number }[];
   return row?.generation ?? 1;
 }
 

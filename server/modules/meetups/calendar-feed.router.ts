@@ -21,11 +21,28 @@ export function calendarFeedRouter(deps: MeetupDeps): Router {
     const { params } = inputOf(res, feed);
     const claim = verifyFeedToken(config.sessionSecret, params.token);
     if (!claim) throw errors.notFound('That calendar');
-    const [user] = (await dataSource.query(`SELECT display_name AS "displayName" FROM app_user WHERE id = $1 AND disabled_at IS NULL`, [claim.userId])) as { displayName: string }[];
-    if (!user || claim.generation !== (await feedGeneration(dataSource.manager, claim.userId))) throw errors.notFound('That calendar');
-    const rows = await feedMeetups(dataSource.manager, claim.userId, new Date(Date.now() - FEED_PAST_DAYS * 86_400_000));
-    const entries = rows.map((r) => ({ meetup: r.meetup, timeZone: r.timeZone, clubName: r.clubName, url: `${config.baseUrl}/meetups/${r.meetup.id}`, waitlisted: r.waitlisted }));
-    res.type('text/calendar; charset=utf-8').set('Cache-Control', 'private, max-age=300').send(calendarFile(entries, `Shoalwise meetups · ${user.displayName}`));
+    const [user] = (await dataSource.query(
+      `SELECT display_name AS "displayName" FROM app_user WHERE id = $1 AND disabled_at IS NULL`,
+      [claim.userId],
+    )) as { displayName: string }[];
+    if (!user || claim.generation !== (await feedGeneration(dataSource.manager, claim.userId)))
+      throw errors.notFound('That calendar');
+    const rows = await feedMeetups(
+      dataSource.manager,
+      claim.userId,
+      new Date(Date.now() - FEED_PAST_DAYS * 86_400_000),
+    );
+    const entries = rows.map((r) => ({
+      meetup: r.meetup,
+      timeZone: r.timeZone,
+      clubName: r.clubName,
+      url: `${config.baseUrl}/meetups/${r.meetup.id}`,
+      waitlisted: r.waitlisted,
+    }));
+    res
+      .type('text/calendar; charset=utf-8')
+      .set('Cache-Control', 'private, max-age=300')
+      .send(calendarFile(entries, `Shoalwise meetups · ${user.displayName}`));
   });
   return router;
 }

@@ -5,7 +5,20 @@ import type { MailAttachment } from '../../mail/mailer';
 import type { Meetup } from './meetup.entity';
 
 export interface CalendarEntry {
-  meetup: Pick<Meetup, 'id' | 'kind' | 'title' | 'description' | 'startsAt' | 'endsAt' | 'placeText' | 'onlineUrl' | 'status' | 'sequence' | 'cancelReason'>;
+  meetup: Pick<
+    Meetup,
+    | 'id'
+    | 'kind'
+    | 'title'
+    | 'description'
+    | 'startsAt'
+    | 'endsAt'
+    | 'placeText'
+    | 'onlineUrl'
+    | 'status'
+    | 'sequence'
+    | 'cancelReason'
+  >;
   timeZone: string;
   clubName: string;
   /** The meetup's page in the app. */
@@ -51,12 +64,19 @@ export function meetupEvent(e: CalendarEntry): EventAttributes {
 
 /** An iCalendar file of these events. An empty feed is still a valid calendar. */
 export function calendarFile(entries: CalendarEntry[], calName: string): string {
-  const { error, value } = createEvents(entries.map(meetupEvent), { productId: 'shoalwise/meetups', calName });
+  const { error, value } = createEvents(entries.map(meetupEvent), {
+    productId: 'shoalwise/meetups',
+    calName,
+  });
   if (error || value === null) throw error ?? new Error('the calendar could not be built');
   return value;
 }
 
 /** The .ics attached to a meetup's e-mails. */
 export function icsAttachment(entry: CalendarEntry): MailAttachment {
-  return { filename: 'meetup.ics', contentType: 'text/calendar; charset=utf-8; method=PUBLISH', content: calendarFile([entry], entry.clubName) };
+  return {
+    filename: 'meetup.ics',
+    contentType: 'text/calendar; charset=utf-8; method=PUBLISH',
+    content: calendarFile([entry], entry.clubName),
+  };
 }

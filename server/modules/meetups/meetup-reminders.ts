@@ -14,9 +14,17 @@ export const REMINDER_CRON = '*/15 * * * *';
  * Sends every reminder due at `now`. Safe to run concurrently and as often as you like: the claim row (meetup,
  * person, start) and the e-mail job commit together or not at all, so each start is reminded of once per person.
  */
-export async function sendDueReminders(deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>, now = new Date()): Promise<{ sent: number }> {
+export async function sendDueReminders(
+  deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>,
+  now = new Date(),
+): Promise<{ sent: number }> {
   const { dataSource } = deps;
-  const due = await dueReminders(dataSource.manager, now, REMINDER_HOURS_BEFORE, REMINDER_LATEST_HOURS_BEFORE);
+  const due = await dueReminders(
+    dataSource.manager,
+    now,
+    REMINDER_HOURS_BEFORE,
+    REMINDER_LATEST_HOURS_BEFORE,
+  );
   const byMeetup = new Map<string, string[]>();
   for (const d of due) byMeetup.set(d.meetupId, [...(byMeetup.get(d.meetupId) ?? []), d.userId]);
   let sent = 0;
@@ -31,7 +39,12 @@ export async function sendDueReminders(deps: Pick<Deps, 'dataSource' | 'notify' 
          ON CONFLICT DO NOTHING RETURNING user_id AS "userId"`,
         [meetup.id, userIds, meetup.startsAt],
       );
-      await tellReminder(tx, deps, meetup, claimed.map((c) => c.userId));
+      await tellReminder(
+        tx,
+        deps,
+        meetup,
+        claimed.map((c) => c.userId),
+      );
       return claimed.length;
     });
   }
@@ -43,8 +56,15 @@ export interface ReminderScheduler {
 }
 
 /** The reminder job on pg-boss, scheduled like the daily digest: the schedule survives restarts, one worker per run. */
-export async function startMeetupReminders(p: { deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>; logger: Logger }): Promise<ReminderScheduler> {
-  const boss = new PgBoss({ connectionString: p.deps.config.databaseUrl, max: 2, application_name: 'shoalwise-meetup-reminders' });
+export async function startMeetupReminders(p: {
+  deps: Pick<Deps, 'dataSource' | 'notify' | 'config'>;
+  logger: Logger;
+}): Promise<ReminderScheduler> {
+  const boss = new PgBoss({
+    connectionString: p.deps.config.databaseUrl,
+    max: 2,
+    application_name: 'shoalwise-meetup-reminders',
+  });
   boss.on('error', (err: Error) => p.logger.warn({ err: err.message }, 'meetup reminder scheduler error'));
   await boss.start();
   await boss.createQueue(REMINDER_QUEUE);

@@ -1,6 +1,11 @@
 import { clinicSlots } from '../../../shared/meetups/clinic-slots';
 import { describeClubTime, utcToClubTime } from '../../../shared/meetups/club-time';
-import type { AttendanceHistoryView, ClinicSlotView, MeetupDetailView, MeetupSummaryView } from '../../../shared/schemas/meetup-views';
+import type {
+  AttendanceHistoryView,
+  ClinicSlotView,
+  MeetupDetailView,
+  MeetupSummaryView,
+} from '../../../shared/schemas/meetup-views';
 import type { Meetup } from './meetup.entity';
 import type { HistoryRow, MeetupRow } from './meetups.queries';
 
@@ -38,11 +43,21 @@ export function presentSummary(r: MeetupRow): MeetupSummaryView {
   };
 }
 
-export function presentDetail(r: MeetupRow, m: Meetup, booked: { startsAt: Date; userId: string }[], viewerId: string): MeetupDetailView {
+export function presentDetail(
+  r: MeetupRow,
+  m: Meetup,
+  booked: { startsAt: Date; userId: string }[],
+  viewerId: string,
+): MeetupDetailView {
   const taken = new Map(booked.map((b) => [iso(b.startsAt), b.userId]));
   const slots: ClinicSlotView[] =
     m.kind === 'clinic' && m.slotMinutes
-      ? clinicSlots(m.startsAt, m.endsAt, m.slotMinutes).map((at) => ({ startsAt: at, label: timeLabel(at, r.timeZone), taken: taken.has(at), mine: taken.get(at) === viewerId }))
+      ? clinicSlots(m.startsAt, m.endsAt, m.slotMinutes).map((at) => ({
+          startsAt: at,
+          label: timeLabel(at, r.timeZone),
+          taken: taken.has(at),
+          mine: taken.get(at) === viewerId,
+        }))
       : [];
   return {
     ...presentSummary(r),
@@ -54,14 +69,25 @@ export function presentDetail(r: MeetupRow, m: Meetup, booked: { startsAt: Date;
   };
 }
 
-export function presentHistory(member: { userId: string; displayName: string }, rows: HistoryRow[], now = new Date()): AttendanceHistoryView {
+export function presentHistory(
+  member: { userId: string; displayName: string },
+  rows: HistoryRow[],
+  now = new Date(),
+): AttendanceHistoryView {
   const past = rows.filter((r) => r.status === 'scheduled' && new Date(r.endsAt).getTime() < now.getTime());
   return {
     member,
     attended: past.filter((r) => r.checkedInAt !== null).length,
     missed: past.filter((r) => r.rsvp === 'going' && r.checkedInAt === null).length,
     rows: rows.map((r) => ({
-      meetup: { id: r.meetupId, title: r.title, kind: r.kind, status: r.status, startsAt: iso(r.startsAt), when: describeClubTime(r.startsAt, r.endsAt, r.timeZone) },
+      meetup: {
+        id: r.meetupId,
+        title: r.title,
+        kind: r.kind,
+        status: r.status,
+        startsAt: iso(r.startsAt),
+        when: describeClubTime(r.startsAt, r.endsAt, r.timeZone),
+      },
       rsvp: r.rsvp,
       checkedIn: r.checkedInAt !== null,
     })),

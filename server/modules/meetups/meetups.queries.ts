@@ -63,8 +63,14 @@ function summaries(manager: EntityManager, viewerId: string): SelectQueryBuilder
     .addSelect('m.host_id', 'hostId')
     .addSelect('h.display_name', 'hostName')
     .addSelect('c.time_zone', 'timeZone')
-    .addSelect(`(SELECT count(*)::int FROM meetup_rsvp g WHERE g.meetup_id = m.id AND g.status = 'going')`, 'goingCount')
-    .addSelect(`(SELECT count(*)::int FROM meetup_rsvp g WHERE g.meetup_id = m.id AND g.status = 'waitlisted')`, 'waitlistCount')
+    .addSelect(
+      `(SELECT count(*)::int FROM meetup_rsvp g WHERE g.meetup_id = m.id AND g.status = 'going')`,
+      'goingCount',
+    )
+    .addSelect(
+      `(SELECT count(*)::int FROM meetup_rsvp g WHERE g.meetup_id = m.id AND g.status = 'waitlisted')`,
+      'waitlistCount',
+    )
     .addSelect('mine.status', 'myStatus')
     .addSelect(POSITION('mine'), 'myPosition')
     .addSelect('mine.slot_starts_at', 'mySlot')
@@ -77,7 +83,14 @@ function summaries(manager: EntityManager, viewerId: string): SelectQueryBuilder
  * The club's meetups the viewer may read (the rules, in SQL): upcoming ones soonest first (cancelled included, so
  * nobody turns up by mistake), past ones latest first.
  */
-export async function listMeetups(manager: EntityManager, ability: AppAbility, viewerId: string, clubId: string, when: MeetupListWhen, now = new Date()): Promise<MeetupRow[]> {
+export async function listMeetups(
+  manager: EntityManager,
+  ability: AppAbility,
+  viewerId: string,
+  clubId: string,
+  when: MeetupListWhen,
+  now = new Date(),
+): Promise<MeetupRow[]> {
   const qb = summaries(manager, viewerId).where('m.club_id = :clubId', { clubId });
   if (when === 'upcoming') qb.andWhere('m.ends_at >= :now', { now }).orderBy('m.starts_at', 'ASC');
   else qb.andWhere('m.ends_at < :now', { now }).orderBy('m.starts_at', 'DESC');
@@ -85,8 +98,14 @@ export async function listMeetups(manager: EntityManager, ability: AppAbility, v
   return qb.addOrderBy('m.id', 'ASC').limit(LIST_LIMIT).getRawMany<MeetupRow>();
 }
 
-export async function summaryOf(manager: EntityManager, viewerId: string, meetupId: string): Promise<MeetupRow> {
-  const row = await summaries(manager, viewerId).where('m.id = :meetupId', { meetupId }).getRawOne<MeetupRow>();
+export async function summaryOf(
+  manager: EntityManager,
+  viewerId: string,
+  meetupId: string,
+): Promise<MeetupRow> {
+  const row = await summaries(manager, viewerId)
+    .where('m.id = :meetupId', { meetupId })
+    .getRawOne<MeetupRow>();
   if (!row) throw errors.notFound('That meetup');
   return row;
 }
@@ -95,26 +114,42 @@ export async function summaryOf(manager: EntityManager, viewerId: string, meetup
  * The meetup in this club, or 404 (an id from another club does not exist here). `lock` takes its row for the
  * transaction: every change to its places goes through that lock, one at a time, in arrival order.
  */
-export async function loadMeetup(manager: EntityManager, clubId: string, meetupId: string, lock = false): Promise<Meetup> {
-  const qb = manager.createQueryBuilder(Meetup, 'm').where('m.id = :meetupId AND m.club_id = :clubId', { meetupId, clubId });
+export async function loadMeetup(
+  manager: EntityManager,
+  clubId: string,
+  meetupId: string,
+  lock = false,
+): Promise<Meetup> {
+  const qb = manager
+    .createQueryBuilder(Meetup, 'm')
+    .where('m.id = :meetupId AND m.club_id = :clubId', { meetupId, clubId });
   if (lock) qb.setLock('pessimistic_write');
   const meetup = await qb.getOne();
   if (!meetup) throw errors.notFound('That meetup');
   return meetup;
 }
 
-export async function rsvpOf(manager: EntityManager, meetupId: string, userId: string): Promise<MeetupRsvp | null> {
+export async function rsvpOf(
+  manager: EntityManager,
+  meetupId: string,
+  userId: string,
+): Promise<MeetupRsvp | null> {
   return manager.findOneBy(MeetupRsvp, { meetupId, userId });
 }
 
 export async function clubTimeZone(manager: EntityManager, clubId: string): Promise<string> {
-  const [row] = (await manager.query(`SELECT time_zone AS "timeZone" FROM club WHERE id = $1`, [clubId])) as { timeZone: string }[];
+  const [row] = (await manager.query(`SELECT time_zone AS "timeZone" FROM club WHERE id = $1`, [clubId])) as {
+    timeZone: string;
+  }[];
   if (!row) throw errors.notFound('That club');
   return row.timeZone;
 }
 
 /** Clinic slots already booked, with who holds each. */
-export async function bookedSlots(manager: EntityManager, meetupId: string): Promise<{ startsAt: Date; userId: string }[]> {
+export async function bookedSlots(
+  manager: EntityManager,
+  meetupId: string,
+): Promise<{ startsAt: Date; userId: string }[]> {
   return manager.query(
     `SELECT slot_starts_at AS "startsAt", user_id AS "userId" FROM meetup_rsvp WHERE meetup_id = $1 AND slot_starts_at IS NOT NULL`,
     [meetupId],
@@ -124,7 +159,11 @@ export async function bookedSlots(manager: EntityManager, meetupId: string): Pro
 /** People still expected (going, then the waitlist in order): the check-in list. */
 export async function attendanceRows(manager: EntityManager, meetupId: string): Promise<AttendanceRowView[]> {
   const rows: (Omit<AttendanceRowView, 'tank' | 'checkedIn' | 'checkedInAt' | 'slotStartsAt'> & {
-    checkedInAt: Date | null; slotStartsAt: Date | null; tankId: string | null; tankName: string | null; systemType: NonNullable<AttendanceRowView['tank']>['systemType'] | null;
+    checkedInAt: Date | null;
+    slotStartsAt: Date | null;
+    tankId: string | null;
+    tankName: string | null;
+    systemType: NonNullable<AttendanceRowView['tank']>['systemType'] | null;
   })[] = await manager.query(
     `SELECT r.user_id AS "userId", u.display_name AS "displayName", r.status, ${POSITION('r')} AS "waitlistPosition",
             r.checked_in_at AS "checkedInAt", r.slot_starts_at AS "slotStartsAt", r.tank_id AS "tankId", t.name AS "tankName",
@@ -142,7 +181,10 @@ export async function attendanceRows(manager: EntityManager, meetupId: string): 
     checkedIn: r.checkedInAt !== null,
     checkedInAt: r.checkedInAt ? new Date(r.checkedInAt).toISOString() : null,
     slotStartsAt: r.slotStartsAt ? new Date(r.slotStartsAt).toISOString() : null,
-    tank: r.tankId && r.tankName && r.systemType ? { id: r.tankId, name: r.tankName, systemType: r.systemType } : null,
+    tank:
+      r.tankId && r.tankName && r.systemType
+        ? { id: r.tankId, name: r.tankName, systemType: r.systemType }
+        : null,
     waterTestId: r.waterTestId,
   }));
 }
@@ -160,7 +202,11 @@ export interface HistoryRow {
 }
 
 /** Every meetup of the club the member answered, latest first. */
-export async function attendanceHistory(manager: EntityManager, clubId: string, userId: string): Promise<HistoryRow[]> {
+export async function attendanceHistory(
+  manager: EntityManager,
+  clubId: string,
+  userId: string,
+): Promise<HistoryRow[]> {
   return manager.query(
     `SELECT m.id AS "meetupId", m.title, m.kind, m.status, m.starts_at AS "startsAt", m.ends_at AS "endsAt", c.time_zone AS "timeZone",
             r.status AS rsvp, r.checked_in_at AS "checkedInAt"
@@ -173,7 +219,11 @@ export async function attendanceHistory(manager: EntityManager, clubId: string, 
 }
 
 /** The member's display name if they belong to the club (any status), else null. */
-export async function memberName(manager: EntityManager, clubId: string, userId: string): Promise<string | null> {
+export async function memberName(
+  manager: EntityManager,
+  clubId: string,
+  userId: string,
+): Promise<string | null> {
   const [row] = (await manager.query(
     `SELECT u.display_name AS "displayName" FROM membership m JOIN app_user u ON u.id = m.user_id WHERE m.club_id = $1 AND m.user_id = $2`,
     [clubId, userId],
@@ -220,12 +270,29 @@ export async function feedMeetups(manager: EntityManager, userId: string, since:
     [userId, since],
   );
   if (!rows.length) return [];
-  const meetups = new Map((await manager.createQueryBuilder(Meetup, 'm').where('m.id = ANY(:ids)', { ids: rows.map((r) => r.id) }).getMany()).map((m) => [m.id, m]));
-  return rows.map((r) => ({ meetup: meetups.get(r.id)!, waitlisted: r.waitlisted, clubName: r.clubName, timeZone: r.timeZone }));
+  const meetups = new Map(
+    (
+      await manager
+        .createQueryBuilder(Meetup, 'm')
+        .where('m.id = ANY(:ids)', { ids: rows.map((r) => r.id) })
+        .getMany()
+    ).map((m) => [m.id, m]),
+  );
+  return rows.map((r) => ({
+    meetup: meetups.get(r.id)!,
+    waitlisted: r.waitlisted,
+    clubName: r.clubName,
+    timeZone: r.timeZone,
+  }));
 }
 
 /** (meetup, person) pairs whose reminder is due at `now` and not yet sent for the meetup's current start. */
-export async function dueReminders(manager: EntityManager, now: Date, hoursBefore: number, latestHoursBefore: number): Promise<{ meetupId: string; userId: string }[]> {
+export async function dueReminders(
+  manager: EntityManager,
+  now: Date,
+  hoursBefore: number,
+  latestHoursBefore: number,
+): Promise<{ meetupId: string; userId: string }[]> {
   return manager.query(
     `SELECT r.meetup_id AS "meetupId", r.user_id AS "userId"
        FROM meetup m JOIN meetup_rsvp r ON r.meetup_id = m.id AND r.status = 'going'

@@ -25,9 +25,25 @@ import { feedGeneration, feedUrl, resetFeed } from './calendar-feed-token';
 import { calendarFile } from './meetup-calendar';
 import type { Meetup } from './meetup.entity';
 import { calendarEntryOf } from './meetup-notices';
-import { attendanceHistory, attendanceRows, bookedSlots, clubTimeZone, listMeetups, loadMeetup, memberName, rsvpOf, summaryOf } from './meetups.queries';
+import {
+  attendanceHistory,
+  attendanceRows,
+  bookedSlots,
+  clubTimeZone,
+  listMeetups,
+  loadMeetup,
+  memberName,
+  rsvpOf,
+  summaryOf,
+} from './meetups.queries';
 import { presentDetail, presentHistory, presentSummary } from './meetups.presenter';
-import { cancelMeetup, createMeetup, recordClinicResult, setAttendance, updateMeetup } from './meetups.service';
+import {
+  cancelMeetup,
+  createMeetup,
+  recordClinicResult,
+  setAttendance,
+  updateMeetup,
+} from './meetups.service';
 import { bookSlot, clearSlot, respond } from './rsvp.service';
 
 /** Routers take the app's one deps object. */
@@ -47,12 +63,23 @@ export function meetupsRouter(deps: MeetupDeps): Router {
   const me = (req: Request) => viewerOf(req).user;
 
   const detail = async (manager: DataSource['manager'], req: Request, meetup: Meetup) =>
-    presentDetail(await summaryOf(manager, me(req).id, meetup.id), meetup, await bookedSlots(manager, meetup.id), me(req).id);
+    presentDetail(
+      await summaryOf(manager, me(req).id, meetup.id),
+      meetup,
+      await bookedSlots(manager, meetup.id),
+      me(req).id,
+    );
 
   const list = { params: clubIdParams, query: meetupListQuery };
   router.get(base, requireSignIn, validate(list), requireClubMember, async (req, res) => {
     const { params, query } = inputOf(res, list);
-    const rows = await listMeetups(dataSource.manager, viewerOf(req).ability, me(req).id, params.clubId, query.when);
+    const rows = await listMeetups(
+      dataSource.manager,
+      viewerOf(req).ability,
+      me(req).id,
+      params.clubId,
+      query.when,
+    );
     res.json({ meetups: rows.map(presentSummary) });
   });
 
@@ -61,7 +88,12 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const { params, body } = inputOf(res, create);
     authorize(req, 'create', 'Meetup', { clubId: params.clubId, hostId: body.hostId });
     const meetup = await dataSource.transaction(async (tx) =>
-      createMeetup(tx, { clubId: params.clubId, timeZone: await clubTimeZone(tx, params.clubId), values: body, actorId: me(req).id }),
+      createMeetup(tx, {
+        clubId: params.clubId,
+        timeZone: await clubTimeZone(tx, params.clubId),
+        values: body,
+        actorId: me(req).id,
+      }),
     );
     res.status(201).json({ meetup: await detail(dataSource.manager, req, meetup) });
   });
@@ -80,7 +112,12 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const meetup = await dataSource.transaction(async (tx) => {
       const current = await loadMeetup(tx, params.clubId, params.meetupId, true);
       authorize(req, 'update', 'Meetup', subjectOf(current));
-      return updateMeetup(tx, deps, { meetup: current, timeZone: await clubTimeZone(tx, params.clubId), patch: body, actorId: me(req).id });
+      return updateMeetup(tx, deps, {
+        meetup: current,
+        timeZone: await clubTimeZone(tx, params.clubId),
+        patch: body,
+        actorId: me(req).id,
+      });
     });
     res.json({ meetup: await detail(dataSource.manager, req, meetup) });
   });
@@ -138,32 +175,59 @@ export function meetupsRouter(deps: MeetupDeps): Router {
     const { params } = inputOf(res, byId);
     const meetup = await loadMeetup(dataSource.manager, params.clubId, params.meetupId);
     authorize(req, 'checkIn', 'Meetup', subjectOf(meetup));
-    const view: AttendanceListView = { meetup: presentSummary(await summaryOf(dataSource.manager, me(req).id, meetup.id)), rows: await attendanceRows(dataSource.manager, meetup.id) };
+    const view: AttendanceListView = {
+      meetup: presentSummary(await summaryOf(dataSource.manager, me(req).id, meetup.id)),
+      rows: await attendanceRows(dataSource.manager, meetup.id),
+    };
     res.json(view);
   });
 
   const tick = { params: attendeeParams, body: attendanceSchema };
-  router.put(`${one}/attendance/:userId`, requireSignIn, validate(tick), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, tick);
-    await dataSource.transaction(async (tx) => {
-      const meetup = await loadMeetup(tx, params.clubId, params.meetupId);
-      authorize(req, 'checkIn', 'Meetup', subjectOf(meetup));
-      await setAttendance(tx, { meetup, userId: params.userId, present: body.present, actorId: me(req).id });
-    });
-    const row = (await attendanceRows(dataSource.manager, params.meetupId)).find((r) => r.userId === params.userId);
-    res.json({ row });
-  });
+  router.put(
+    `${one}/attendance/:userId`,
+    requireSignIn,
+    validate(tick),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, tick);
+      await dataSource.transaction(async (tx) => {
+        const meetup = await loadMeetup(tx, params.clubId, params.meetupId);
+        authorize(req, 'checkIn', 'Meetup', subjectOf(meetup));
+        await setAttendance(tx, {
+          meetup,
+          userId: params.userId,
+          present: body.present,
+          actorId: me(req).id,
+        });
+      });
+      const row = (await attendanceRows(dataSource.manager, params.meetupId)).find(
+        (r) => r.userId === params.userId,
+      );
+      res.json({ row });
+    },
+  );
 
   const result = { params: attendeeParams, body: createWaterTestSchema };
-  router.post(`${one}/bookings/:userId/water-tests`, requireSignIn, validate(result), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, result);
-    const saved = await dataSource.transaction(async (tx) => {
-      const meetup = await loadMeetup(tx, params.clubId, params.meetupId, true);
-      authorize(req, 'recordResults', 'Meetup', subjectOf(meetup));
-      return recordClinicResult(tx, deps, { meetup, userId: params.userId, input: body, host: { id: me(req).id, displayName: me(req).displayName } });
-    });
-    res.status(201).json({ waterTest: presentWaterTest(saved.test, () => []), warnings: saved.warnings });
-  });
+  router.post(
+    `${one}/bookings/:userId/water-tests`,
+    requireSignIn,
+    validate(result),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, result);
+      const saved = await dataSource.transaction(async (tx) => {
+        const meetup = await loadMeetup(tx, params.clubId, params.meetupId, true);
+        authorize(req, 'recordResults', 'Meetup', subjectOf(meetup));
+        return recordClinicResult(tx, deps, {
+          meetup,
+          userId: params.userId,
+          input: body,
+          host: { id: me(req).id, displayName: me(req).displayName },
+        });
+      });
+      res.status(201).json({ waterTest: presentWaterTest(saved.test, () => []), warnings: saved.warnings });
+    },
+  );
 
   router.get(`${one}/calendar.ics`, requireSignIn, validate(byId), requireClubMember, async (req, res) => {
     const { params } = inputOf(res, byId);
@@ -178,16 +242,35 @@ export function meetupsRouter(deps: MeetupDeps): Router {
   });
 
   const history = { params: memberAttendanceParams };
-  router.get('/clubs/:clubId/members/:userId/attendance', requireSignIn, validate(history), requireClubMember, async (req, res) => {
-    const { params } = inputOf(res, history);
-    // Someone else's record is not there for you, just as an unknown id is not (404, not 403).
-    if (!viewerOf(req).ability.can('read', asSubject('Attendance', { clubId: params.clubId, userId: params.userId }))) throw errors.notFound('That member');
-    const name = await memberName(dataSource.manager, params.clubId, params.userId);
-    if (!name) throw errors.notFound('That member');
-    res.json(presentHistory({ userId: params.userId, displayName: name }, await attendanceHistory(dataSource.manager, params.clubId, params.userId)));
-  });
+  router.get(
+    '/clubs/:clubId/members/:userId/attendance',
+    requireSignIn,
+    validate(history),
+    requireClubMember,
+    async (req, res) => {
+      const { params } = inputOf(res, history);
+      // Someone else's record is not there for you, just as an unknown id is not (404, not 403).
+      if (
+        !viewerOf(req).ability.can(
+          'read',
+          asSubject('Attendance', { clubId: params.clubId, userId: params.userId }),
+        )
+      )
+        throw errors.notFound('That member');
+      const name = await memberName(dataSource.manager, params.clubId, params.userId);
+      if (!name) throw errors.notFound('That member');
+      res.json(
+        presentHistory(
+          { userId: params.userId, displayName: name },
+          await attendanceHistory(dataSource.manager, params.clubId, params.userId),
+        ),
+      );
+    },
+  );
 
-  const feedView = (userId: string, generation: number): CalendarFeedView => ({ url: feedUrl(config.baseUrl, config.sessionSecret, userId, generation) });
+  const feedView = (userId: string, generation: number): CalendarFeedView => ({
+    url: feedUrl(config.baseUrl, config.sessionSecret, userId, generation),
+  });
   router.get('/me/calendar-feed', requireSignIn, async (req, res) => {
     res.json(feedView(me(req).id, await feedGeneration(dataSource.manager, me(req).id)));
   });

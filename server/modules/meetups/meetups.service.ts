@@ -2,7 +2,11 @@ import type { EntityManager } from 'typeorm';
 import type { z } from 'zod';
 import { MEETUP_KIND_LABELS } from '../../../shared/constants/meetups';
 import { clubTimeToUtc, describeClubTime, utcToClubTime } from '../../../shared/meetups/club-time';
-import { meetupRuleIssues, type CreateMeetupValues, type updateMeetupSchema } from '../../../shared/schemas/meetup.schema';
+import {
+  meetupRuleIssues,
+  type CreateMeetupValues,
+  type updateMeetupSchema,
+} from '../../../shared/schemas/meetup.schema';
 import type { createWaterTestSchema } from '../../../shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { audit } from '../audit';
@@ -17,15 +21,23 @@ type UpdateValues = z.output<typeof updateMeetupSchema>;
 
 async function requireHostable(tx: EntityManager, clubId: string, hostId: string | null): Promise<void> {
   if (hostId && !(await isHostable(tx, clubId, hostId))) {
-    throw errors.badRequest('Some fields need attention.', [{ path: 'hostId', message: 'Choose an active mentor or admin of the club.' }]);
+    throw errors.badRequest('Some fields need attention.', [
+      { path: 'hostId', message: 'Choose an active mentor or admin of the club.' },
+    ]);
   }
 }
 
 function requireFuture(startsAt: Date, now: Date): void {
-  if (startsAt.getTime() <= now.getTime()) throw errors.badRequest('Some fields need attention.', [{ path: 'startsAt', message: 'Choose a time that has not passed yet.' }]);
+  if (startsAt.getTime() <= now.getTime())
+    throw errors.badRequest('Some fields need attention.', [
+      { path: 'startsAt', message: 'Choose a time that has not passed yet.' },
+    ]);
 }
 
-export async function createMeetup(tx: EntityManager, p: { clubId: string; timeZone: string; values: CreateMeetupValues; actorId: string; now?: Date }): Promise<Meetup> {
+export async function createMeetup(
+  tx: EntityManager,
+  p: { clubId: string; timeZone: string; values: CreateMeetupValues; actorId: string; now?: Date },
+): Promise<Meetup> {
   const { values: v, timeZone } = p;
   await requireHostable(tx, p.clubId, v.hostId);
   const startsAt = clubTimeToUtc(v.startsAt, timeZone);
@@ -51,14 +63,25 @@ export async function createMeetup(tx: EntityManager, p: { clubId: string; timeZ
       createdById: p.actorId,
     }),
   );
-  await audit(tx, { actorId: p.actorId, clubId: p.clubId, action: 'meetup.created', targetType: 'Meetup', targetId: saved.id, details: { title: v.title, startsAt: startsAt.toISOString() } });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: p.clubId,
+    action: 'meetup.created',
+    targetType: 'Meetup',
+    targetId: saved.id,
+    details: { title: v.title, startsAt: startsAt.toISOString() },
+  });
   return saved;
 }
 
 /** What attendees are told changed, in their words. */
 function describeChanges(before: Meetup, after: Meetup, timeZone: string): string[] {
   const out: string[] = [];
-  if (before.startsAt.getTime() !== after.startsAt.getTime() || before.endsAt.getTime() !== after.endsAt.getTime()) out.push(`New time: ${describeClubTime(after.startsAt, after.endsAt, timeZone)}`);
+  if (
+    before.startsAt.getTime() !== after.startsAt.getTime() ||
+    before.endsAt.getTime() !== after.endsAt.getTime()
+  )
+    out.push(`New time: ${describeClubTime(after.startsAt, after.endsAt, timeZone)}`);
   if (before.placeText !== after.placeText) out.push(`New place: ${after.placeText}`);
   if (before.onlineUrl !== after.onlineUrl && after.onlineUrl) out.push(`New link: ${after.onlineUrl}`);
   if (before.mapUrl !== after.mapUrl && after.mapUrl) out.push(`New map link: ${after.mapUrl}`);
@@ -73,9 +96,14 @@ function describeChanges(before: Meetup, after: Meetup, timeZone: string): strin
  * An edit, merged onto the stored meetup and checked as a whole. More places go to the waitlist at once; fewer
  * than the people already going is refused. Everyone expected is told what changed, with a new .ics.
  */
-export async function updateMeetup(tx: EntityManager, deps: NoticeDeps, p: { meetup: Meetup; timeZone: string; patch: UpdateValues; actorId: string; now?: Date }): Promise<Meetup> {
+export async function updateMeetup(
+  tx: EntityManager,
+  deps: NoticeDeps,
+  p: { meetup: Meetup; timeZone: string; patch: UpdateValues; actorId: string; now?: Date },
+): Promise<Meetup> {
   const { meetup: before, timeZone, patch } = p;
-  if (before.status === 'cancelled') throw errors.conflict('This meetup was cancelled; it can no longer be changed.');
+  if (before.status === 'cancelled')
+    throw errors.conflict('This meetup was cancelled; it can no longer be changed.');
   const merged = {
     kind: patch.kind ?? before.kind,
     title: patch.title ?? before.title,
@@ -94,8 +122,12 @@ export async function updateMeetup(tx: EntityManager, deps: NoticeDeps, p: { mee
   if (patch.hostId !== undefined) await requireHostable(tx, before.clubId, merged.hostId);
   const startsAt = clubTimeToUtc(merged.startsAt, timeZone);
   if (patch.startsAt !== undefined) requireFuture(startsAt, p.now ?? new Date());
-  const [{ going }] = (await tx.query(`SELECT count(*)::int AS going FROM meetup_rsvp WHERE meetup_id = $1 AND status = 'going'`, [before.id])) as [{ going: number }];
-  if (merged.capacity < going) throw errors.conflict(`${going} people are already going: the meetup needs at least ${going} places.`);
+  const [{ going }] = (await tx.query(
+    `SELECT count(*)::int AS going FROM meetup_rsvp WHERE meetup_id = $1 AND status = 'going'`,
+    [before.id],
+  )) as [{ going: number }];
+  if (merged.capacity < going)
+    throw errors.conflict(`${going} people are already going: the meetup needs at least ${going} places.`);
 
   const changes: Partial<Meetup> = {
     ...merged,
@@ -113,17 +145,44 @@ export async function updateMeetup(tx: EntityManager, deps: NoticeDeps, p: { mee
   const said = describeChanges(before, after, timeZone);
   if (released.length) said.push('Clinic slots changed: if you had booked one, book again.');
   if (said.length) await tellChanged(tx, deps, after, await expectedUserIds(tx, after.id), said);
-  await audit(tx, { actorId: p.actorId, clubId: after.clubId, action: 'meetup.updated', targetType: 'Meetup', targetId: after.id, details: { fields: Object.keys(patch) } });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: after.clubId,
+    action: 'meetup.updated',
+    targetType: 'Meetup',
+    targetId: after.id,
+    details: { fields: Object.keys(patch) },
+  });
   return after;
 }
 
 /** Cancelled for everyone: answers are kept (for the record), everyone expected is told why. */
-export async function cancelMeetup(tx: EntityManager, deps: NoticeDeps, p: { meetup: Meetup; reason: string; actorId: string; now?: Date }): Promise<Meetup> {
+export async function cancelMeetup(
+  tx: EntityManager,
+  deps: NoticeDeps,
+  p: { meetup: Meetup; reason: string; actorId: string; now?: Date },
+): Promise<Meetup> {
   if (p.meetup.status === 'cancelled') return p.meetup;
-  await tx.update(Meetup, { id: p.meetup.id }, { status: 'cancelled', cancelReason: p.reason, cancelledAt: p.now ?? new Date(), sequence: p.meetup.sequence + 1 });
+  await tx.update(
+    Meetup,
+    { id: p.meetup.id },
+    {
+      status: 'cancelled',
+      cancelReason: p.reason,
+      cancelledAt: p.now ?? new Date(),
+      sequence: p.meetup.sequence + 1,
+    },
+  );
   const after = await tx.findOneByOrFail(Meetup, { id: p.meetup.id });
   await tellCancelled(tx, deps, after, await expectedUserIds(tx, after.id));
-  await audit(tx, { actorId: p.actorId, clubId: after.clubId, action: 'meetup.cancelled', targetType: 'Meetup', targetId: after.id, details: { reason: p.reason } });
+  await audit(tx, {
+    actorId: p.actorId,
+    clubId: after.clubId,
+    action: 'meetup.cancelled',
+    targetType: 'Meetup',
+    targetId: after.id,
+    details: { reason: p.reason },
+  });
   return after;
 }
 
@@ -134,12 +193,18 @@ async function expectedRsvp(tx: EntityManager, meetup: Meetup, userId: string): 
 }
 
 /** Ticks someone in (or out again). Setting the same state twice changes nothing, so a retried tap is harmless. */
-export async function setAttendance(tx: EntityManager, p: { meetup: Meetup; userId: string; present: boolean; actorId: string; now?: Date }): Promise<MeetupRsvp> {
+export async function setAttendance(
+  tx: EntityManager,
+  p: { meetup: Meetup; userId: string; present: boolean; actorId: string; now?: Date },
+): Promise<MeetupRsvp> {
   if (p.meetup.status === 'cancelled') throw errors.conflict('This meetup was cancelled.');
   const rsvp = await expectedRsvp(tx, p.meetup, p.userId);
   // In one statement, so two taps at once keep the first time rather than each writing its own.
   if (p.present) {
-    await tx.query(`UPDATE meetup_rsvp SET checked_in_at = COALESCE(checked_in_at, $2), checked_in_by_id = COALESCE(checked_in_by_id, $3) WHERE id = $1`, [rsvp.id, p.now ?? new Date(), p.actorId]);
+    await tx.query(
+      `UPDATE meetup_rsvp SET checked_in_at = COALESCE(checked_in_at, $2), checked_in_by_id = COALESCE(checked_in_by_id, $3) WHERE id = $1`,
+      [rsvp.id, p.now ?? new Date(), p.actorId],
+    );
   } else await tx.update(MeetupRsvp, { id: rsvp.id }, { checkedInAt: null, checkedInById: null });
   return tx.findOneByOrFail(MeetupRsvp, { id: rsvp.id });
 }
@@ -151,18 +216,47 @@ export async function setAttendance(tx: EntityManager, p: { meetup: Meetup; user
 export async function recordClinicResult(
   tx: EntityManager,
   deps: NoticeDeps & Pick<Deps, 'tankChanges'>,
-  p: { meetup: Meetup; userId: string; input: z.output<typeof createWaterTestSchema>; host: { id: string; displayName: string }; now?: Date },
+  p: {
+    meetup: Meetup;
+    userId: string;
+    input: z.output<typeof createWaterTestSchema>;
+    host: { id: string; displayName: string };
+    now?: Date;
+  },
 ): Promise<SavedWaterTest> {
-  if (p.meetup.kind !== 'clinic') throw errors.conflict('Results are recorded at a water-testing clinic only.');
+  if (p.meetup.kind !== 'clinic')
+    throw errors.conflict('Results are recorded at a water-testing clinic only.');
   if (p.meetup.status === 'cancelled') throw errors.conflict('This meetup was cancelled.');
   const rsvp = await expectedRsvp(tx, p.meetup, p.userId);
-  if (!rsvp.tankId) throw errors.conflict('They have not said which tank the water comes from: book a slot with a tank first.');
+  if (!rsvp.tankId)
+    throw errors.conflict(
+      'They have not said which tank the water comes from: book a slot with a tank first.',
+    );
   const tank = await loadTank(tx, p.meetup.clubId, rsvp.tankId);
   if (tank.ownerId !== p.userId) throw errors.conflict('That tank is no longer theirs.');
   requireActive(tank);
   const saved = await createWaterTest(tx, deps, tank, p.input, p.host.id, p.now);
-  await tx.update(MeetupRsvp, { id: rsvp.id }, { waterTestId: saved.test.id, ...(rsvp.checkedInAt ? {} : { checkedInAt: p.now ?? new Date(), checkedInById: p.host.id }) });
-  await tellResultsRecorded(tx, deps, p.meetup, { keeperId: p.userId, tankId: tank.id, tankName: tank.name, hostName: p.host.displayName });
-  await audit(tx, { actorId: p.host.id, clubId: p.meetup.clubId, action: 'meetup.clinic-result', targetType: 'WaterTest', targetId: saved.test.id, details: { meetupId: p.meetup.id, tankId: tank.id } });
+  await tx.update(
+    MeetupRsvp,
+    { id: rsvp.id },
+    {
+      waterTestId: saved.test.id,
+      ...(rsvp.checkedInAt ? {} : { checkedInAt: p.now ?? new Date(), checkedInById: p.host.id }),
+    },
+  );
+  await tellResultsRecorded(tx, deps, p.meetup, {
+    keeperId: p.userId,
+    tankId: tank.id,
+    tankName: tank.name,
+    hostName: p.host.displayName,
+  });
+  await audit(tx, {
+    actorId: p.host.id,
+    clubId: p.meetup.clubId,
+    action: 'meetup.clinic-result',
+    targetType: 'WaterTest',
+    targetId: saved.test.id,
+    details: { meetupId: p.meetup.id, tankId: tank.id },
+  });
   return saved;
 }

@@ -19,7 +19,11 @@ export function requireOpen(meetup: Meetup, now: Date): void {
  * meetup's row lock, so two cancellations at once cannot both give the same place away: the second one counts
  * the places after the first has committed its promotions.
  */
-export async function promoteFromWaitlist(tx: EntityManager, deps: NoticeDeps, meetup: Meetup): Promise<string[]> {
+export async function promoteFromWaitlist(
+  tx: EntityManager,
+  deps: NoticeDeps,
+  meetup: Meetup,
+): Promise<string[]> {
   // TypeORM answers an UPDATE … RETURNING with [rows, affected].
   const [rows]: [{ userId: string }[], number] = await tx.query(
     `WITH free AS (
@@ -44,7 +48,14 @@ export async function promoteFromWaitlist(tx: EntityManager, deps: NoticeDeps, m
  * the decision is made in SQL under the meetup's row lock (taken by the caller), never from counts read earlier.
  * Saying "going" again keeps your place; saying "going" after "not going" queues you anew.
  */
-export async function respond(tx: EntityManager, deps: NoticeDeps, meetup: Meetup, userId: string, response: RsvpResponse, now = new Date()): Promise<MeetupRsvp> {
+export async function respond(
+  tx: EntityManager,
+  deps: NoticeDeps,
+  meetup: Meetup,
+  userId: string,
+  response: RsvpResponse,
+  now = new Date(),
+): Promise<MeetupRsvp> {
   requireOpen(meetup, now);
   const existing = await rsvpOf(tx, meetup.id, userId);
   if (response === 'going') {
@@ -76,16 +87,35 @@ export async function respond(tx: EntityManager, deps: NoticeDeps, meetup: Meetu
 }
 
 const UNIQUE_VIOLATION = '23505';
-const isUniqueViolation = (err: unknown) => (err as { driverError?: { code?: string } }).driverError?.code === UNIQUE_VIOLATION;
+const isUniqueViolation = (err: unknown) =>
+  (err as { driverError?: { code?: string } }).driverError?.code === UNIQUE_VIOLATION;
 
 /** A clinic slot and the tank whose water the member brings. The unique index settles two bookings of one slot. */
-export async function bookSlot(tx: EntityManager, meetup: Meetup, userId: string, tank: Tank, slotStartsAt: string, now = new Date()): Promise<void> {
-  if (meetup.kind !== 'clinic' || !meetup.slotMinutes) throw errors.conflict('Only a water-testing clinic has slots to book.');
+export async function bookSlot(
+  tx: EntityManager,
+  meetup: Meetup,
+  userId: string,
+  tank: Tank,
+  slotStartsAt: string,
+  now = new Date(),
+): Promise<void> {
+  if (meetup.kind !== 'clinic' || !meetup.slotMinutes)
+    throw errors.conflict('Only a water-testing clinic has slots to book.');
   requireOpen(meetup, now);
   const rsvp = await rsvpOf(tx, meetup.id, userId);
-  if (rsvp?.status !== 'going') throw errors.conflict(rsvp?.status === 'waitlisted' ? 'You are on the waitlist: you can book a slot once a place is yours.' : 'Say you are going first, then book a slot.');
-  const slot = clinicSlots(meetup.startsAt, meetup.endsAt, meetup.slotMinutes).find((s) => s === new Date(slotStartsAt).toISOString());
-  if (!slot) throw errors.badRequest('That is not one of the clinic’s slots.', [{ path: 'slotStartsAt', message: 'Choose one of the clinic’s slots.' }]);
+  if (rsvp?.status !== 'going')
+    throw errors.conflict(
+      rsvp?.status === 'waitlisted'
+        ? 'You are on the waitlist: you can book a slot once a place is yours.'
+        : 'Say you are going first, then book a slot.',
+    );
+  const slot = clinicSlots(meetup.startsAt, meetup.endsAt, meetup.slotMinutes).find(
+    (s) => s === new Date(slotStartsAt).toISOString(),
+  );
+  if (!slot)
+    throw errors.badRequest('That is not one of the clinic’s slots.', [
+      { path: 'slotStartsAt', message: 'Choose one of the clinic’s slots.' },
+    ]);
   try {
     await tx.update(MeetupRsvp, { id: rsvp.id }, { slotStartsAt: new Date(slot), tankId: tank.id });
   } catch (err) {
@@ -100,7 +130,10 @@ export async function clearSlot(tx: EntityManager, meetup: Meetup, userId: strin
 
 /** After the clinic's times or slot length change: frees bookings that no longer match a slot; returns whose. */
 export async function releaseStaleSlots(tx: EntityManager, meetup: Meetup): Promise<string[]> {
-  const valid = meetup.kind === 'clinic' && meetup.slotMinutes ? clinicSlots(meetup.startsAt, meetup.endsAt, meetup.slotMinutes) : [];
+  const valid =
+    meetup.kind === 'clinic' && meetup.slotMinutes
+      ? clinicSlots(meetup.startsAt, meetup.endsAt, meetup.slotMinutes)
+      : [];
   const [rows]: [{ userId: string }[], number] = await tx.query(
     `UPDATE meetup_rsvp SET slot_starts_at = NULL, tank_id = NULL
       WHERE meetup_id = $1 AND slot_starts_at IS NOT NULL AND NOT (slot_starts_at = ANY($2::timestamptz[]))

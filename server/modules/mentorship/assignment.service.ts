@@ -22,7 +22,10 @@ export interface AssignMentorResult {
 }
 
 async function namesOf(tx: EntityManager, ids: string[]): Promise<Map<string, string>> {
-  const rows: { id: string; name: string }[] = await tx.query(`SELECT id, display_name AS name FROM app_user WHERE id = ANY($1::uuid[])`, [ids]);
+  const rows: { id: string; name: string }[] = await tx.query(
+    `SELECT id, display_name AS name FROM app_user WHERE id = ANY($1::uuid[])`,
+    [ids],
+  );
   return new Map(rows.map((r) => [r.id, r.name]));
 }
 
@@ -30,19 +33,34 @@ async function namesOf(tx: EntityManager, ids: string[]): Promise<Map<string, st
  * The one way a mentor is paired with a mentee (admin pairing or an accepted request): checks both memberships,
  * the mentor's capacity, ends a previous pairing, answers the mentee's open request, audits and notifies.
  */
-export async function assignMentor(tx: EntityManager, { notify }: Pick<Deps, 'notify'>, input: AssignMentorInput): Promise<AssignMentorResult> {
+export async function assignMentor(
+  tx: EntityManager,
+  { notify }: Pick<Deps, 'notify'>,
+  input: AssignMentorInput,
+): Promise<AssignMentorResult> {
   const { clubId, mentorId, menteeId, actorId } = input;
-  if (mentorId === menteeId) throw errors.badRequest('A member cannot mentor themselves.', [{ path: 'menteeId', message: 'Choose someone other than the mentor.' }]);
+  if (mentorId === menteeId)
+    throw errors.badRequest('A member cannot mentor themselves.', [
+      { path: 'menteeId', message: 'Choose someone other than the mentor.' },
+    ]);
   // Lock both memberships (in id order, so two pairings never deadlock): two admins cannot both fill the mentor's
   // last place, nor give the same mentee two mentors.
-  const members = await tx.find(Membership, { where: { clubId, userId: In([mentorId, menteeId]) }, order: { id: 'ASC' }, lock: { mode: 'pessimistic_write' } });
+  const members = await tx.find(Membership, {
+    where: { clubId, userId: In([mentorId, menteeId]) },
+    order: { id: 'ASC' },
+    lock: { mode: 'pessimistic_write' },
+  });
   const mentor = members.find((m) => m.userId === mentorId);
   const mentee = members.find((m) => m.userId === menteeId);
   if (!mentor || mentor.status !== 'active' || mentor.role === 'member') {
-    throw errors.badRequest('Choose an active mentor of this club.', [{ path: 'mentorId', message: 'Not an active mentor of this club.' }]);
+    throw errors.badRequest('Choose an active mentor of this club.', [
+      { path: 'mentorId', message: 'Not an active mentor of this club.' },
+    ]);
   }
   if (!mentee || mentee.status !== 'active') {
-    throw errors.badRequest('Choose an active member of this club.', [{ path: 'menteeId', message: 'Not an active member of this club.' }]);
+    throw errors.badRequest('Choose an active member of this club.', [
+      { path: 'menteeId', message: 'Not an active member of this club.' },
+    ]);
   }
   const names = await namesOf(tx, [mentorId, menteeId]);
   const mentorName = names.get(mentorId) ?? 'That mentor';
@@ -52,14 +70,25 @@ export async function assignMentor(tx: EntityManager, { notify }: Pick<Deps, 'no
   const previous = await tx.findOneBy(MentorAssignment, { clubId, menteeId, endedAt: IsNull() });
   if (previous?.mentorId === mentorId) throw errors.conflict(`${mentorName} already mentors ${menteeName}.`);
   if (load >= capacity) {
-    throw errors.conflict(`${mentorName} is at capacity (${load} of ${capacity} mentees). Choose another mentor, or raise their capacity first.`);
+    throw errors.conflict(
+      `${mentorName} is at capacity (${load} of ${capacity} mentees). Choose another mentor, or raise their capacity first.`,
+    );
   }
   const now = new Date();
   if (previous) {
     await tx.update(MentorAssignment, { id: previous.id }, { endedAt: now });
     previous.endedAt = now;
   }
-  const assignment = await tx.save(tx.create(MentorAssignment, { clubId, mentorId, menteeId, startedAt: now, endedAt: null, createdById: actorId }));
+  const assignment = await tx.save(
+    tx.create(MentorAssignment, {
+      clubId,
+      mentorId,
+      menteeId,
+      startedAt: now,
+      endedAt: null,
+      createdById: actorId,
+    }),
+  );
   await audit(tx, {
     actorId,
     clubId,
@@ -76,32 +105,79 @@ export async function assignMentor(tx: EntityManager, { notify }: Pick<Deps, 'no
     [clubId, menteeId, actorId, now.toISOString(), assignment.id],
   );
   for (const r of answered) {
-    await audit(tx, { actorId, clubId, action: 'mentor-request.accepted', targetType: 'MentorRequest', targetId: r.id, details: { mentorId, assignmentId: assignment.id } });
+    await audit(tx, {
+      actorId,
+      clubId,
+      action: 'mentor-request.accepted',
+      targetType: 'MentorRequest',
+      targetId: r.id,
+      details: { mentorId, assignmentId: assignment.id },
+    });
   }
 
   const subject = { type: 'MentorAssignment', id: assignment.id };
-  await notify(tx, { userIds: [menteeId], clubId, kind: 'assignment', title: `${mentorName} is now your mentor`, body: 'Your mentor can see your tanks and answer your questions.', link: '/', subject });
-  await notify(tx, { userIds: [mentorId], clubId, kind: 'assignment', title: `You are now mentoring ${menteeName}`, link: '/desk', subject });
+  await notify(tx, {
+    userIds: [menteeId],
+    clubId,
+    kind: 'assignment',
+    title: `${mentorName} is now your mentor`,
+    body: 'Your mentor can see your tanks and answer your questions.',
+    link: '/',
+    subject,
+  });
+  await notify(tx, {
+    userIds: [mentorId],
+    clubId,
+    kind: 'assignment',
+    title: `You are now mentoring ${menteeName}`,
+    link: '/desk',
+    subject,
+  });
   if (previous) {
-    await notify(tx, { userIds: [previous.mentorId], clubId, kind: 'assignment', title: `${menteeName} has moved to another mentor`, body: 'You can still read their tanks for a while.', link: '/desk', subject });
+    await notify(tx, {
+      userIds: [previous.mentorId],
+      clubId,
+      kind: 'assignment',
+      title: `${menteeName} has moved to another mentor`,
+      body: 'You can still read their tanks for a while.',
+      link: '/desk',
+      subject,
+    });
   }
   return { assignment, previous, answeredRequestIds: answered.map((r) => r.id) };
 }
 
 /** Ends a pairing now (audited); ending one that already ended changes nothing. */
-export async function endAssignment(m: EntityManager, row: MentorAssignment, actorId: string): Promise<MentorAssignment> {
+export async function endAssignment(
+  m: EntityManager,
+  row: MentorAssignment,
+  actorId: string,
+): Promise<MentorAssignment> {
   if (row.endedAt) return row;
   const ended = { ...row, endedAt: new Date() };
   await m.update(MentorAssignment, { id: row.id }, { endedAt: ended.endedAt });
-  await audit(m, { actorId, clubId: row.clubId, action: 'mentor-assignment.ended', targetType: 'MentorAssignment', targetId: row.id });
+  await audit(m, {
+    actorId,
+    clubId: row.clubId,
+    action: 'mentor-assignment.ended',
+    targetType: 'MentorAssignment',
+    targetId: row.id,
+  });
   return ended;
 }
 
 /** How many mentees a mentor takes on in the club (audited), with how many they have now. */
-export async function setMentorCapacity(tx: EntityManager, p: { clubId: string; mentorId: string; capacity: number; actorId: string }) {
-  const m = await tx.findOne(Membership, { where: { clubId: p.clubId, userId: p.mentorId }, lock: { mode: 'pessimistic_write' } });
+export async function setMentorCapacity(
+  tx: EntityManager,
+  p: { clubId: string; mentorId: string; capacity: number; actorId: string },
+) {
+  const m = await tx.findOne(Membership, {
+    where: { clubId: p.clubId, userId: p.mentorId },
+    lock: { mode: 'pessimistic_write' },
+  });
   if (!m) throw errors.notFound('That mentor');
-  if (m.role === 'member' || m.status !== 'active') throw errors.conflict('Only active mentors and admins take on mentees.');
+  if (m.role === 'member' || m.status !== 'active')
+    throw errors.conflict('Only active mentors and admins take on mentees.');
   await tx.update(Membership, { id: m.id }, { mentorCapacity: p.capacity });
   await audit(tx, {
     actorId: p.actorId,
@@ -111,6 +187,10 @@ export async function setMentorCapacity(tx: EntityManager, p: { clubId: string; 
     targetId: m.id,
     details: { mentorId: p.mentorId, from: m.mentorCapacity, to: p.capacity },
   });
-  const menteeCount = await tx.countBy(MentorAssignment, { clubId: p.clubId, mentorId: p.mentorId, endedAt: IsNull() });
+  const menteeCount = await tx.countBy(MentorAssignment, {
+    clubId: p.clubId,
+    mentorId: p.mentorId,
+    endedAt: IsNull(),
+  });
   return { mentorId: p.mentorId, capacity: p.capacity, menteeCount };
 }

@@ -11,12 +11,25 @@ export function mentorCapacityRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const router = Router();
 
   const update = { params: mentorParams, body: updateMentorCapacitySchema };
-  router.patch('/clubs/:clubId/mentors/:userId/capacity', requireSignIn, validate(update), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, update);
-    authorize(req, 'update', 'MentorSettings', { clubId: params.clubId, mentorId: params.userId });
-    const result = await dataSource.transaction((tx) => setMentorCapacity(tx, { clubId: params.clubId, mentorId: params.userId, capacity: body.capacity, actorId: viewerOf(req).user.id }));
-    res.json(result);
-  });
+  router.patch(
+    '/clubs/:clubId/mentors/:userId/capacity',
+    requireSignIn,
+    validate(update),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, update);
+      authorize(req, 'update', 'MentorSettings', { clubId: params.clubId, mentorId: params.userId });
+      const result = await dataSource.transaction((tx) =>
+        setMentorCapacity(tx, {
+          clubId: params.clubId,
+          mentorId: params.userId,
+          capacity: body.capacity,
+          actorId: viewerOf(req).user.id,
+        }),
+      );
+      res.json(result);
+    },
+  );
 
   return router;
 }

@@ -17,8 +17,17 @@ export interface DigestScheduler {
  * The digest job on pg-boss in our own PostgreSQL: the schedule survives restarts, pg-boss hands each hourly run to
  * one worker, and runDigest's claim rows keep it to one e-mail per person per day even if two runs overlap.
  */
-export async function startDigestScheduler(p: { config: Config; dataSource: DataSource; mailer: Mailer; logger: Logger }): Promise<DigestScheduler> {
-  const boss = new PgBoss({ connectionString: p.config.databaseUrl, max: 2, application_name: 'shoalwise-digest' });
+export async function startDigestScheduler(p: {
+  config: Config;
+  dataSource: DataSource;
+  mailer: Mailer;
+  logger: Logger;
+}): Promise<DigestScheduler> {
+  const boss = new PgBoss({
+    connectionString: p.config.databaseUrl,
+    max: 2,
+    application_name: 'shoalwise-digest',
+  });
   boss.on('error', (err: Error) => p.logger.warn({ err: err.message }, 'digest scheduler error'));
   await boss.start();
   await boss.createQueue(DIGEST_QUEUE);

@@ -1,5 +1,10 @@
 import { In, type DataSource, type EntityManager } from 'typeorm';
-import { DEFAULT_EMAIL_MODES, DIGEST_LATEST_LOCAL_HOUR, DIGEST_LOCAL_HOUR, DIGEST_LOOKBACK_DAYS } from '@shared/constants/notifications';
+import {
+  DEFAULT_EMAIL_MODES,
+  DIGEST_LATEST_LOCAL_HOUR,
+  DIGEST_LOCAL_HOUR,
+  DIGEST_LOOKBACK_DAYS,
+} from '@shared/constants/notifications';
 import type { Mailer } from '../../mail/mailer';
 import { localDayAndHour } from './local-day';
 import { digestMail, type MailLinks, type Recipient } from './notification-mail';
@@ -41,7 +46,14 @@ async function candidates(ds: DataSource, now: Date): Promise<Candidate[]> {
 }
 
 /** Claims (user, local date) and queues that user's digest in the same transaction; false if it was already claimed. */
-async function sendOne(tx: EntityManager, mailer: Mailer, links: MailLinks, user: Candidate, localDate: string, now: Date): Promise<boolean> {
+async function sendOne(
+  tx: EntityManager,
+  mailer: Mailer,
+  links: MailLinks,
+  user: Candidate,
+  localDate: string,
+  now: Date,
+): Promise<boolean> {
   // Concurrent workers block on the unique index here; the one that comes second gets DO NOTHING once the first commits.
   const claimed: { id: string }[] = await tx.query(
     `INSERT INTO notification_digest (user_id, digest_date, created_at) VALUES ($1, $2, $3)
@@ -58,10 +70,16 @@ async function sendOne(tx: EntityManager, mailer: Mailer, links: MailLinks, user
       RETURNING n.id, c.name AS "clubName"`,
     [user.id, now.toISOString(), DIGEST_LOOKBACK_DAYS, DEFAULTS, digestId],
   );
-  await tx.query(`UPDATE notification_digest SET notification_count = $2 WHERE id = $1`, [digestId, marked.length]);
+  await tx.query(`UPDATE notification_digest SET notification_count = $2 WHERE id = $1`, [
+    digestId,
+    marked.length,
+  ]);
   if (!marked.length) return true;
   const clubOf = new Map(marked.map((r) => [r.id, r.clubName]));
-  const list = await tx.find(Notification, { where: { id: In([...clubOf.keys()]) }, order: { createdAt: 'ASC', id: 'ASC' } });
+  const list = await tx.find(Notification, {
+    where: { id: In([...clubOf.keys()]) },
+    order: { createdAt: 'ASC', id: 'ASC' },
+  });
   const items = list.map((n) => ({ clubName: clubOf.get(n.id) ?? '', notification: n }));
   await mailer.enqueue(digestMail({ to: user, items, localDate, links }), { db: tx });
   return true;
@@ -72,7 +90,12 @@ async function sendOne(tx: EntityManager, mailer: Mailer, links: MailLinks, user
  * digest notifications gets one e-mail for that local day. Safe to run concurrently and as often as you like:
  * the (user, date) claim row and the e-mail job commit together or not at all.
  */
-export async function runDigest(dataSource: DataSource, mailer: Mailer, now: Date, links: MailLinks): Promise<DigestResult> {
+export async function runDigest(
+  dataSource: DataSource,
+  mailer: Mailer,
+  now: Date,
+  links: MailLinks,
+): Promise<DigestResult> {
   const result: DigestResult = { sentTo: [], alreadyClaimed: [] };
   for (const user of await candidates(dataSource, now)) {
     const { date, hour } = localDayAndHour(now, user.timeZone);

@@ -23,7 +23,13 @@ interface Footer {
   settingsUrl: string;
 }
 
-function footerFor(links: MailLinks, userId: string, scope: UnsubscribeScope, why: string, stopLabel: string): Footer {
+function footerFor(
+  links: MailLinks,
+  userId: string,
+  scope: UnsubscribeScope,
+  why: string,
+  stopLabel: string,
+): Footer {
   return {
     why,
     stopLabel,
@@ -52,14 +58,28 @@ const button = (href: string, label: string) =>
   `<p style="margin:20px 0"><a href="${escapeHtml(href)}" style="background:#18576b;color:#fff;padding:12px 20px;border-radius:999px;text-decoration:none;font-weight:700">${escapeHtml(label)}</a></p>`;
 
 /** Mail clients show an unsubscribe button from these; the POST form is RFC 8058 one-click. */
-const listHeaders = (f: Footer) => ({ 'List-Unsubscribe': `<${f.stopUrl}>`, 'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click' });
+const listHeaders = (f: Footer) => ({
+  'List-Unsubscribe': `<${f.stopUrl}>`,
+  'List-Unsubscribe-Post': 'List-Unsubscribe=One-Click',
+});
 
 /** One notification, sent at once because the person chose "right away" for its kind. */
-export function immediateMail(p: { to: Recipient; clubName: string; notification: Notification; links: MailLinks }): OutgoingMail {
+export function immediateMail(p: {
+  to: Recipient;
+  clubName: string;
+  notification: Notification;
+  links: MailLinks;
+}): OutgoingMail {
   const n = p.notification;
   const url = `${p.links.baseUrl}${n.link}`;
   const label = NOTIFICATION_KIND_LABELS[n.kind].label;
-  const footer = footerFor(p.links, p.to.id, n.kind, `You get "${label}" e-mails right away from ${p.clubName} on Shoalwise.`, `Stop "${label}" e-mails`);
+  const footer = footerFor(
+    p.links,
+    p.to.id,
+    n.kind,
+    `You get "${label}" e-mails right away from ${p.clubName} on Shoalwise.`,
+    `Stop "${label}" e-mails`,
+  );
   const bodyText = n.body ? `\n\n${n.body}` : '';
   return {
     to: p.to.email,
@@ -80,15 +100,29 @@ export interface DigestItem {
 }
 
 /** The morning round-up: everything in digest mode that the person has not read or been e-mailed yet. */
-export function digestMail(p: { to: Recipient; items: DigestItem[]; localDate: string; links: MailLinks }): OutgoingMail {
+export function digestMail(p: {
+  to: Recipient;
+  items: DigestItem[];
+  localDate: string;
+  links: MailLinks;
+}): OutgoingMail {
   const byClub = new Map<string, Notification[]>();
   for (const i of p.items) byClub.set(i.clubName, [...(byClub.get(i.clubName) ?? []), i.notification]);
-  const footer = footerFor(p.links, p.to.id, 'digest', 'You get this digest once a day, in the morning, when something new happened.', 'Stop the daily digest');
+  const footer = footerFor(
+    p.links,
+    p.to.id,
+    'digest',
+    'You get this digest once a day, in the morning, when something new happened.',
+    'Stop the daily digest',
+  );
   const count = p.items.length;
   const first = p.to.displayName.split(' ')[0] ?? p.to.displayName;
   const intro = `Good morning, ${first}. ${count === 1 ? 'One thing' : `${count} things`} happened in your club${byClub.size > 1 ? 's' : ''} since your last digest.`;
   const text = [...byClub]
-    .map(([club, list]) => `${club}\n${list.map((n) => `- ${n.title}${n.body ? ` — ${n.body}` : ''}\n  ${p.links.baseUrl}${n.link}`).join('\n')}`)
+    .map(
+      ([club, list]) =>
+        `${club}\n${list.map((n) => `- ${n.title}${n.body ? ` — ${n.body}` : ''}\n  ${p.links.baseUrl}${n.link}`).join('\n')}`,
+    )
     .join('\n\n');
   const html = [...byClub]
     .map(
@@ -105,7 +139,11 @@ export function digestMail(p: { to: Recipient; items: DigestItem[]; localDate: s
     to: p.to.email,
     subject: `Your Shoalwise digest for ${p.localDate}: ${count} update${count === 1 ? '' : 's'}`,
     text: `${intro}\n\n${text}\n\n${footerText(footer)}`,
-    html: page('Shoalwise · daily digest', `<p style="margin:0 0 14px">${escapeHtml(intro)}</p>${html}${button(`${p.links.baseUrl}/`, 'Open Shoalwise')}`, footer),
+    html: page(
+      'Shoalwise · daily digest',
+      `<p style="margin:0 0 14px">${escapeHtml(intro)}</p>${html}${button(`${p.links.baseUrl}/`, 'Open Shoalwise')}`,
+      footer,
+    ),
     headers: listHeaders(footer),
   };
 }

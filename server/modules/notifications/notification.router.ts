@@ -2,11 +2,21 @@ import { Router } from 'express';
 import type { Deps } from '@server/deps';
 import { DEFAULT_EMAIL_MODES } from '@shared/constants/notifications';
 import type { NotificationPage, NotificationPreferencesView } from '@shared/schemas/notification-views';
-import { listNotificationsQuery, notificationParams, updateNotificationPreferencesSchema } from '@shared/schemas/notification.schema';
+import {
+  listNotificationsQuery,
+  notificationParams,
+  updateNotificationPreferencesSchema,
+} from '@shared/schemas/notification.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { requireSignIn, viewerOf } from '../../middleware/viewer';
-import { findNotification, markAllRead, markRead, notificationsPage, unreadCount } from './notification.queries';
+import {
+  findNotification,
+  markAllRead,
+  markRead,
+  notificationsPage,
+  unreadCount,
+} from './notification.queries';
 import { presentNotification } from './notification.presenter';
 import { changeEmailModes, emailModesOf } from './preferences';
 
@@ -41,11 +51,17 @@ export function notificationRouter(deps: Pick<Deps, 'dataSource'>): Router {
     await markRead(m, userId, params.id);
     const row = await findNotification(m, userId, params.id);
     if (!row) throw errors.notFound('That notification');
-    res.json({ notification: presentNotification(row, row.clubName), unreadCount: await unreadCount(m, userId) });
+    res.json({
+      notification: presentNotification(row, row.clubName),
+      unreadCount: await unreadCount(m, userId),
+    });
   });
 
   router.get('/me/notification-preferences', requireSignIn, async (req, res) => {
-    const body: NotificationPreferencesView = { preferences: await emailModesOf(m, viewerOf(req).user.id), defaults: DEFAULT_EMAIL_MODES };
+    const body: NotificationPreferencesView = {
+      preferences: await emailModesOf(m, viewerOf(req).user.id),
+      defaults: DEFAULT_EMAIL_MODES,
+    };
     res.json(body);
   });
 

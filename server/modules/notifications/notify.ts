@@ -38,8 +38,13 @@ export function createNotifier(delivery: NotificationDelivery): Notify {
   return (tx, input) => notifyThrough(delivery, tx, input);
 }
 
-async function notifyThrough(delivery: NotificationDelivery, tx: EntityManager, input: NotifyInput): Promise<Notification[]> {
-  if (!/^\/(?![/\\])/.test(input.link)) throw new Error(`notify(): link must be a path inside the app, got "${input.link}"`);
+async function notifyThrough(
+  delivery: NotificationDelivery,
+  tx: EntityManager,
+  input: NotifyInput,
+): Promise<Notification[]> {
+  if (!/^\/(?![/\\])/.test(input.link))
+    throw new Error(`notify(): link must be a path inside the app, got "${input.link}"`);
   const wanted = [...new Set(input.userIds)];
   if (!wanted.length) return [];
   const recipients: Recipient[] = await tx.query(
@@ -49,7 +54,9 @@ async function notifyThrough(delivery: NotificationDelivery, tx: EntityManager, 
     [input.clubId, wanted],
   );
   if (!recipients.length) return [];
-  const [club] = (await tx.query(`SELECT name FROM club WHERE id = $1`, [input.clubId])) as { name: string }[];
+  const [club] = (await tx.query(`SELECT name FROM club WHERE id = $1`, [input.clubId])) as {
+    name: string;
+  }[];
   const clubName = club?.name ?? '';
   const rows = await tx.save(
     Notification,
@@ -70,19 +77,29 @@ async function notifyThrough(delivery: NotificationDelivery, tx: EntityManager, 
     ),
   );
 
-  const modes = await emailModeFor(tx, recipients.map((r) => r.id), input.kind);
+  const modes = await emailModeFor(
+    tx,
+    recipients.map((r) => r.id),
+    input.kind,
+  );
   const now = new Date();
   for (const row of rows) {
     if (modes.get(row.userId) !== 'immediate') continue;
     const to = recipients.find((r) => r.id === row.userId)!;
     const mail = immediateMail({ to, clubName, notification: row, links: delivery.config });
-    await delivery.mailer.enqueue(input.attachments?.length ? { ...mail, attachments: input.attachments } : mail, { db: tx });
+    await delivery.mailer.enqueue(
+      input.attachments?.length ? { ...mail, attachments: input.attachments } : mail,
+      { db: tx },
+    );
     await tx.update(Notification, { id: row.id }, { emailedAt: now });
     row.emailedAt = now;
   }
 
   afterCommit(tx, () => {
-    for (const row of rows) delivery.hub.emitToUser(row.userId, 'notification', { notification: presentNotification(row, clubName) });
+    for (const row of rows)
+      delivery.hub.emitToUser(row.userId, 'notification', {
+        notification: presentNotification(row, clubName),
+      });
   });
   return rows;
 }

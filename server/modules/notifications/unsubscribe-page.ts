@@ -1,7 +1,11 @@
 import { escapeHtml } from '../../mail/templates';
 
 /** A tiny stand-alone page (no client bundle, no sign-in) for the unsubscribe link. */
-export function unsubscribePage(p: { title: string; paragraphs: string[]; form?: { action: string; button: string } }): string {
+export function unsubscribePage(p: {
+  title: string;
+  paragraphs: string[];
+  form?: { action: string; button: string };
+}): string {
   const body = p.paragraphs.map((t) => `<p>${escapeHtml(t)}</p>`).join('');
   const form = p.form
     ? `<form method="post" action="${escapeHtml(p.form.action)}"><button type="submit">${escapeHtml(p.form.button)}</button></form>`

@@ -10,9 +10,11 @@ export interface UnsubscribeClaim {
 const UUID = /^[0-9a-f]{8}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{4}-[0-9a-f]{12}$/i;
 
 // A key of its own, derived from the session secret, so a signature made here is worthless anywhere else.
-const keyFrom = (secret: string) => createHmac('sha256', secret).update('shoalwise:unsubscribe-link:v1').digest();
+const keyFrom = (secret: string) =>
+  createHmac('sha256', secret).update('shoalwise:unsubscribe-link:v1').digest();
 
-const sign = (secret: string, payload: string) => createHmac('sha256', keyFrom(secret)).update(payload).digest('base64url');
+const sign = (secret: string, payload: string) =>
+  createHmac('sha256', keyFrom(secret)).update(payload).digest('base64url');
 
 /**
  * `<base64url(userId:scope)>.<HMAC-SHA256>`. No expiry: an unsubscribe link in an old e-mail must keep working,

@@ -8,13 +8,24 @@ import { unsubscribePage } from './unsubscribe-page';
 import { verifyUnsubscribeToken, type UnsubscribeClaim } from './unsubscribe-token';
 
 const scopeText = (scope: UnsubscribeScope) =>
-  scope === 'all' ? 'every Shoalwise e-mail' : scope === 'digest' ? 'the daily digest' : `"${NOTIFICATION_KIND_LABELS[scope].label}" e-mails`;
+  scope === 'all'
+    ? 'every Shoalwise e-mail'
+    : scope === 'digest'
+      ? 'the daily digest'
+      : `"${NOTIFICATION_KIND_LABELS[scope].label}" e-mails`;
 
 const refuse = (res: Response) =>
   res
     .status(400)
     .type('html')
-    .send(unsubscribePage({ title: 'This link does not work', paragraphs: ['The unsubscribe link is incomplete or was changed. Copy the whole link from the e-mail, or sign in and choose your e-mails in your profile.'] }));
+    .send(
+      unsubscribePage({
+        title: 'This link does not work',
+        paragraphs: [
+          'The unsubscribe link is incomplete or was changed. Copy the whole link from the e-mail, or sign in and choose your e-mails in your profile.',
+        ],
+      }),
+    );
 
 /**
  * The unsubscribe link from e-mails: works without signing in, because the signed token names the person.
@@ -40,8 +51,13 @@ export function unsubscribeRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Ro
     res.type('html').send(
       unsubscribePage({
         title: 'Stop these e-mails?',
-        paragraphs: [`You will no longer get ${scopeText(found.claim.scope)}. Notifications still show in the app.`],
-        form: { action: `/api/unsubscribe?token=${encodeURIComponent(found.token)}`, button: 'Yes, stop them' },
+        paragraphs: [
+          `You will no longer get ${scopeText(found.claim.scope)}. Notifications still show in the app.`,
+        ],
+        form: {
+          action: `/api/unsubscribe?token=${encodeURIComponent(found.token)}`,
+          button: 'Yes, stop them',
+        },
       }),
     );
   });

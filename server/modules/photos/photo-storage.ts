@@ -27,7 +27,12 @@ export interface StagedFile {
 }
 
 /** Writes under a temporary name ("….tmp-<random>"), so a crash never leaves a file under a real key. */
-export async function stage(uploadsDir: string, key: string, size: PhotoSize, data: Buffer): Promise<StagedFile> {
+export async function stage(
+  uploadsDir: string,
+  key: string,
+  size: PhotoSize,
+  data: Buffer,
+): Promise<StagedFile> {
   const final = photoPath(uploadsDir, key, size);
   const temp = `${final}.tmp-${randomBytes(6).toString('hex')}`;
   await writeFile(temp, data, { mode: 0o600, flag: 'wx' });
@@ -44,5 +49,10 @@ export async function discard(files: readonly StagedFile[]): Promise<void> {
 }
 
 export async function removePhotoFiles(uploadsDir: string, keys: readonly string[]): Promise<void> {
-  await Promise.all(keys.flatMap((k) => [rm(photoPath(uploadsDir, k, 'full'), { force: true }), rm(photoPath(uploadsDir, k, 'thumb'), { force: true })]));
+  await Promise.all(
+    keys.flatMap((k) => [
+      rm(photoPath(uploadsDir, k, 'full'), { force: true }),
+      rm(photoPath(uploadsDir, k, 'thumb'), { force: true }),
+    ]),
+  );
 }

@@ -23,13 +23,21 @@ function toAppError(err: unknown): AppError {
   if (err instanceof multer.MulterError) {
     switch (err.code) {
       case 'LIMIT_FILE_SIZE':
-        return errors.tooLarge(`A photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Choose a smaller one.`);
+        return errors.tooLarge(
+          `A photo is larger than ${PHOTO_MAX_BYTES / 1024 / 1024} MB. Choose a smaller one.`,
+        );
       case 'LIMIT_FILE_COUNT':
-        return errors.badRequest(`Send at most ${PHOTO_MAX_FILES} photos at a time.`, [{ path: PHOTO_FIELD, message: `At most ${PHOTO_MAX_FILES}.` }]);
+        return errors.badRequest(`Send at most ${PHOTO_MAX_FILES} photos at a time.`, [
+          { path: PHOTO_FIELD, message: `At most ${PHOTO_MAX_FILES}.` },
+        ]);
       case 'LIMIT_UNEXPECTED_FILE':
         return err.field === PHOTO_FIELD
-          ? errors.badRequest(`Send at most ${PHOTO_MAX_FILES} photos at a time.`, [{ path: PHOTO_FIELD, message: `At most ${PHOTO_MAX_FILES}.` }])
-          : errors.badRequest(`Send the pictures in the "${PHOTO_FIELD}" field.`, [{ path: err.field ?? '(root)', message: 'Not expected here.' }]);
+          ? errors.badRequest(`Send at most ${PHOTO_MAX_FILES} photos at a time.`, [
+              { path: PHOTO_FIELD, message: `At most ${PHOTO_MAX_FILES}.` },
+            ])
+          : errors.badRequest(`Send the pictures in the "${PHOTO_FIELD}" field.`, [
+              { path: err.field ?? '(root)', message: 'Not expected here.' },
+            ]);
       default:
         return errors.badRequest('The form has too many or too long fields.');
     }
@@ -40,7 +48,11 @@ function toAppError(err: unknown): AppError {
 /** Reads a multipart upload into memory within the limits; any problem becomes a 400 or 413 with a clear message. */
 export const receivePhotos: RequestHandler = (req, res, next) => {
   if (!req.is('multipart/form-data')) {
-    return next(errors.badRequest('Send the photos as multipart/form-data.', [{ path: PHOTO_FIELD, message: 'Choose a JPEG, PNG or WebP picture.' }]));
+    return next(
+      errors.badRequest('Send the photos as multipart/form-data.', [
+        { path: PHOTO_FIELD, message: 'Choose a JPEG, PNG or WebP picture.' },
+      ]),
+    );
   }
   upload(req, res, (err?: unknown) => next(err ? toAppError(err) : undefined));
 };

@@ -13,7 +13,10 @@ export async function photosOf(
 ): Promise<PhotosByOwner> {
   const testIds = [...(parents.waterTestIds ?? [])];
   const eventIds = [...(parents.eventIds ?? [])];
-  const where = [...(testIds.length ? [{ waterTestId: In(testIds) }] : []), ...(eventIds.length ? [{ eventId: In(eventIds) }] : [])];
+  const where = [
+    ...(testIds.length ? [{ waterTestId: In(testIds) }] : []),
+    ...(eventIds.length ? [{ eventId: In(eventIds) }] : []),
+  ];
   const byParent = new Map<string, PhotoView[]>();
   if (where.length) {
     const rows = await manager.find(Photo, { where, order: { createdAt: 'ASC', id: 'ASC' } });
@@ -26,7 +29,10 @@ export async function photosOf(
 }
 
 /** Storage keys of every photo hanging off these rows, so their files can go when the rows do. */
-export async function storageKeysOf(manager: EntityManager, parents: { waterTestIds?: string[]; eventIds?: string[]; tankId?: string }): Promise<string[]> {
+export async function storageKeysOf(
+  manager: EntityManager,
+  parents: { waterTestIds?: string[]; eventIds?: string[]; tankId?: string },
+): Promise<string[]> {
   const where = [
     ...(parents.waterTestIds?.length ? [{ waterTestId: In(parents.waterTestIds) }] : []),
     ...(parents.eventIds?.length ? [{ eventId: In(parents.eventIds) }] : []),
@@ -38,9 +44,17 @@ export async function storageKeysOf(manager: EntityManager, parents: { waterTest
 }
 
 /** A tank's photos, newest first; only those of one test or event when asked. */
-export async function photosOfTank(manager: EntityManager, tankId: string, filter: { waterTestId?: string; eventId?: string }): Promise<Photo[]> {
+export async function photosOfTank(
+  manager: EntityManager,
+  tankId: string,
+  filter: { waterTestId?: string; eventId?: string },
+): Promise<Photo[]> {
   return manager.find(Photo, {
-    where: { tankId, ...(filter.waterTestId ? { waterTestId: filter.waterTestId } : {}), ...(filter.eventId ? { eventId: filter.eventId } : {}) },
+    where: {
+      tankId,
+      ...(filter.waterTestId ? { waterTestId: filter.waterTestId } : {}),
+      ...(filter.eventId ? { eventId: filter.eventId } : {}),
+    },
     order: { createdAt: 'DESC', id: 'DESC' },
   });
 }

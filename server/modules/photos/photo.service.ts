@@ -25,7 +25,10 @@ export async function storePhotos(
     const keyed: { key: string; photo: ProcessedPhoto }[] = [];
     for (const photo of photos) {
       const key = newStorageKey();
-      staged.push(await stage(uploadsDir, key, 'full', photo.full), await stage(uploadsDir, key, 'thumb', photo.thumb));
+      staged.push(
+        await stage(uploadsDir, key, 'full', photo.full),
+        await stage(uploadsDir, key, 'thumb', photo.thumb),
+      );
       keyed.push({ key, photo });
     }
     return await dataSource.transaction(async (tx) => {

@@ -29,7 +29,13 @@ export async function mentionableFor(m: EntityManager, question: QuestionSubject
 }
 
 /** Who a message mentions: "@Name" in the text or picked by id, among those it may reach, never the author. */
-export async function mentionsOf(m: EntityManager, question: QuestionSubject, text: string, pickedIds: readonly string[], authorId: string): Promise<PersonRef[]> {
+export async function mentionsOf(
+  m: EntityManager,
+  question: QuestionSubject,
+  text: string,
+  pickedIds: readonly string[],
+  authorId: string,
+): Promise<PersonRef[]> {
   const candidates = (await mentionableFor(m, question)).filter((p) => p.userId !== authorId);
   const named = new Set([...mentionedIn(text, candidates), ...pickedIds]);
   return candidates.filter((p) => named.has(p.userId));

@@ -19,7 +19,11 @@ const LAST_AUTHOR = `COALESCE((SELECT r.author_id FROM question_reply r WHERE r.
  * Open questions per tank whose last message is the asker's (nobody has answered it since), for the mentor desk.
  * Every tank asked about is in the map, 0 when none are waiting.
  */
-export async function unansweredCountsByTank(manager: EntityManager, clubId: string, tankIds: readonly string[]): Promise<Map<string, number>> {
+export async function unansweredCountsByTank(
+  manager: EntityManager,
+  clubId: string,
+  tankIds: readonly string[],
+): Promise<Map<string, number>> {
   const counts = new Map<string, number>(tankIds.map((id) => [id, 0]));
   if (!tankIds.length) return counts;
   const rows: { tankId: string; n: number }[] = await manager.query(
@@ -45,13 +49,19 @@ function summaries(manager: EntityManager): SelectQueryBuilder<Question> {
     .addSelect('q.asker_id', 'askerId')
     .addSelect('u.display_name', 'askerName')
     .addSelect(`q.snapshot -> 'subject' ->> 'kind'`, 'aboutKind')
-    .addSelect(`COALESCE(q.snapshot -> 'subject' ->> 'takenAt', q.snapshot -> 'subject' ->> 'occurredAt')`, 'aboutAt')
+    .addSelect(
+      `COALESCE(q.snapshot -> 'subject' ->> 'takenAt', q.snapshot -> 'subject' ->> 'occurredAt')`,
+      'aboutAt',
+    )
     .addSelect('q.title', 'title')
     .addSelect('q.status', 'status')
     .addSelect('q.created_at', 'createdAt')
     .addSelect('q.answered_at', 'answeredAt')
     .addSelect('(SELECT count(*)::int FROM question_reply r WHERE r.question_id = q.id)', 'replyCount')
-    .addSelect('COALESCE((SELECT max(r.created_at) FROM question_reply r WHERE r.question_id = q.id), q.created_at)', 'lastActivityAt')
+    .addSelect(
+      'COALESCE((SELECT max(r.created_at) FROM question_reply r WHERE r.question_id = q.id), q.created_at)',
+      'lastActivityAt',
+    )
     .addSelect(LAST_AUTHOR, 'lastAuthorId');
 }
 
@@ -66,7 +76,11 @@ export async function listQuestions(
   if (filter.status === 'open') qb.andWhere(`q.status = 'open'`);
   if (filter.tankId) qb.andWhere('q.tank_id = :tankId', { tankId: filter.tankId });
   whereAllowed(qb, ability, 'read', 'Question', { clubId: 'q.club_id', askerId: 'q.asker_id' });
-  return qb.orderBy('"lastActivityAt"', 'DESC').addOrderBy('q.id', 'DESC').limit(LIST_LIMIT).getRawMany<SummaryRow>();
+  return qb
+    .orderBy('"lastActivityAt"', 'DESC')
+    .addOrderBy('q.id', 'DESC')
+    .limit(LIST_LIMIT)
+    .getRawMany<SummaryRow>();
 }
 
 export async function summaryOf(manager: EntityManager, questionId: string): Promise<SummaryRow> {
@@ -76,8 +90,15 @@ export async function summaryOf(manager: EntityManager, questionId: string): Pro
 }
 
 /** The question in this club, or 404: an id from another club does not exist here. */
-export async function loadQuestion(manager: EntityManager, clubId: string, questionId: string, lock = false): Promise<Question> {
-  const qb = manager.createQueryBuilder(Question, 'q').where('q.id = :questionId AND q.club_id = :clubId', { questionId, clubId });
+export async function loadQuestion(
+  manager: EntityManager,
+  clubId: string,
+  questionId: string,
+  lock = false,
+): Promise<Question> {
+  const qb = manager
+    .createQueryBuilder(Question, 'q')
+    .where('q.id = :questionId AND q.club_id = :clubId', { questionId, clubId });
   if (lock) qb.setLock('pessimistic_write');
   const question = await qb.getOne();
   if (!question) throw errors.notFound('That question');
@@ -85,17 +106,27 @@ export async function loadQuestion(manager: EntityManager, clubId: string, quest
 }
 
 export async function repliesOf(manager: EntityManager, questionId: string): Promise<ReplyView[]> {
-  const rows: { id: string; authorId: string; authorName: string; body: string; createdAt: Date }[] = await manager.query(
-    `SELECT r.id, r.author_id AS "authorId", u.display_name AS "authorName", r.body, r.created_at AS "createdAt"
+  const rows: { id: string; authorId: string; authorName: string; body: string; createdAt: Date }[] =
+    await manager.query(
+      `SELECT r.id, r.author_id AS "authorId", u.display_name AS "authorName", r.body, r.created_at AS "createdAt"
        FROM question_reply r JOIN app_user u ON u.id = r.author_id
       WHERE r.question_id = $1 ORDER BY r.created_at, r.id`,
-    [questionId],
-  );
-  return rows.map((r) => ({ id: r.id, author: { userId: r.authorId, displayName: r.authorName }, body: r.body, createdAt: new Date(r.createdAt).toISOString() }));
+      [questionId],
+    );
+  return rows.map((r) => ({
+    id: r.id,
+    author: { userId: r.authorId, displayName: r.authorName },
+    body: r.body,
+    createdAt: new Date(r.createdAt).toISOString(),
+  }));
 }
 
 /** The tank's readings as they are today, two weeks either side of `at`, oldest first. */
-export async function readingsAround(manager: EntityManager, tankId: string, at: string): Promise<ChartReading[]> {
+export async function readingsAround(
+  manager: EntityManager,
+  tankId: string,
+  at: string,
+): Promise<ChartReading[]> {
   const centre = Date.parse(at);
   const rows = await manager
     .createQueryBuilder(WaterTest, 'w')

@@ -1,7 +1,14 @@
 import { Router, type Request } from 'express';
 import type { Deps } from '@server/deps';
 import type { QuestionDetailView } from '@shared/schemas/question-views';
-import { askQuestionParams, askQuestionSchema, markAnsweredSchema, questionListQuery, questionParams, replySchema } from '@shared/schemas/question.schema';
+import {
+  askQuestionParams,
+  askQuestionSchema,
+  markAnsweredSchema,
+  questionListQuery,
+  questionParams,
+  replySchema,
+} from '@shared/schemas/question.schema';
 import { clubIdParams } from '@shared/schemas/common';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
@@ -28,17 +35,23 @@ export function questionRouter(deps: Pick<Deps, 'dataSource' | 'notify' | 'tankC
   const base = '/clubs/:clubId/questions';
 
   const ask = { params: askQuestionParams, body: askQuestionSchema };
-  router.post('/clubs/:clubId/tanks/:tankId/questions', requireSignIn, validate(ask), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, ask);
-    const { question, mentioned } = await dataSource.transaction(async (tx) => {
-      const tank = await loadTank(tx, params.clubId, params.tankId);
-      authorize(req, 'create', 'Question', { clubId: tank.clubId, askerId: tank.ownerId });
-      requireActive(tank);
-      return askQuestion(tx, deps, tank, body, author(req));
-    });
-    const summary = presentSummary(await summaryOf(dataSource.manager, question.id));
-    res.status(201).json({ question: { ...summary, body: question.body }, mentioned });
-  });
+  router.post(
+    '/clubs/:clubId/tanks/:tankId/questions',
+    requireSignIn,
+    validate(ask),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, ask);
+      const { question, mentioned } = await dataSource.transaction(async (tx) => {
+        const tank = await loadTank(tx, params.clubId, params.tankId);
+        authorize(req, 'create', 'Question', { clubId: tank.clubId, askerId: tank.ownerId });
+        requireActive(tank);
+        return askQuestion(tx, deps, tank, body, author(req));
+      });
+      const summary = presentSummary(await summaryOf(dataSource.manager, question.id));
+      res.status(201).json({ question: { ...summary, body: question.body }, mentioned });
+    },
+  );
 
   const list = { params: clubIdParams, query: questionListQuery };
   router.get(base, requireSignIn, validate(list), requireClubMember, async (req, res) => {
@@ -58,39 +71,62 @@ export function questionRouter(deps: Pick<Deps, 'dataSource' | 'notify' | 'tankC
       question: { ...presentSummary(await summaryOf(m, question.id)), body: question.body },
       snapshot: question.snapshot,
       replies: await repliesOf(m, question.id),
-      readings: await readingsAround(m, question.tankId, about.kind === 'water-test' ? about.takenAt : about.occurredAt),
-      mentionable: (await mentionableFor(m, subject(question))).filter((p) => p.userId !== viewerOf(req).user.id),
+      readings: await readingsAround(
+        m,
+        question.tankId,
+        about.kind === 'water-test' ? about.takenAt : about.occurredAt,
+      ),
+      mentionable: (await mentionableFor(m, subject(question))).filter(
+        (p) => p.userId !== viewerOf(req).user.id,
+      ),
     };
     res.json(view);
   });
 
   const reply = { params: questionParams, body: replySchema };
-  router.post(`${base}/:questionId/replies`, requireSignIn, validate(reply), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, reply);
-    const me = author(req);
-    const saved = await dataSource.transaction(async (tx) => {
-      const question = await loadQuestion(tx, params.clubId, params.questionId, true);
-      authorize(req, question.askerId === me.id ? 'update' : 'answer', 'Question', subject(question));
-      return addReply(tx, deps, question, body, me);
-    });
-    const { reply: r } = saved;
-    res.status(201).json({
-      reply: { id: r.id, author: { userId: me.id, displayName: me.displayName }, body: r.body, createdAt: r.createdAt.toISOString() },
-      question: presentSummary(await summaryOf(dataSource.manager, params.questionId)),
-      mentioned: saved.mentioned,
-    });
-  });
+  router.post(
+    `${base}/:questionId/replies`,
+    requireSignIn,
+    validate(reply),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, reply);
+      const me = author(req);
+      const saved = await dataSource.transaction(async (tx) => {
+        const question = await loadQuestion(tx, params.clubId, params.questionId, true);
+        authorize(req, question.askerId === me.id ? 'update' : 'answer', 'Question', subject(question));
+        return addReply(tx, deps, question, body, me);
+      });
+      const { reply: r } = saved;
+      res.status(201).json({
+        reply: {
+          id: r.id,
+          author: { userId: me.id, displayName: me.displayName },
+          body: r.body,
+          createdAt: r.createdAt.toISOString(),
+        },
+        question: presentSummary(await summaryOf(dataSource.manager, params.questionId)),
+        mentioned: saved.mentioned,
+      });
+    },
+  );
 
   const answered = { params: questionParams, body: markAnsweredSchema };
-  router.post(`${base}/:questionId/answered`, requireSignIn, validate(answered), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, answered);
-    await dataSource.transaction(async (tx) => {
-      const question = await loadQuestion(tx, params.clubId, params.questionId, true);
-      authorize(req, 'update', 'Question', subject(question));
-      await setAnswered(tx, deps, question, body.answered);
-    });
-    res.json({ question: presentSummary(await summaryOf(dataSource.manager, params.questionId)) });
-  });
+  router.post(
+    `${base}/:questionId/answered`,
+    requireSignIn,
+    validate(answered),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, answered);
+      await dataSource.transaction(async (tx) => {
+        const question = await loadQuestion(tx, params.clubId, params.questionId, true);
+        authorize(req, 'update', 'Question', subject(question));
+        await setAnswered(tx, deps, question, body.answered);
+      });
+      res.json({ question: presentSummary(await summaryOf(dataSource.manager, params.questionId)) });
+    },
+  );
 
   return router;
 }

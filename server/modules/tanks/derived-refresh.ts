@@ -1,5 +1,11 @@
 import type { EntityManager } from 'typeorm';
-import { FREE_AMMONIA_INPUTS, lastKnownInputs, type LastKnown, type ParameterKey, type WaterTestInput } from '@shared/care';
+import {
+  FREE_AMMONIA_INPUTS,
+  lastKnownInputs,
+  type LastKnown,
+  type ParameterKey,
+  type WaterTestInput,
+} from '@shared/care';
 import { deriveFreeAmmonia } from '@shared/readings/free-ammonia';
 import type { DerivedInfo } from '@shared/readings/normalize-water-test';
 import type { Tank } from './tank.entity';
@@ -24,7 +30,10 @@ const testsOf = (known: LastKnown): WaterTestInput[] =>
 function stable(value: unknown): string {
   if (Array.isArray(value)) return `[${value.map(stable).join(',')}]`;
   if (value && typeof value === 'object') {
-    return `{${Object.keys(value).sort().map((k) => `${JSON.stringify(k)}:${stable((value as Record<string, unknown>)[k])}`).join(',')}}`;
+    return `{${Object.keys(value)
+      .sort()
+      .map((k) => `${JSON.stringify(k)}:${stable((value as Record<string, unknown>)[k])}`)
+      .join(',')}}`;
   }
   return JSON.stringify(value);
 }
@@ -34,7 +43,11 @@ function stable(value: unknown): string {
  * leans on earlier tests, so adding, editing or deleting one (or changing the kind of tank) can change later ones.
  * Writes only the rows whose derived values actually changed, in one statement.
  */
-export async function recomputeDerivedFrom(tx: EntityManager, tank: Tank, from: Date | null): Promise<number> {
+export async function recomputeDerivedFrom(
+  tx: EntityManager,
+  tank: Tank,
+  from: Date | null,
+): Promise<number> {
   let known: LastKnown = from ? await lastKnownBefore(tx, tank.id, { takenAt: from.toISOString() }) : {};
   const rows: TimelineRow[] = await tx.query(
     `SELECT id, taken_at AS "takenAt", temperature_c AS temperature, ph AS "pH", salinity_psu AS salinity,
@@ -52,7 +65,11 @@ export async function recomputeDerivedFrom(tx: EntityManager, tank: Tank, from: 
     // Walking the rows in order, what stood in before the previous row plus that row itself are all the rule needs.
     if (previous) known = lastKnownInputs([...testsOf(known), previous], { takenAt, id: row.id });
     if (row.ammonia !== null) {
-      const next = deriveFreeAmmonia({ id: row.id, takenAt, values: { ...values, ammonia: row.ammonia } }, known, chemistry);
+      const next = deriveFreeAmmonia(
+        { id: row.id, takenAt, values: { ...values, ammonia: row.ammonia } },
+        known,
+        chemistry,
+      );
       if (next && (stable(next) !== stable(row.derived.freeAmmonia) || next.value !== row.freeAmmonia)) {
         changes.push({ id: row.id, free: next.value, derived: { ...row.derived, freeAmmonia: next } });
       }

@@ -1,6 +1,12 @@
 import { Router } from 'express';
 import type { Deps } from '@server/deps';
-import { createLivestockSchema, livestockListQuery, livestockParams, tankParams, updateLivestockSchema } from '@shared/schemas/tank.schema';
+import {
+  createLivestockSchema,
+  livestockListQuery,
+  livestockParams,
+  tankParams,
+  updateLivestockSchema,
+} from '@shared/schemas/tank.schema';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
 import { removePhotoFiles } from '../photos';
@@ -38,16 +44,28 @@ export function livestockRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
   });
 
   const update = { params: livestockParams, body: updateLivestockSchema };
-  router.patch(`${base}/:livestockId`, requireSignIn, validate(update), requireClubMember, async (req, res) => {
-    const { params, body } = inputOf(res, update);
-    const row = await dataSource.transaction(async (tx) => {
-      const tank = await loadTank(tx, params.clubId, params.tankId);
-      authorize(req, 'update', 'Tank', ownedBy(tank));
-      requireActive(tank);
-      return editLivestock(tx, deps, await loadLivestock(tx, tank.id, params.livestockId), body, viewerOf(req).user.id);
-    });
-    res.json({ livestock: presentLivestock(row) });
-  });
+  router.patch(
+    `${base}/:livestockId`,
+    requireSignIn,
+    validate(update),
+    requireClubMember,
+    async (req, res) => {
+      const { params, body } = inputOf(res, update);
+      const row = await dataSource.transaction(async (tx) => {
+        const tank = await loadTank(tx, params.clubId, params.tankId);
+        authorize(req, 'update', 'Tank', ownedBy(tank));
+        requireActive(tank);
+        return editLivestock(
+          tx,
+          deps,
+          await loadLivestock(tx, tank.id, params.livestockId),
+          body,
+          viewerOf(req).user.id,
+        );
+      });
+      res.json({ livestock: presentLivestock(row) });
+    },
+  );
 
   /** For an entry made by mistake: its timeline entries go with it. Animals that left are recorded with removedOn instead. */
   const one = { params: livestockParams };

@@ -1,11 +1,24 @@
 import { readFile } from 'node:fs/promises';
 import { Router, type RequestHandler } from 'express';
 import type { Deps } from '@server/deps';
-import { photoParams, photoUploadFieldsSchema, tankParams, tankPhotoListQuery } from '@shared/schemas/photo.schema';
+import {
+  photoParams,
+  photoUploadFieldsSchema,
+  tankParams,
+  tankPhotoListQuery,
+} from '@shared/schemas/photo.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, parseInput, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
-import { ensureUploadsDir, findPhoto, photoPath, photosOfTank, presentPhoto, receivePhotos, type PhotoSize } from '../photos';
+import {
+  ensureUploadsDir,
+  findPhoto,
+  photoPath,
+  photosOfTank,
+  presentPhoto,
+  receivePhotos,
+  type PhotoSize,
+} from '../photos';
 import { findTank, loadTank, ownedBy, requireActive } from './tank-access';
 import type { Tank } from './tank.entity';
 import { attachPhotos, deletePhoto } from './tank-photo.service';
@@ -37,13 +50,21 @@ export function photoRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
     res.locals.tank = tank;
     next();
   };
-  router.post(tankPhotos, requireSignIn, validate(one), requireClubMember, mayUpload, receivePhotos, async (req, res) => {
-    const tank = res.locals.tank as Tank;
-    const fields = parseInput(photoUploadFieldsSchema, { ...req.body }, 'body');
-    const files = (req.files ?? []) as Express.Multer.File[];
-    const rows = await attachPhotos(dataSource, uploadsDir, tank, fields, files, viewerOf(req).user.id);
-    res.status(201).json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
-  });
+  router.post(
+    tankPhotos,
+    requireSignIn,
+    validate(one),
+    requireClubMember,
+    mayUpload,
+    receivePhotos,
+    async (req, res) => {
+      const tank = res.locals.tank as Tank;
+      const fields = parseInput(photoUploadFieldsSchema, { ...req.body }, 'body');
+      const files = (req.files ?? []) as Express.Multer.File[];
+      const rows = await attachPhotos(dataSource, uploadsDir, tank, fields, files, viewerOf(req).user.id);
+      res.status(201).json({ photos: rows.map((p) => presentPhoto(p, tank.clubId)) });
+    },
+  );
 
   const photo = { params: photoParams };
   /** The photo and its tank, when the tank is in this club. */
@@ -54,35 +75,57 @@ export function photoRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Router {
     return { photo: row, tank };
   };
 
-  const serve = (size: PhotoSize): RequestHandler => async (req, res) => {
-    const { params } = inputOf(res, photo);
-    const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
-    authorize(req, 'read', 'Photo', ownedBy(tank));
-    const data = await readFile(photoPath(uploadsDir, row.storageKey, size)).catch((error: NodeJS.ErrnoException) => {
-      if (error.code === 'ENOENT') throw errors.notFound('That photo file');
-      throw error;
-    });
-    res
-      .status(200)
-      .set({
-        'Content-Type': 'image/webp',
-        'X-Content-Type-Options': 'nosniff',
-        'Content-Disposition': 'inline; filename="photo.webp"',
-        'Cache-Control': 'private, max-age=3600',
-      })
-      .send(data);
-  };
-  router.get('/clubs/:clubId/photos/:photoId', requireSignIn, validate(photo), requireClubMember, serve('full'));
-  router.get('/clubs/:clubId/photos/:photoId/thumb', requireSignIn, validate(photo), requireClubMember, serve('thumb'));
+  const serve =
+    (size: PhotoSize): RequestHandler =>
+    async (req, res) => {
+      const { params } = inputOf(res, photo);
+      const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
+      authorize(req, 'read', 'Photo', ownedBy(tank));
+      const data = await readFile(photoPath(uploadsDir, row.storageKey, size)).catch(
+        (error: NodeJS.ErrnoException) => {
+          if (error.code === 'ENOENT') throw errors.notFound('That photo file');
+          throw error;
+        },
+      );
+      res
+        .status(200)
+        .set({
+          'Content-Type': 'image/webp',
+          'X-Content-Type-Options': 'nosniff',
+          'Content-Disposition': 'inline; filename="photo.webp"',
+          'Cache-Control': 'private, max-age=3600',
+        })
+        .send(data);
+    };
+  router.get(
+    '/clubs/:clubId/photos/:photoId',
+    requireSignIn,
+    validate(photo),
+    requireClubMember,
+    serve('full'),
+  );
+  router.get(
+    '/clubs/:clubId/photos/:photoId/thumb',
+    requireSignIn,
+    validate(photo),
+    requireClubMember,
+    serve('thumb'),
+  );
 
-  router.delete('/clubs/:clubId/photos/:photoId', requireSignIn, validate(photo), requireClubMember, async (req, res) => {
-    const { params } = inputOf(res, photo);
-    const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
-    authorize(req, 'delete', 'Photo', ownedBy(tank));
-    requireActive(tank);
-    await deletePhoto(dataSource.manager, uploadsDir, row);
-    res.status(204).end();
-  });
+  router.delete(
+    '/clubs/:clubId/photos/:photoId',
+    requireSignIn,
+    validate(photo),
+    requireClubMember,
+    async (req, res) => {
+      const { params } = inputOf(res, photo);
+      const { photo: row, tank } = await loadPhoto(params.clubId, params.photoId);
+      authorize(req, 'delete', 'Photo', ownedBy(tank));
+      requireActive(tank);
+      await deletePhoto(dataSource.manager, uploadsDir, row);
+      res.status(204).end();
+    },
+  );
 
   return router;
 }

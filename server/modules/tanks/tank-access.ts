@@ -27,5 +27,9 @@ export function requireActive(tank: Tank): void {
 
 /** Holds the tank's row until the transaction ends: two imports of one file cannot both pass the duplicate check. */
 export async function lockTank(tx: EntityManager, tankId: string): Promise<void> {
-  await tx.findOne(Tank, { where: { id: tankId }, select: { id: true }, lock: { mode: 'pessimistic_write' } });
+  await tx.findOne(Tank, {
+    where: { id: tankId },
+    select: { id: true },
+    lock: { mode: 'pessimistic_write' },
+  });
 }

@@ -15,7 +15,13 @@ export type TankChangeCause =
   | 'question';
 
 /** What changes the meaning of the tank's readings: its concerns are judged again. The rest is only announced. */
-const REJUDGED: ReadonlySet<TankChangeCause> = new Set(['water-tests', 'livestock', 'settings', 'care-profile', 'sign-off']);
+const REJUDGED: ReadonlySet<TankChangeCause> = new Set([
+  'water-tests',
+  'livestock',
+  'settings',
+  'care-profile',
+  'sign-off',
+]);
 
 export interface TankChange {
   tank: TankRef;
@@ -42,7 +48,11 @@ export const NOTHING_NEW: TankVerdict = Object.freeze({ raised: 0, cleared: 0, n
 /** Brings the tank's concerns in line with its readings, inside the transaction of the change. */
 export type TankJudge = (tx: EntityManager, tank: TankRef) => Promise<TankVerdict>;
 /** Hears every change with its verdict, still inside the transaction (work for after the commit goes through afterCommit). */
-export type TankChangeListener = (tx: EntityManager, change: TankChange, verdict: TankVerdict) => Promise<void>;
+export type TankChangeListener = (
+  tx: EntityManager,
+  change: TankChange,
+  verdict: TankVerdict,
+) => Promise<void>;
 
 /**
  * The one way a change to a tank is made known: whoever changes a tank (its readings, animals, settings, care
@@ -70,6 +80,7 @@ export class TankChanges {
 
   /** A club's care profile changed: every live tank that follows it is judged by the new version. */
   async publishForProfile(tx: EntityManager, clubId: string, careProfileKey: string): Promise<void> {
-    for (const id of await liveTankIdsOnProfile(tx, clubId, careProfileKey)) await this.publish(tx, id, 'care-profile');
+    for (const id of await liveTankIdsOnProfile(tx, clubId, careProfileKey))
+      await this.publish(tx, id, 'care-profile');
   }
 }

@@ -23,11 +23,19 @@ export async function tankEventPage(
   const qb = m.createQueryBuilder(TankEvent, 'e').where('e.tank_id = :tankId', { tankId });
   if (q.kind) qb.andWhere('e.kind = :kind', { kind: q.kind });
   if (q.before) qb.andWhere('(e.occurred_at, e.id) < (:at, :id)', { at: q.before.at, id: q.before.id });
-  const rows = await qb.orderBy('e.occurred_at', 'DESC').addOrderBy('e.id', 'DESC').limit(q.limit + 1).getMany();
+  const rows = await qb
+    .orderBy('e.occurred_at', 'DESC')
+    .addOrderBy('e.id', 'DESC')
+    .limit(q.limit + 1)
+    .getMany();
   return pageOf(rows, q.limit, (e) => ({ at: e.occurredAt, id: e.id }));
 }
 
-export async function findTankEvent(m: EntityManager, tankId: string, eventId: string): Promise<TankEvent | null> {
+export async function findTankEvent(
+  m: EntityManager,
+  tankId: string,
+  eventId: string,
+): Promise<TankEvent | null> {
   return m.findOneBy(TankEvent, { id: eventId, tankId });
 }
 

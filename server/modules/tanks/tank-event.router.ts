@@ -1,7 +1,12 @@
 import { Router } from 'express';
 import type { EntityManager } from 'typeorm';
 import type { Deps } from '@server/deps';
-import { createTankEventSchema, tankEventListQuery, tankEventParams, updateTankEventSchema } from '@shared/schemas/tank-event.schema';
+import {
+  createTankEventSchema,
+  tankEventListQuery,
+  tankEventParams,
+  updateTankEventSchema,
+} from '@shared/schemas/tank-event.schema';
 import { tankParams } from '@shared/schemas/tank.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
@@ -31,7 +36,10 @@ export function tankEventRouter(deps: Pick<Deps, 'dataSource' | 'config'>): Rout
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'TankEvent', ownedBy(tank));
-    const page = await tankEventPage(dataSource.manager, tank.id, { ...query, before: decodeCursor(query.before) });
+    const page = await tankEventPage(dataSource.manager, tank.id, {
+      ...query,
+      before: decodeCursor(query.before),
+    });
     const photos = await photosOf(dataSource.manager, tank.clubId, { eventIds: page.items.map((e) => e.id) });
     res.json({ items: page.items.map((e) => presentTankEvent(e, photos)), nextCursor: page.nextCursor });
   });

@@ -4,13 +4,24 @@ import type { LastKnown } from '@shared/care';
 import type { Livestock } from './livestock.entity';
 import type { Tank } from './tank.entity';
 
-const defined = <T extends object>(o: T) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== null && v !== undefined));
+const defined = <T extends object>(o: T) =>
+  Object.fromEntries(Object.entries(o).filter(([, v]) => v !== null && v !== undefined));
 
 function presentVolume(t: Tank): TankView['volume'] {
   if (t.volumeSource === 'entered' || !t.shape || t.heightCm === null) return { source: 'entered' };
-  const dimensionsCm = { height: t.heightCm, ...defined({ length: t.lengthCm, width: t.widthCm, diameter: t.diameterCm, bowDepth: t.bowDepthCm }) };
+  const dimensionsCm = {
+    height: t.heightCm,
+    ...defined({ length: t.lengthCm, width: t.widthCm, diameter: t.diameterCm, bowDepth: t.bowDepthCm }),
+  };
   const { grossL } = tankVolume({ shape: t.shape, dimensionsCm } as TankVolumeInput);
-  return { source: 'dimensions', shape: t.shape, dimensionsCm, fillHeightCm: t.fillHeightCm, displacementFraction: t.displacementFraction ?? 0, grossL };
+  return {
+    source: 'dimensions',
+    shape: t.shape,
+    dimensionsCm,
+    fillHeightCm: t.fillHeightCm,
+    displacementFraction: t.displacementFraction ?? 0,
+    grossL,
+  };
 }
 
 export function presentTank(t: Tank, extra: { ownerName: string; hasLivestock: boolean }): TankView {
@@ -49,7 +60,14 @@ export function presentLivestock(l: Livestock): LivestockView {
   };
 }
 
-export function presentTankDetail(t: Tank, extra: { ownerName: string; livestock: Livestock[]; lastKnown: LastKnown }): TankDetailView {
+export function presentTankDetail(
+  t: Tank,
+  extra: { ownerName: string; livestock: Livestock[]; lastKnown: LastKnown },
+): TankDetailView {
   const hasLivestock = extra.livestock.some((l) => l.removedOn === null);
-  return { ...presentTank(t, { ownerName: extra.ownerName, hasLivestock }), livestock: extra.livestock.map(presentLivestock), lastKnown: extra.lastKnown };
+  return {
+    ...presentTank(t, { ownerName: extra.ownerName, hasLivestock }),
+    livestock: extra.livestock.map(presentLivestock),
+    lastKnown: extra.lastKnown,
+  };
 }

@@ -3,7 +3,8 @@ import { pageOf, type Position } from './cursor';
 import { TankEvent } from './tank-event.entity';
 import { WaterTest } from './water-test.entity';
 
-export type TimelineRow = { type: 'water-test'; at: Date; waterTest: WaterTest } | { type: 'event'; at: Date; event: TankEvent };
+export type TimelineRow =
+  { type: 'water-test'; at: Date; waterTest: WaterTest } | { type: 'event'; at: Date; event: TankEvent };
 
 interface Slot {
   type: 'water-test' | 'event';

@@ -18,24 +18,32 @@ export function timelineRouter(deps: Pick<Deps, 'dataSource'>): Router {
   const router = Router();
 
   const route = { params: tankParams, query: timelineQuery };
-  router.get('/clubs/:clubId/tanks/:tankId/timeline', requireSignIn, validate(route), requireClubMember, async (req, res) => {
-    const { params, query } = inputOf(res, route);
-    const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
-    authorize(req, 'read', 'WaterTest', ownedBy(tank));
-    authorize(req, 'read', 'TankEvent', ownedBy(tank));
-    const page = await timelinePage(dataSource.manager, tank.id, { limit: query.limit, before: decodeCursor(query.before) });
-    const photos = await photosOf(dataSource.manager, tank.clubId, {
-      waterTestIds: page.items.flatMap((i) => (i.type === 'water-test' ? [i.waterTest.id] : [])),
-      eventIds: page.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])),
-    });
-    const items = page.items.map(
-      (i): TimelineItem =>
+  router.get(
+    '/clubs/:clubId/tanks/:tankId/timeline',
+    requireSignIn,
+    validate(route),
+    requireClubMember,
+    async (req, res) => {
+      const { params, query } = inputOf(res, route);
+      const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
+      authorize(req, 'read', 'WaterTest', ownedBy(tank));
+      authorize(req, 'read', 'TankEvent', ownedBy(tank));
+      const page = await timelinePage(dataSource.manager, tank.id, {
+        limit: query.limit,
+        before: decodeCursor(query.before),
+      });
+      const photos = await photosOf(dataSource.manager, tank.clubId, {
+        waterTestIds: page.items.flatMap((i) => (i.type === 'water-test' ? [i.waterTest.id] : [])),
+        eventIds: page.items.flatMap((i) => (i.type === 'event' ? [i.event.id] : [])),
+      });
+      const items = page.items.map((i): TimelineItem =>
         i.type === 'water-test'
           ? { type: 'water-test', at: i.at.toISOString(), waterTest: presentWaterTest(i.waterTest, photos) }
           : { type: 'event', at: i.at.toISOString(), event: presentTankEvent(i.event, photos) },
-    );
-    res.json({ items, nextCursor: page.nextCursor });
-  });
+      );
+      res.json({ items, nextCursor: page.nextCursor });
+    },
+  );
 
   return router;
 }

@@ -1,4 +1,13 @@
-import { Column, CreateDateColumn, Entity, Index, JoinColumn, ManyToOne, PrimaryGeneratedColumn, UpdateDateColumn } from 'typeorm';
+import {
+  Column,
+  CreateDateColumn,
+  Entity,
+  Index,
+  JoinColumn,
+  ManyToOne,
+  PrimaryGeneratedColumn,
+  UpdateDateColumn,
+} from 'typeorm';
 import type { ParameterKey } from '@shared/care/parameters';
 import type { DerivedInfo } from '@shared/readings/normalize-water-test';
 import type { WaterTestEntries } from '@shared/schemas/water-test.schema';
@@ -36,7 +45,17 @@ export class WaterTest {
   @UpdateDateColumn({ type: 'timestamptz' }) updatedAt!: Date;
 }
 
-type ValueProperty = 'temperatureC' | 'salinityPsu' | 'pH' | 'ammoniaMgL' | 'nitriteMgL' | 'nitrateMgL' | 'alkalinityDkh' | 'calciumMgL' | 'magnesiumMgL' | 'phosphateMgL';
+type ValueProperty =
+  | 'temperatureC'
+  | 'salinityPsu'
+  | 'pH'
+  | 'ammoniaMgL'
+  | 'nitriteMgL'
+  | 'nitrateMgL'
+  | 'alkalinityDkh'
+  | 'calciumMgL'
+  | 'magnesiumMgL'
+  | 'phosphateMgL';
 
 /** Where each canonical parameter lives: entity property and SQL column. */
 export const VALUE_COLUMNS: Readonly<Record<ParameterKey, { property: ValueProperty; column: string }>> = {

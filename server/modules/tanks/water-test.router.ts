@@ -3,7 +3,12 @@ import type { EntityManager } from 'typeorm';
 import type { Deps } from '@server/deps';
 import { tankParams } from '@shared/schemas/tank.schema';
 import type { WaterTestDetailView } from '@shared/schemas/tank-views';
-import { createWaterTestSchema, updateWaterTestSchema, waterTestListQuery, waterTestParams } from '@shared/schemas/water-test.schema';
+import {
+  createWaterTestSchema,
+  updateWaterTestSchema,
+  waterTestListQuery,
+  waterTestParams,
+} from '@shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { inputOf, validate } from '../../middleware/validate';
 import { authorize, requireClubMember, requireSignIn, viewerOf } from '../../middleware/viewer';
@@ -36,8 +41,13 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
     const { params, query } = inputOf(res, list);
     const tank = await loadTank(dataSource.manager, params.clubId, params.tankId);
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
-    const page = await waterTestPage(dataSource.manager, tank.id, { ...query, before: decodeCursor(query.before) });
-    const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: page.items.map((t) => t.id) });
+    const page = await waterTestPage(dataSource.manager, tank.id, {
+      ...query,
+      before: decodeCursor(query.before),
+    });
+    const photos = await photosOf(dataSource.manager, tank.clubId, {
+      waterTestIds: page.items.map((t) => t.id),
+    });
     res.json({ items: page.items.map((t) => presentWaterTest(t, photos)), nextCursor: page.nextCursor });
   });
 
@@ -60,7 +70,10 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
     authorize(req, 'read', 'WaterTest', ownedBy(tank));
     const test = await loadTest(dataSource.manager, tank.id, params.testId);
     const photos = await photosOf(dataSource.manager, tank.clubId, { waterTestIds: [test.id] });
-    const lastKnown = await lastKnownBefore(dataSource.manager, tank.id, { takenAt: test.takenAt.toISOString(), id: test.id });
+    const lastKnown = await lastKnownBefore(dataSource.manager, tank.id, {
+      takenAt: test.takenAt.toISOString(),
+      id: test.id,
+    });
     const view: WaterTestDetailView = { waterTest: presentWaterTest(test, photos), lastKnown };
     res.json(view);
   });
@@ -84,7 +97,13 @@ export function waterTestRouter(deps: Pick<Deps, 'dataSource' | 'config' | 'tank
       const tank = await loadTank(tx, params.clubId, params.tankId);
       authorize(req, 'delete', 'WaterTest', ownedBy(tank));
       requireActive(tank);
-      return deleteWaterTest(tx, deps, tank, await loadTest(tx, tank.id, params.testId), viewerOf(req).user.id);
+      return deleteWaterTest(
+        tx,
+        deps,
+        tank,
+        await loadTest(tx, tank.id, params.testId),
+        viewerOf(req).user.id,
+      );
     });
     await removePhotoFiles(uploadsDir, photoKeys);
     res.status(204).end();

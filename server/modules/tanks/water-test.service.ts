@@ -5,7 +5,11 @@ import type { Deps } from '@server/deps';
 import { PARAMETER_KEYS } from '@shared/care/parameters';
 import type { ReadingIssue } from '@shared/readings/issues';
 import { normalizeWaterTest, type NormalizedWaterTest } from '@shared/readings/normalize-water-test';
-import type { createWaterTestSchema, updateWaterTestSchema, WaterTestEntries } from '@shared/schemas/water-test.schema';
+import type {
+  createWaterTestSchema,
+  updateWaterTestSchema,
+  WaterTestEntries,
+} from '@shared/schemas/water-test.schema';
 import { errors } from '../../lib/app-error';
 import { audit } from '../audit';
 import { storageKeysOf } from '../photos';
@@ -21,7 +25,12 @@ export interface SavedWaterTest {
 
 /** Every stored column of a normalized test; parameters it lacks become NULL (an edit can remove one). */
 export function columnsOf(n: NormalizedWaterTest): Partial<WaterTest> {
-  const columns: Partial<WaterTest> = { takenAt: new Date(n.takenAt), entries: n.entries, derived: n.derived, freeAmmoniaMgL: n.freeAmmonia };
+  const columns: Partial<WaterTest> = {
+    takenAt: new Date(n.takenAt),
+    entries: n.entries,
+    derived: n.derived,
+    freeAmmoniaMgL: n.freeAmmonia,
+  };
   for (const key of PARAMETER_KEYS) columns[VALUE_COLUMNS[key].property] = n.values[key] ?? null;
   return columns;
 }
@@ -30,9 +39,19 @@ function refuseErrors(n: NormalizedWaterTest): void {
   if (n.errors.length) throw errors.badRequest('Some readings need attention.', n.errors);
 }
 
-async function normalizeFor(tx: EntityManager, tank: Tank, id: string, takenAt: string, entries: WaterTestEntries, now: Date): Promise<NormalizedWaterTest> {
+async function normalizeFor(
+  tx: EntityManager,
+  tank: Tank,
+  id: string,
+  takenAt: string,
+  entries: WaterTestEntries,
+  now: Date,
+): Promise<NormalizedWaterTest> {
   const lastKnown = await lastKnownBefore(tx, tank.id, { takenAt, id });
-  const normalized = normalizeWaterTest({ takenAt, entries }, { ...(await chemistryOf(tx, tank)), now: now.toISOString(), testId: id, lastKnown });
+  const normalized = normalizeWaterTest(
+    { takenAt, entries },
+    { ...(await chemistryOf(tx, tank)), now: now.toISOString(), testId: id, lastKnown },
+  );
   refuseErrors(normalized);
   return normalized;
 }
@@ -61,9 +80,22 @@ export async function insertWaterTests(
   p: { origin: WaterTest['origin']; actorId: string },
 ): Promise<string[]> {
   if (tests.length === 0) return [];
-  const rows = tests.map((t) => ({ id: t.id ?? randomUUID(), tankId: tank.id, ...columnsOf(t.normalized), note: t.note, origin: p.origin, createdById: p.actorId }));
+  const rows = tests.map((t) => ({
+    id: t.id ?? randomUUID(),
+    tankId: tank.id,
+    ...columnsOf(t.normalized),
+    note: t.note,
+    origin: p.origin,
+    createdById: p.actorId,
+  }));
   for (let i = 0; i < rows.length; i += BATCH_ROWS) {
-    await tx.createQueryBuilder().insert().into(WaterTest).values(rows.slice(i, i + BATCH_ROWS)).updateEntity(false).execute();
+    await tx
+      .createQueryBuilder()
+      .insert()
+      .into(WaterTest)
+      .values(rows.slice(i, i + BATCH_ROWS))
+      .updateEntity(false)
+      .execute();
   }
   await recomputeDerivedFrom(tx, tank, new Date(Math.min(...rows.map((r) => r.takenAt!.getTime()))));
   await deps.tankChanges.publish(tx, tank.id, 'water-tests');
@@ -100,7 +132,9 @@ export async function updateWaterTest(
     else if (entry !== undefined) entries[key] = entry;
   }
   if (Object.keys(entries).length === 0) {
-    throw errors.badRequest('A water test needs at least one reading.', [{ path: 'entries', message: 'Keep at least one reading, or delete the test.' }]);
+    throw errors.badRequest('A water test needs at least one reading.', [
+      { path: 'entries', message: 'Keep at least one reading, or delete the test.' },
+    ]);
   }
   const takenAt = patch.takenAt ?? test.takenAt.toISOString();
   const normalized = await normalizeFor(tx, tank, test.id, takenAt, entries as WaterTestEntries, now);
@@ -113,10 +147,23 @@ export async function updateWaterTest(
 }
 
 /** Deletes for good (photos included), audited; returns the photo files to remove once committed. */
-export async function deleteWaterTest(tx: EntityManager, deps: Changes, tank: Tank, test: WaterTest, actorId: string): Promise<string[]> {
+export async function deleteWaterTest(
+  tx: EntityManager,
+  deps: Changes,
+  tank: Tank,
+  test: WaterTest,
+  actorId: string,
+): Promise<string[]> {
   const keys = await storageKeysOf(tx, { waterTestIds: [test.id] });
   await tx.delete(WaterTest, { id: test.id });
-  await audit(tx, { actorId, clubId: tank.clubId, action: 'water-test.deleted', targetType: 'WaterTest', targetId: test.id, details: { tankId: tank.id, takenAt: test.takenAt.toISOString() } });
+  await audit(tx, {
+    actorId,
+    clubId: tank.clubId,
+    action: 'water-test.deleted',
+    targetType: 'WaterTest',
+    targetId: test.id,
+    details: { tankId: tank.id, takenAt: test.takenAt.toISOString() },
+  });
   await recomputeDerivedFrom(tx, tank, test.takenAt);
   await deps.tankChanges.publish(tx, tank.id, 'water-tests');
   return keys;

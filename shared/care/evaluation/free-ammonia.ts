@@ -65,14 +65,23 @@ export interface FreeAmmoniaResult {
 
 export type FreeAmmoniaOutcome = { ok: true; result: FreeAmmoniaResult } | { ok: false; why: string };
 
-function fromTestOrLastKnown(parameter: FreeAmmoniaInput, reading: WaterTestInput, lastKnown: LastKnown): ResolvedInput | null {
+function fromTestOrLastKnown(
+  parameter: FreeAmmoniaInput,
+  reading: WaterTestInput,
+  lastKnown: LastKnown,
+): ResolvedInput | null {
   const own = reading.values[parameter];
   if (own !== undefined) return { value: own, source: 'this-test' };
   const known = lastKnown[parameter];
   return known ? { value: known.value, source: 'last-known', detail: isoDate(known.takenAt) } : null;
 }
 
-function resolveSalinity(reading: WaterTestInput, lastKnown: LastKnown, systemType: SystemType, profile: CareProfile): ResolvedInput {
+function resolveSalinity(
+  reading: WaterTestInput,
+  lastKnown: LastKnown,
+  systemType: SystemType,
+  profile: CareProfile,
+): ResolvedInput {
   if (!isSaltwaterSystem(systemType)) return { value: 0, source: 'assumed', detail: 'fresh water' };
   const found = fromTestOrLastKnown('salinity', reading, lastKnown);
   if (found) return found;

@@ -28,13 +28,19 @@ describe('authorization matrix', () => {
       for (const persona of PERSONAS) {
         await resetDatabase(t.dataSource);
         const world = await buildWorld(t.deps);
-        const client = persona === 'anonymous' ? new Client(t.app) : await signedIn(t.app, world.people[persona].user.email);
+        const client =
+          persona === 'anonymous'
+            ? new Client(t.app)
+            : await signedIn(t.app, world.people[persona].user.email);
         const { path, body, files } = row.request(world);
         const method = row.route.split(' ')[0]!.toLowerCase() as 'get' | 'post' | 'put' | 'patch' | 'delete';
-        const res = files ? await client.upload(`/api${path}`, files) : await client.send(method, `/api${path}`, body);
+        const res = files
+          ? await client.upload(`/api${path}`, files)
+          : await client.send(method, `/api${path}`, body);
         outcome[persona] = res.status;
         // Another club's request never succeeds on this club's objects.
-        if (persona === 'outsider' && path.includes(world.club.id)) expect(res.status).toBeGreaterThanOrEqual(400);
+        if (persona === 'outsider' && path.includes(world.club.id))
+          expect(res.status).toBeGreaterThanOrEqual(400);
       }
       expect(outcome).toEqual(row.expect);
     });

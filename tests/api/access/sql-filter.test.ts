@@ -29,7 +29,10 @@ describe('rules translated to SQL', () => {
     await makeMember(t.dataSource, b, 'Stranger 2');
     const { ability } = (await loadViewer(t.dataSource.manager, me.user.id))!;
     const qb = t.dataSource.getRepository(Membership).createQueryBuilder('m');
-    const rows = await whereAllowed(qb, ability, 'read', 'Membership', { clubId: 'm.club_id', userId: 'm.user_id' }).getMany();
+    const rows = await whereAllowed(qb, ability, 'read', 'Membership', {
+      clubId: 'm.club_id',
+      userId: 'm.user_id',
+    }).getMany();
     expect(rows).toHaveLength(2);
     expect(new Set(rows.map((r) => r.clubId))).toEqual(new Set([a.id]));
   });
@@ -44,19 +47,36 @@ describe('rules translated to SQL', () => {
     const list = async (userId: string) => {
       const { ability } = (await loadViewer(t.dataSource.manager, userId))!;
       const qb = t.dataSource.getRepository(MentorAssignment).createQueryBuilder('x');
-      return whereAllowed(qb, ability, 'read', 'MentorAssignment', { clubId: 'x.club_id', mentorId: 'x.mentor_id', menteeId: 'x.mentee_id' }).getMany();
+      return whereAllowed(qb, ability, 'read', 'MentorAssignment', {
+        clubId: 'x.club_id',
+        mentorId: 'x.mentor_id',
+        menteeId: 'x.mentee_id',
+      }).getMany();
     };
     expect((await list(mentor.user.id)).map((r) => r.mentorId)).toEqual([mentor.user.id]);
     expect(await list(admin.user.id)).toHaveLength(2);
   });
 
-  it('when a member of club A lists tanks, then they never receive club B\'s rows, even with the route guard bypassed and no club filter', async () => {
+  it("when a member of club A lists tanks, then they never receive club B's rows, even with the route guard bypassed and no club filter", async () => {
     const a = await makeClub(t.dataSource, 'A');
     const b = await makeClub(t.dataSource, 'B');
     const me = await makeMember(t.dataSource, a, 'Me');
     const neighbour = await makeMember(t.dataSource, a, 'Neighbour');
     const tankIn = async (clubId: string, ownerId: string) =>
-      (await t.dataSource.transaction((tx) => createTank(tx, clubId, ownerId, createTankSchema.parse({ name: 'T', systemType: 'reef', volume: { source: 'entered', value: 100 } })))).id;
+      (
+        await t.dataSource.transaction((tx) =>
+          createTank(
+            tx,
+            clubId,
+            ownerId,
+            createTankSchema.parse({
+              name: 'T',
+              systemType: 'reef',
+              volume: { source: 'entered', value: 100 },
+            }),
+          ),
+        )
+      ).id;
     const mine = await tankIn(a.id, me.user.id);
     await tankIn(a.id, neighbour.user.id);
     await tankIn(b.id, (await makeMember(t.dataSource, b, 'Stranger')).user.id);
@@ -75,9 +95,19 @@ describe('rules translated to SQL', () => {
   });
 
   it('when the viewer has no rule for a subject, then the condition is FALSE (fail closed)', async () => {
-    const ability = defineAbilityFor({ userId: 'x', memberships: [], mentorships: [], now: new Date().toISOString() });
+    const ability = defineAbilityFor({
+      userId: 'x',
+      memberships: [],
+      mentorships: [],
+      now: new Date().toISOString(),
+    });
     await makeMember(t.dataSource, await makeClub(t.dataSource, 'A'), 'Someone');
     const qb = t.dataSource.getRepository(Membership).createQueryBuilder('m');
-    expect(await whereAllowed(qb, ability, 'read', 'Membership', { clubId: 'm.club_id', userId: 'm.user_id' }).getMany()).toEqual([]);
+    expect(
+      await whereAllowed(qb, ability, 'read', 'Membership', {
+        clubId: 'm.club_id',
+        userId: 'm.user_id',
+      }).getMany(),
+    ).toEqual([]);
   });
 });

@@ -9,12 +9,28 @@ import { makeMember } from '@tests/helpers/factories';
 export async function mentorshipWorld(ds: DataSource, club: Club, p: { member: User; mentor: User }) {
   const seeker = await makeMember(ds, club, 'Sam Seeker');
   const mentorRequest = await ds.getRepository(MentorRequest).save({
-    clubId: club.id, requesterId: seeker.user.id, preferredMentorId: p.mentor.id, note: 'New to reef tanks', state: 'open',
-    declineReason: null, decidedById: null, decidedAt: null, assignmentId: null,
+    clubId: club.id,
+    requesterId: seeker.user.id,
+    preferredMentorId: p.mentor.id,
+    note: 'New to reef tanks',
+    state: 'open',
+    declineReason: null,
+    decidedById: null,
+    decidedAt: null,
+    assignmentId: null,
   });
   const notification = await ds.getRepository(Notification).save({
-    userId: p.member.id, clubId: club.id, kind: 'assignment', title: 'Milo Mentor is now your mentor', body: '', link: '/',
-    subjectType: null, subjectId: null, readAt: null, emailedAt: null, digestId: null,
+    userId: p.member.id,
+    clubId: club.id,
+    kind: 'assignment',
+    title: 'Milo Mentor is now your mentor',
+    body: '',
+    link: '/',
+    subjectType: null,
+    subjectId: null,
+    readAt: null,
+    emailedAt: null,
+    digestId: null,
   });
   return { seeker, mentorRequest, notification };
 }

@@ -8,7 +8,15 @@ import { questionWorld } from './world-questions';
 import { DAY_MS } from '@shared/care/time';
 import { meetupWorld } from './world-meetups';
 
-export const PERSONAS = ['anonymous', 'outsider', 'member', 'mentor', 'otherMentor', 'admin', 'suspended'] as const;
+export const PERSONAS = [
+  'anonymous',
+  'outsider',
+  'member',
+  'mentor',
+  'otherMentor',
+  'admin',
+  'suspended',
+] as const;
 export type Persona = (typeof PERSONAS)[number];
 
 /**
@@ -30,22 +38,64 @@ export async function buildWorld(deps: Deps) {
   const assignment = await assignMentor(ds, club, mentor.user, member.user);
   const spareAssignment = await assignMentor(ds, club, otherMentor.user, spare.user);
   const invite = await ds.getRepository(Invite).save({
-    clubId: club.id, email: 'pending@test.example', role: 'member', tokenHash: 'f'.repeat(64), invitedById: admin.user.id,
-    expiresAt: new Date(Date.now() + DAY_MS), lastSentAt: new Date(), acceptedAt: null, revokedAt: null,
+    clubId: club.id,
+    email: 'pending@test.example',
+    role: 'member',
+    tokenHash: 'f'.repeat(64),
+    invitedById: admin.user.id,
+    expiresAt: new Date(Date.now() + DAY_MS),
+    lastSentAt: new Date(),
+    acceptedAt: null,
+    revokedAt: null,
   });
-  const careProfile = await ds.transaction((tx) => copyProfile(tx, { clubId: club.id, basedOn: 'seahorse-large', name: 'Matrix seahorses', actorId: admin.user.id }));
+  const careProfile = await ds.transaction((tx) =>
+    copyProfile(tx, {
+      clubId: club.id,
+      basedOn: 'seahorse-large',
+      name: 'Matrix seahorses',
+      actorId: admin.user.id,
+    }),
+  );
   // The mentee's tank (read by their mentor and admins) and spare's (read by otherMentor, spare's mentor).
   const tank = await tankWithHistory(deps, club.id, member.user.id, 'Mina reef');
   const spareTank = await tankWithHistory(deps, club.id, spare.user.id, 'Spare reef');
   const mentorship = await mentorshipWorld(ds, club, { member: member.user, mentor: mentor.user });
-  const questions = await questionWorld(deps, { member: member.user, tank: tank.tank, waterTest: tank.waterTest });
-  const meetups = await meetupWorld(deps, { clubId: club.id, admin: admin.user, mentor: mentor.user, member: member.user, tank: tank.tank });
+  const questions = await questionWorld(deps, {
+    member: member.user,
+    tank: tank.tank,
+    waterTest: tank.waterTest,
+  });
+  const meetups = await meetupWorld(deps, {
+    clubId: club.id,
+    admin: admin.user,
+    mentor: mentor.user,
+    member: member.user,
+    tank: tank.tank,
+  });
   // Animals went in without a sign-off, so the member's tank has at least that concern open.
-  const concerns: { id: string }[] = await ds.query(`SELECT id FROM concern WHERE tank_id = $1 AND status <> 'resolved' ORDER BY raised_at LIMIT 1`, [tank.tank.id]);
+  const concerns: { id: string }[] = await ds.query(
+    `SELECT id FROM concern WHERE tank_id = $1 AND status <> 'resolved' ORDER BY raised_at LIMIT 1`,
+    [tank.tank.id],
+  );
   const concernId = concerns[0]!.id;
   return {
-    club, elsewhere, invite, assignment, spareAssignment, spare, tank, spareTank, careProfile, mentorship, concernId, questions, meetups,
-    people: { outsider, member, mentor, otherMentor, admin, suspended } as Record<Exclude<Persona, 'anonymous'>, { user: { email: string; id: string }; membership: { id: string } }>,
+    club,
+    elsewhere,
+    invite,
+    assignment,
+    spareAssignment,
+    spare,
+    tank,
+    spareTank,
+    careProfile,
+    mentorship,
+    concernId,
+    questions,
+    meetups,
+    people: { outsider, member, mentor, otherMentor, admin, suspended } as Record<
+      Exclude<Persona, 'anonymous'>,
+      { user: { email: string; id: string }; membership: { id: string } }
+    >,
   };
 }
 export type World = Awaited<ReturnType<typeof buildWorld>>;

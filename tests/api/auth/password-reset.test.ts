@@ -32,7 +32,9 @@ describe('password reset by e-mail', () => {
     expect((await phone.get('/api/me')).status).toBe(200);
 
     await new Client(t.app).post('/api/password-resets', { email });
-    const token = linkIn(await waitForMail(t.dataSource, email), '/reset-password').searchParams.get('token')!;
+    const token = linkIn(await waitForMail(t.dataSource, email), '/reset-password').searchParams.get(
+      'token',
+    )!;
     const resetter = new Client(t.app);
     const done = await resetter.post('/api/password-resets/confirm', { token, password: 'a brand new tide' });
     expect(done.status).toBe(200);
@@ -42,15 +44,28 @@ describe('password reset by e-mail', () => {
     expect((await resetter.get('/api/me')).status).toBe(200);
     expect((await new Client(t.app).signIn(email, 'a brand new tide')).status).toBe(200);
 
-    const again = await new Client(t.app).post('/api/password-resets/confirm', { token, password: 'another new tide' });
+    const again = await new Client(t.app).post('/api/password-resets/confirm', {
+      token,
+      password: 'another new tide',
+    });
     expect(again.status).toBe(410);
   });
 
   it('when the reset link is older than 30 minutes, then it is refused', async () => {
     await new Client(t.app).post('/api/password-resets', { email });
-    const token = linkIn(await waitForMail(t.dataSource, email), '/reset-password').searchParams.get('token')!;
-    await t.dataSource.getRepository(PasswordReset).createQueryBuilder().update().set({ expiresAt: new Date(Date.now() - 1) }).execute();
-    const res = await new Client(t.app).post('/api/password-resets/confirm', { token, password: 'a brand new tide' });
+    const token = linkIn(await waitForMail(t.dataSource, email), '/reset-password').searchParams.get(
+      'token',
+    )!;
+    await t.dataSource
+      .getRepository(PasswordReset)
+      .createQueryBuilder()
+      .update()
+      .set({ expiresAt: new Date(Date.now() - 1) })
+      .execute();
+    const res = await new Client(t.app).post('/api/password-resets/confirm', {
+      token,
+      password: 'a brand new tide',
+    });
     expect(res.status).toBe(410);
     expect(res.body.error.message).toMatch(/expired/i);
   });

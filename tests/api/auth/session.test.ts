@@ -89,7 +89,12 @@ describe('sessions and sign-in', () => {
     const request = (await import('supertest')).default;
     let last = 0;
     for (let i = 0; i < 11; i++) {
-      const res = await request(t.app).post('/api/session').set('Cookie', c.cookies).set('X-CSRF-Token', token).set('X-Forwarded-For', `203.0.113.${i}`).send({ email, password: `nope-${i}` });
+      const res = await request(t.app)
+        .post('/api/session')
+        .set('Cookie', c.cookies)
+        .set('X-CSRF-Token', token)
+        .set('X-Forwarded-For', `203.0.113.${i}`)
+        .send({ email, password: `nope-${i}` });
       last = res.status;
     }
     expect(last).toBe(429);
@@ -106,7 +111,10 @@ describe('sessions and sign-in', () => {
   });
 
   it('when the password is stored, then it is an argon2id hash with m>=19456,t>=2,p=1 and the plain text is nowhere (ASVS 11.4.2)', async () => {
-    const rows: { password_hash: string }[] = await t.dataSource.query(`SELECT password_hash FROM app_user WHERE email = $1`, [email]);
+    const rows: { password_hash: string }[] = await t.dataSource.query(
+      `SELECT password_hash FROM app_user WHERE email = $1`,
+      [email],
+    );
     const hash = rows[0]!.password_hash;
     expect(hash).toMatch(/^\$argon2id\$v=19\$m=(\d+),t=(\d+),p=1\$/);
     const [, m, tCost] = hash.match(/m=(\d+),t=(\d+)/)!;

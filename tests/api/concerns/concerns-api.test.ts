@@ -5,7 +5,13 @@ import { signedIn, type Client } from '@tests/helpers/http';
 import { waitForMail } from '@tests/helpers/mail';
 import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
-const CALM = { temperature: { value: 24, unit: '°C' }, salinity: { value: 33, unit: 'PSU' }, pH: { value: 8.1 }, ammonia: { value: 0, unit: 'mg/L NH3' }, nitrate: { value: 2, unit: 'mg/L NO3' } };
+const CALM = {
+  temperature: { value: 24, unit: '°C' },
+  salinity: { value: 33, unit: 'PSU' },
+  pH: { value: 8.1 },
+  ammonia: { value: 0, unit: 'mg/L NH3' },
+  nitrate: { value: 2, unit: 'mg/L NO3' },
+};
 
 describe('concerns through the API', () => {
   let t: TestApp;
@@ -28,12 +34,20 @@ describe('concerns through the API', () => {
     await assignMentor(t.dataSource, club, m.user, k.user);
     keeper = await signedIn(t.app, k.user.email);
     mentor = await signedIn(t.app, m.user.email);
-    const tank = await keeper.post(`/api/clubs/${clubId}/tanks`, { name: 'Seahorse tank', systemType: 'seahorse', phase: 'established', volume: { source: 'entered', value: 200 } });
+    const tank = await keeper.post(`/api/clubs/${clubId}/tanks`, {
+      name: 'Seahorse tank',
+      systemType: 'seahorse',
+      phase: 'established',
+      volume: { source: 'entered', value: 200 },
+    });
     tankId = tank.body.tank.id;
   });
 
   const save = (nitrite: number) =>
-    keeper.post(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, { takenAt: new Date().toISOString(), entries: { ...CALM, nitrite: { value: nitrite, unit: 'mg/L NO2' } } });
+    keeper.post(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, {
+      takenAt: new Date().toISOString(),
+      entries: { ...CALM, nitrite: { value: nitrite, unit: 'mg/L NO2' } },
+    });
 
   it('when a keeper saves nitrite 1.0 on a seahorse tank, then an urgent concern is on the tank and the mentor gets an e-mail at once', async () => {
     expect((await save(1.0)).status).toBe(201);
@@ -50,8 +64,20 @@ describe('concerns through the API', () => {
     await save(1.0);
     const live = (await mentor.get(`/api/clubs/${clubId}/tanks/${tankId}/concerns`)).body.concerns;
     const nitrite = live.find((c: { parameter: string }) => c.parameter === 'nitrite');
-    expect((await mentor.post(`/api/clubs/${clubId}/concerns/${nitrite.id}/acknowledge`, { note: 'Do a 25 % change tonight.' })).body.concern.status).toBe('acknowledged');
-    expect((await keeper.post(`/api/clubs/${clubId}/concerns/${nitrite.id}/resolve`, { note: 'Changed 50 L, nitrite now 0.' })).status).toBe(200);
+    expect(
+      (
+        await mentor.post(`/api/clubs/${clubId}/concerns/${nitrite.id}/acknowledge`, {
+          note: 'Do a 25 % change tonight.',
+        })
+      ).body.concern.status,
+    ).toBe('acknowledged');
+    expect(
+      (
+        await keeper.post(`/api/clubs/${clubId}/concerns/${nitrite.id}/resolve`, {
+          note: 'Changed 50 L, nitrite now 0.',
+        })
+      ).status,
+    ).toBe(200);
     const after = (await keeper.get(`/api/clubs/${clubId}/tanks/${tankId}/concerns`)).body.concerns;
     expect(after.find((c: { id: string }) => c.id === nitrite.id)).toBeUndefined();
     const all = (await keeper.get(`/api/clubs/${clubId}/tanks/${tankId}/concerns?status=all`)).body.concerns;
@@ -65,15 +91,23 @@ describe('concerns through the API', () => {
   it('when the same test is edited twice, then there is still one concern for that cause', async () => {
     const saved = await save(1.0);
     const testId = saved.body.waterTest.id;
-    await keeper.patch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests/${testId}`, { entries: { nitrite: { value: 0.8, unit: 'mg/L NO2' } } });
-    await keeper.patch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests/${testId}`, { entries: { nitrite: { value: 0.9, unit: 'mg/L NO2' } } });
+    await keeper.patch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests/${testId}`, {
+      entries: { nitrite: { value: 0.8, unit: 'mg/L NO2' } },
+    });
+    await keeper.patch(`/api/clubs/${clubId}/tanks/${tankId}/water-tests/${testId}`, {
+      entries: { nitrite: { value: 0.9, unit: 'mg/L NO2' } },
+    });
     const all = (await keeper.get(`/api/clubs/${clubId}/tanks/${tankId}/concerns?status=all`)).body.concerns;
     expect(all.filter((c: { rule: string; parameter: string }) => c.parameter === 'nitrite')).toHaveLength(1);
   });
 
   it('when animals go in before a mentor signs off, then the tank is flagged; a keeper cannot sign it off themselves', async () => {
     await save(0);
-    await keeper.post(`/api/clubs/${clubId}/tanks/${tankId}/livestock`, { speciesCommonName: 'Invented pipefish', count: 1, addedOn: new Date().toISOString().slice(0, 10) });
+    await keeper.post(`/api/clubs/${clubId}/tanks/${tankId}/livestock`, {
+      speciesCommonName: 'Invented pipefish',
+      count: 1,
+      addedOn: new Date().toISOString().slice(0, 10),
+    });
     const care = (await keeper.get(`/api/clubs/${clubId}/tanks/${tankId}/care`)).body;
     expect(care.concerns.map((c: { rule: string }) => c.rule)).toContain('stocking.without-sign-off');
     expect(care.readiness.ready).toBe(false);
@@ -96,17 +130,39 @@ describe('a profile edit re-judges the tanks that follow it', () => {
     await assignMentor(t.dataSource, club, m.user, k.user);
     const keeper = await signedIn(t.app, k.user.email);
     const mentor = await signedIn(t.app, m.user.email);
-    const copy = (await mentor.post(`/api/clubs/${club.id}/care-profiles`, { basedOn: 'marine-fish-only', name: 'Strict fish room' })).body;
-    const tank = (await keeper.post(`/api/clubs/${club.id}/tanks`, { name: 'Fish tank', systemType: 'marine-fish-only', phase: 'established', careProfileKey: copy.key, volume: { source: 'entered', value: 300 } })).body.tank;
-    await keeper.post(`/api/clubs/${club.id}/tanks/${tank.id}/water-tests`, { takenAt: new Date().toISOString(), entries: { ...CALM, nitrite: { value: 0, unit: 'mg/L NO2' }, nitrate: { value: 15, unit: 'mg/L NO3' } } });
+    const copy = (
+      await mentor.post(`/api/clubs/${club.id}/care-profiles`, {
+        basedOn: 'marine-fish-only',
+        name: 'Strict fish room',
+      })
+    ).body;
+    const tank = (
+      await keeper.post(`/api/clubs/${club.id}/tanks`, {
+        name: 'Fish tank',
+        systemType: 'marine-fish-only',
+        phase: 'established',
+        careProfileKey: copy.key,
+        volume: { source: 'entered', value: 300 },
+      })
+    ).body.tank;
+    await keeper.post(`/api/clubs/${club.id}/tanks/${tank.id}/water-tests`, {
+      takenAt: new Date().toISOString(),
+      entries: { ...CALM, nitrite: { value: 0, unit: 'mg/L NO2' }, nitrate: { value: 15, unit: 'mg/L NO3' } },
+    });
     const before = (await keeper.get(`/api/clubs/${club.id}/tanks/${tank.id}/care`)).body.concerns;
     expect(before.find((c: { parameter: string }) => c.parameter === 'nitrate')).toBeUndefined();
 
     const def = (await mentor.get(`/api/clubs/${club.id}/care-profiles/${copy.key}`)).body.profile;
     const nitrate = { ...def.ranges.nitrate, ideal: [0, 5], caution: [0, 10], target: undefined };
-    const put = await mentor.put(`/api/clubs/${club.id}/care-profiles/${copy.id}`, { definition: { ...def, ranges: { ...def.ranges, nitrate } }, baseVersion: 1, note: 'We keep sensitive fish.' });
+    const put = await mentor.put(`/api/clubs/${club.id}/care-profiles/${copy.id}`, {
+      definition: { ...def, ranges: { ...def.ranges, nitrate } },
+      baseVersion: 1,
+      note: 'We keep sensitive fish.',
+    });
     expect(put.status).toBe(200);
     const after = (await keeper.get(`/api/clubs/${club.id}/tanks/${tank.id}/care`)).body.concerns;
-    expect(after.find((c: { parameter: string }) => c.parameter === 'nitrate')).toMatchObject({ severity: 'urgent' });
+    expect(after.find((c: { parameter: string }) => c.parameter === 'nitrate')).toMatchObject({
+      severity: 'urgent',
+    });
   });
 });

@@ -11,7 +11,17 @@ import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
 const HOUR = 3_600_000;
 /** Everything a large-seahorse tank wants, so only the parameter under test raises a concern. */
-const CALM = { temperature: 24, salinity: 33, pH: 8.1, ammonia: 0, nitrite: 0, nitrate: 2, alkalinity: 8, calcium: 420, magnesium: 1300 };
+const CALM = {
+  temperature: 24,
+  salinity: 33,
+  pH: 8.1,
+  ammonia: 0,
+  nitrite: 0,
+  nitrate: 2,
+  alkalinity: 8,
+  calcium: 420,
+  magnesium: 1300,
+};
 
 describe('stored concerns follow the readings', () => {
   let t: TestApp;
@@ -24,10 +34,17 @@ describe('stored concerns follow the readings', () => {
     await resetDatabase(t.dataSource);
     const club = await makeClub(t.dataSource);
     const owner = await makeMember(t.dataSource, club, 'Hal Hippocampus');
-    tankId = await insertTank(t.dataSource, { clubId: club.id, ownerId: owner.user.id, systemType: 'seahorse', phase: 'established', volumeL: 200 });
+    tankId = await insertTank(t.dataSource, {
+      clubId: club.id,
+      ownerId: owner.user.id,
+      systemType: 'seahorse',
+      phase: 'established',
+      volumeL: 200,
+    });
   });
 
-  const live = () => t.dataSource.getRepository(ConcernRow).find({ where: { tankId }, order: { raisedAt: 'ASC' } });
+  const live = () =>
+    t.dataSource.getRepository(ConcernRow).find({ where: { tankId }, order: { raisedAt: 'ASC' } });
 
   it('when nitrite reads 1.0 on an established seahorse tank, then one urgent concern is stored and re-evaluating does not duplicate it', async () => {
     // Trade fact (common practice, no source): an established tank should read zero nitrite; seahorses tolerate none.
@@ -69,7 +86,13 @@ describe('stored concerns follow the readings', () => {
     expect(nitrate).toBeDefined();
     const range = SEAHORSE_LARGE_PROFILE.ranges.nitrate!;
     const target = range.target ?? range.ideal[1];
-    const plan = planWaterChanges({ current: 30, target, source: 0, volumeL: 200, maxFractionPerChange: MAX_WATER_CHANGE_FRACTION });
+    const plan = planWaterChanges({
+      current: 30,
+      target,
+      source: 0,
+      volumeL: 200,
+      maxFractionPerChange: MAX_WATER_CHANGE_FRACTION,
+    });
     expect(nitrate.waterChanges).toEqual(plan);
     expect(nitrate.nextSteps.join(' ')).toContain(`${formatLitres(plan[0]!.litres)} L`);
   });

@@ -7,7 +7,17 @@ import { signedIn } from '@tests/helpers/http';
 import { insertTank, insertWaterTest } from '@tests/helpers/tank-rows';
 import { createTestApp, type TestApp } from '@tests/helpers/test-app';
 
-const CALM = { temperature: 24, salinity: 33, pH: 8.1, ammonia: 0, nitrite: 0, nitrate: 2, alkalinity: 8, calcium: 420, magnesium: 1300 };
+const CALM = {
+  temperature: 24,
+  salinity: 33,
+  pH: 8.1,
+  ammonia: 0,
+  nitrite: 0,
+  nitrate: 2,
+  alkalinity: 8,
+  calcium: 420,
+  magnesium: 1300,
+};
 
 describe('the mentor desk', () => {
   let t: TestApp;
@@ -30,7 +40,8 @@ describe('the mentor desk', () => {
     const stranger = await makeMember(t.dataSource, club, 'Dee Elsewhere');
     for (const mentee of [a, b, c]) await assignMentor(t.dataSource, club, mentor.user, mentee.user);
     emails = { mentor: mentor.user.email, admin: admin.user.email, member: a.user.email };
-    const tank = (ownerId: string, phase: 'cycling' | 'established', name: string) => insertTank(t.dataSource, { clubId, ownerId, systemType: 'seahorse', phase, name });
+    const tank = (ownerId: string, phase: 'cycling' | 'established', name: string) =>
+      insertTank(t.dataSource, { clubId, ownerId, systemType: 'seahorse', phase, name });
     tanks = {
       troubled: await tank(a.user.id, 'established', 'Troubled'),
       calm: await tank(b.user.id, 'established', 'Calm'),
@@ -38,7 +49,8 @@ describe('the mentor desk', () => {
       notMine: await tank(stranger.user.id, 'established', 'Not mine'),
     };
     const now = Date.now();
-    for (const id of Object.values(tanks)) await insertWaterTest(t.dataSource, id, new Date(now - 3_600_000), CALM);
+    for (const id of Object.values(tanks))
+      await insertWaterTest(t.dataSource, id, new Date(now - 3_600_000), CALM);
     await insertWaterTest(t.dataSource, tanks.troubled, new Date(now - 60_000), { ...CALM, nitrite: 1.0 });
     for (const id of Object.values(tanks)) await t.dataSource.transaction((tx) => reevaluateTank(tx, id));
   });
@@ -65,16 +77,33 @@ describe('the mentor desk', () => {
   });
 
   it('when a mentee asks about a test, then their row counts it as unanswered and the filter finds it', async () => {
-    const [test] = await t.dataSource.query(`SELECT id FROM water_test WHERE tank_id = $1 ORDER BY taken_at DESC LIMIT 1`, [tanks.calm]);
-    const ben = await signedIn(t.app, (await t.dataSource.query(`SELECT u.email FROM app_user u JOIN tank t ON t.owner_id = u.id WHERE t.id = $1`, [tanks.calm]))[0].email);
-    const asked = await ben.post(`/api/clubs/${clubId}/tanks/${tanks.calm}/questions`, { title: 'Is nitrate 2 fine?', body: 'For my seahorses?', waterTestId: test.id });
+    const [test] = await t.dataSource.query(
+      `SELECT id FROM water_test WHERE tank_id = $1 ORDER BY taken_at DESC LIMIT 1`,
+      [tanks.calm],
+    );
+    const ben = await signedIn(
+      t.app,
+      (
+        await t.dataSource.query(
+          `SELECT u.email FROM app_user u JOIN tank t ON t.owner_id = u.id WHERE t.id = $1`,
+          [tanks.calm],
+        )
+      )[0].email,
+    );
+    const asked = await ben.post(`/api/clubs/${clubId}/tanks/${tanks.calm}/questions`, {
+      title: 'Is nitrate 2 fine?',
+      body: 'For my seahorses?',
+      waterTestId: test.id,
+    });
     expect(asked.status).toBe(201);
-    const desk = (await (await signedIn(t.app, emails.mentor)).get(`/api/clubs/${clubId}/desk?unanswered=1`)).body as DeskView;
+    const desk = (await (await signedIn(t.app, emails.mentor)).get(`/api/clubs/${clubId}/desk?unanswered=1`))
+      .body as DeskView;
     expect(desk.rows.map((r) => [r.name, r.unansweredQuestions])).toEqual([['Calm', 1]]);
   });
 
   it('when an admin opens the desk, then every tank of the club is there; a member gets 403', async () => {
-    const desk = (await (await signedIn(t.app, emails.admin)).get(`/api/clubs/${clubId}/desk`)).body as DeskView;
+    const desk = (await (await signedIn(t.app, emails.admin)).get(`/api/clubs/${clubId}/desk`))
+      .body as DeskView;
     expect(desk.rows.map((r) => r.name).sort()).toEqual(['Calm', 'Cycling', 'Not mine', 'Troubled']);
     expect((await (await signedIn(t.app, emails.member)).get(`/api/clubs/${clubId}/desk`)).status).toBe(403);
   });

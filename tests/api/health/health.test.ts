@@ -22,7 +22,10 @@ describe('GET /api/health', () => {
   });
 
   it('when the body is not JSON, then it answers 400 without a stack trace', async () => {
-    const res = await request(t.app).post('/api/health').set('Content-Type', 'application/json').send('{"oops":');
+    const res = await request(t.app)
+      .post('/api/health')
+      .set('Content-Type', 'application/json')
+      .send('{"oops":');
     expect(res.status).toBe(400);
     expect(JSON.stringify(res.body)).not.toMatch(/at .*\.ts/);
   });

@@ -18,12 +18,24 @@ function parseEvents(ics: string) {
   const calendar = new ICAL.Component(ICAL.parse(ics));
   return calendar.getAllSubcomponents('vevent').map((v) => {
     const e = new ICAL.Event(v);
-    return { uid: e.uid, summary: e.summary, start: e.startDate.toJSDate(), end: e.endDate.toJSDate(), sequence: e.sequence, status: v.getFirstPropertyValue('status') as string | null };
+    return {
+      uid: e.uid,
+      summary: e.summary,
+      start: e.startDate.toJSDate(),
+      end: e.endDate.toJSDate(),
+      sequence: e.sequence,
+      status: v.getFirstPropertyValue('status') as string | null,
+    };
   });
 }
 
 const clubClock = (at: Date) =>
-  new Intl.DateTimeFormat('en-GB', { timeZone: CLUB_ZONE, hour: '2-digit', minute: '2-digit', hourCycle: 'h23' }).format(at);
+  new Intl.DateTimeFormat('en-GB', {
+    timeZone: CLUB_ZONE,
+    hour: '2-digit',
+    minute: '2-digit',
+    hourCycle: 'h23',
+  }).format(at);
 
 describe('meetup calendars and reminders across a change of the clocks', () => {
   let t: TestApp;
@@ -47,13 +59,22 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
     const ada = await signedIn(t.app, admin.user.email);
     member = await signedIn(t.app, m.user.email);
     // Planned in winter (GMT) for 19:00 both before and after the clocks go forward.
-    for (const [key, day] of [['before', before], ['after', after]] as const) {
-      const res = await ada.post(`/api/clubs/${club.id}/meetups`, talk({ title: `Spring talk ${key}`, startsAt: `${day}T19:00`, endsAt: `${day}T21:00` }));
+    for (const [key, day] of [
+      ['before', before],
+      ['after', after],
+    ] as const) {
+      const res = await ada.post(
+        `/api/clubs/${club.id}/meetups`,
+        talk({ title: `Spring talk ${key}`, startsAt: `${day}T19:00`, endsAt: `${day}T21:00` }),
+      );
       expect(res.status).toBe(201);
       ids[key] = res.body.meetup.id;
       starts[key] = new Date(res.body.meetup.startsAt);
       expect(res.body.meetup.local.startsAt).toBe(`${day}T19:00`);
-      expect((await member.put(`/api/clubs/${club.id}/meetups/${ids[key]}/rsvp`, { response: 'going' })).body.meetup.mine.status).toBe('going');
+      expect(
+        (await member.put(`/api/clubs/${club.id}/meetups/${ids[key]}/rsvp`, { response: 'going' })).body
+          .meetup.mine.status,
+      ).toBe('going');
     }
   });
   afterAll(() => t.close());
@@ -96,8 +117,12 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
   });
 
   it('when the earlier meetup’s reminder is due, then it says 19:00 (GMT); a reminder is not due 25 h before or after the start', async () => {
-    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 25 * HOUR))).toEqual({ sent: 0 });
-    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 1 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 25 * HOUR))).toEqual({
+      sent: 0,
+    });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({
+      sent: 1,
+    });
     expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() + HOUR))).toEqual({ sent: 0 });
     const mails = await settledMailsTo(t.dataSource, memberEmail, 2);
     const earlier = mails.find((m) => m.subject.endsWith('Spring talk before'))!;
@@ -106,16 +131,30 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
   });
 
   it('when a meetup is moved, then its new start is reminded of again and the .ics sequence goes up', async () => {
-    const admin = await signedIn(t.app, (await t.dataSource.query(`SELECT u.email FROM app_user u WHERE u.display_name = 'Ada Admin'`))[0].email);
-    const moved = await admin.patch(`/api/clubs/${clubId}/meetups/${ids.after}`, { startsAt: `${after}T19:30`, endsAt: `${after}T21:30` });
+    const admin = await signedIn(
+      t.app,
+      (await t.dataSource.query(`SELECT u.email FROM app_user u WHERE u.display_name = 'Ada Admin'`))[0]
+        .email,
+    );
+    const moved = await admin.patch(`/api/clubs/${clubId}/meetups/${ids.after}`, {
+      startsAt: `${after}T19:30`,
+      endsAt: `${after}T21:30`,
+    });
     expect(moved.status).toBe(200);
     expect(moved.body.meetup.when).toContain('19:30–21:30 (BST)');
     expect(await sendDueReminders(t.deps, new Date(starts.after.getTime() - 23 * HOUR))).toEqual({ sent: 1 });
     const ics = (await member.get(`/api/clubs/${clubId}/meetups/${ids.after}/calendar.ics`)).text;
     expect(parseEvents(ics)[0]!.sequence).toBe(1);
     // The change e-mail and the new reminder, on top of the two reminders before.
-    expect((await settledMailsTo(t.dataSource, memberEmail, 4)).map((m) => m.subject.replace('Tideline Keepers: ', ''))).toEqual([
-      'Reminder: Spring talk after', 'Reminder: Spring talk before', 'Changed: Spring talk after', 'Reminder: Spring talk after',
+    expect(
+      (await settledMailsTo(t.dataSource, memberEmail, 4)).map((m) =>
+        m.subject.replace('Tideline Keepers: ', ''),
+      ),
+    ).toEqual([
+      'Reminder: Spring talk after',
+      'Reminder: Spring talk before',
+      'Changed: Spring talk after',
+      'Reminder: Spring talk after',
     ]);
   });
 
@@ -146,15 +185,26 @@ describe('meetup calendars and reminders across a change of the clocks', () => {
   });
 
   it('when the meetup is cancelled, then the feed keeps it as CANCELLED so calendars drop it, and no reminder goes out', async () => {
-    const admin = await signedIn(t.app, (await t.dataSource.query(`SELECT u.email FROM app_user u WHERE u.display_name = 'Ada Admin'`))[0].email);
-    expect((await admin.post(`/api/clubs/${clubId}/meetups/${ids.before}/cancel`, { reason: 'The hall flooded.' })).status).toBe(200);
+    const admin = await signedIn(
+      t.app,
+      (await t.dataSource.query(`SELECT u.email FROM app_user u WHERE u.display_name = 'Ada Admin'`))[0]
+        .email,
+    );
+    expect(
+      (await admin.post(`/api/clubs/${clubId}/meetups/${ids.before}/cancel`, { reason: 'The hall flooded.' }))
+        .status,
+    ).toBe(200);
     const { url } = (await member.get('/api/me/calendar-feed')).body as { url: string };
-    const cancelled = parseEvents((await request(t.app).get(new URL(url).pathname)).text).find((e) => e.summary === 'Spring talk before')!;
+    const cancelled = parseEvents((await request(t.app).get(new URL(url).pathname)).text).find(
+      (e) => e.summary === 'Spring talk before',
+    )!;
     expect(cancelled.status).toBe('CANCELLED');
     expect(cancelled.sequence).toBe(1);
     const sentBefore = (await mailsTo(t.dataSource, memberEmail)).length;
     await t.dataSource.query(`DELETE FROM meetup_reminder`);
-    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({ sent: 0 });
+    expect(await sendDueReminders(t.deps, new Date(starts.before.getTime() - 20 * HOUR))).toEqual({
+      sent: 0,
+    });
     const mails = await settledMailsTo(t.dataSource, memberEmail, sentBefore + 1);
     expect(mails.at(-1)!.subject).toBe('Tideline Keepers: Cancelled: Spring talk before');
     expect(mails.at(-1)!.text).toContain('The hall flooded.');

@@ -1,7 +1,11 @@
 import { afterAll, beforeAll, beforeEach, describe, expect, it } from 'vitest';
 import type { Club } from '@server/modules/clubs/club.entity';
 import { runDigest } from '@server/modules/notifications/digest';
-import { DIGEST_CRON, DIGEST_QUEUE, startDigestScheduler } from '@server/modules/notifications/digest-scheduler';
+import {
+  DIGEST_CRON,
+  DIGEST_QUEUE,
+  startDigestScheduler,
+} from '@server/modules/notifications/digest-scheduler';
 import { NotificationDigest } from '@server/modules/notifications/notification-digest.entity';
 import { Notification } from '@server/modules/notifications/notification.entity';
 import type { NotifyInput } from '@server/modules/notifications';
@@ -56,17 +60,37 @@ describe('the daily digest, with the clock in the test’s hands', () => {
   }
 
   const send = (userIds: string[], input: Partial<NotifyInput> = {}) =>
-    t.dataSource.transaction((tx) => t.deps.notify(tx, { userIds, clubId: club.id, kind: 'question.asked', title: 'A question', link: '/desk', ...input }));
+    t.dataSource.transaction((tx) =>
+      t.deps.notify(tx, {
+        userIds,
+        clubId: club.id,
+        kind: 'question.asked',
+        title: 'A question',
+        link: '/desk',
+        ...input,
+      }),
+    );
 
   it('when two workers run the digest at the same moment, then each person gets exactly one e-mail listing their notifications', async () => {
-    await send([maya.user.id, milo.user.id], { title: 'Ben asked: is 40 ppm nitrate OK?', body: 'Tank: Ben’s 60 L community', link: '/tanks/b1' });
-    await send([maya.user.id], { kind: 'concern.caution', title: 'pH drifting down in Cleo’s reef', link: '/tanks/c1' });
+    await send([maya.user.id, milo.user.id], {
+      title: 'Ben asked: is 40 ppm nitrate OK?',
+      body: 'Tank: Ben’s 60 L community',
+      link: '/tanks/b1',
+    });
+    await send([maya.user.id], {
+      kind: 'concern.caution',
+      title: 'pH drifting down in Cleo’s reef',
+      link: '/tanks/c1',
+    });
 
     // Hold Maya's claim in an open transaction so both runs are certain to be inside her digest at the same time.
     const holder = t.dataSource.createQueryRunner();
     await holder.connect();
     await holder.startTransaction();
-    await holder.query(`INSERT INTO notification_digest (user_id, digest_date) VALUES ($1, $2)`, [maya.user.id, isoDate(day1)]);
+    await holder.query(`INSERT INTO notification_digest (user_id, digest_date) VALUES ($1, $2)`, [
+      maya.user.id,
+      isoDate(day1),
+    ]);
     const both = Promise.all([digest(day1), digest(day1)]);
     expect(await waitersOnClaims(2)).toBe(true);
     await holder.rollbackTransaction();
@@ -76,7 +100,12 @@ describe('the daily digest, with the clock in the test’s hands', () => {
     const sent = [...a!.sentTo, ...b!.sentTo].sort();
     expect(sent).toEqual([maya.user.id, milo.user.id].sort());
     // One run sent Maya's digest; the other found it claimed.
-    expect([a!, b!].map((r) => [r.sentTo.includes(maya.user.id), r.alreadyClaimed.includes(maya.user.id)]).sort()).toEqual([[false, true], [true, false]]);
+    expect(
+      [a!, b!].map((r) => [r.sentTo.includes(maya.user.id), r.alreadyClaimed.includes(maya.user.id)]).sort(),
+    ).toEqual([
+      [false, true],
+      [true, false],
+    ]);
 
     const mayaMails = await settledMailsTo(t.dataSource, maya.user.email, 1);
     const miloMails = await mailsTo(t.dataSource, milo.user.email);
@@ -95,8 +124,13 @@ describe('the daily digest, with the clock in the test’s hands', () => {
     expect(miloMails[0]!.subject).toContain(': 1 update');
     expect(miloMails[0]!.text).not.toContain('Cleo');
 
-    const claims = await t.dataSource.getRepository(NotificationDigest).find({ order: { notificationCount: 'ASC' } });
-    expect(claims.map((c) => [c.digestDate, c.notificationCount])).toEqual([[isoDate(day1), 1], [isoDate(day1), 2]]);
+    const claims = await t.dataSource
+      .getRepository(NotificationDigest)
+      .find({ order: { notificationCount: 'ASC' } });
+    expect(claims.map((c) => [c.digestDate, c.notificationCount])).toEqual([
+      [isoDate(day1), 1],
+      [isoDate(day1), 2],
+    ]);
   });
 
   it('when it runs again the same day, then nothing more is sent (even for new notifications); the next morning sends only the new ones', async () => {
@@ -119,13 +153,18 @@ describe('the daily digest, with the clock in the test’s hands', () => {
   });
 
   it('when it is not yet morning where the person lives, then they wait; their own 07:00 sends it, dated their day', async () => {
-    await t.dataSource.query(`UPDATE app_user SET time_zone = 'America/New_York' WHERE id = $1`, [maya.user.id]);
+    await t.dataSource.query(`UPDATE app_user SET time_zone = 'America/New_York' WHERE id = $1`, [
+      maya.user.id,
+    ]);
     await send([maya.user.id, milo.user.id]);
     // 07:05 UTC is the small hours in New York.
     expect((await digest(day1)).sentTo).toEqual([milo.user.id]);
     const inNewYorkMorning = new Date(day1.getTime() + 5 * HOUR);
     expect((await digest(inNewYorkMorning)).sentTo).toEqual([maya.user.id]);
-    expect((await t.dataSource.getRepository(NotificationDigest).findOneByOrFail({ userId: maya.user.id })).digestDate).toBe(isoDate(day1));
+    expect(
+      (await t.dataSource.getRepository(NotificationDigest).findOneByOrFail({ userId: maya.user.id }))
+        .digestDate,
+    ).toBe(isoDate(day1));
     // Before 07:00 and after the morning, nobody is sent anything.
     await send([milo.user.id], { title: 'late one' });
     const day2 = day1.getTime() + 24 * HOUR;
@@ -142,17 +181,30 @@ describe('the daily digest, with the clock in the test’s hands', () => {
     await send([maya.user.id], { kind: 'assignment', title: 'You are now mentoring Ben' });
     expect((await digest(day1)).sentTo).toEqual([maya.user.id]);
     const mails = await settledMailsTo(t.dataSource, maya.user.email, 2);
-    expect(mails.map((m) => m.subject)).toEqual(['Mangrove Circle: Urgent (sent at once)', `Your Shoalwise digest for ${isoDate(day1)}: 1 update`]);
+    expect(mails.map((m) => m.subject)).toEqual([
+      'Mangrove Circle: Urgent (sent at once)',
+      `Your Shoalwise digest for ${isoDate(day1)}: 1 update`,
+    ]);
     expect(mails[1]!.text).toContain('You are now mentoring Ben');
     expect(mails[1]!.text).not.toMatch(/Read in the app|A mention|Urgent/);
-    const pending = await t.dataSource.getRepository(Notification).findOneByOrFail({ title: 'A mention (off)' });
+    const pending = await t.dataSource
+      .getRepository(Notification)
+      .findOneByOrFail({ title: 'A mention (off)' });
     expect(pending.emailedAt).toBeNull();
   });
 
   it('when the scheduler starts, then an hourly digest schedule is stored in pg-boss', async () => {
-    const scheduler = await startDigestScheduler({ config: t.config, dataSource: t.dataSource, mailer: t.mail.mailer, logger: createLogger({ logLevel: 'silent' }) });
+    const scheduler = await startDigestScheduler({
+      config: t.config,
+      dataSource: t.dataSource,
+      mailer: t.mail.mailer,
+      logger: createLogger({ logLevel: 'silent' }),
+    });
     try {
-      const rows: { name: string; cron: string; timezone: string }[] = await t.dataSource.query(`SELECT name, cron, timezone FROM pgboss.schedule WHERE name = $1`, [DIGEST_QUEUE]);
+      const rows: { name: string; cron: string; timezone: string }[] = await t.dataSource.query(
+        `SELECT name, cron, timezone FROM pgboss.schedule WHERE name = $1`,
+        [DIGEST_QUEUE],
+      );
       expect(rows).toEqual([{ name: DIGEST_QUEUE, cron: DIGEST_CRON, timezone: 'UTC' }]);
     } finally {
       await scheduler.stop();

@@ -57,13 +57,22 @@ describe('notification e-mails and unsubscribing', () => {
     expect(mail!.headers['list-unsubscribe-post']).toBe('List-Unsubscribe=One-Click');
     const stored = await t.dataSource.getRepository(Notification).findOneByOrFail({ id: row!.id });
     expect(stored.emailedAt).not.toBeNull();
-    expect((await t.dataSource.getRepository(Notification).findOneByOrFail({ title: 'Ben asked a question' })).emailedAt).toBeNull();
+    expect(
+      (await t.dataSource.getRepository(Notification).findOneByOrFail({ title: 'Ben asked a question' }))
+        .emailedAt,
+    ).toBeNull();
   });
 
   it('when the notifying transaction rolls back, then its e-mail is never sent either', async () => {
     await t.dataSource
       .transaction(async (tx) => {
-        await t.deps.notify(tx, { userIds: [mentor.user.id], clubId: club.id, kind: 'concern.urgent', title: 'Rolled back', link: '/' });
+        await t.deps.notify(tx, {
+          userIds: [mentor.user.id],
+          clubId: club.id,
+          kind: 'concern.urgent',
+          title: 'Rolled back',
+          link: '/',
+        });
         throw new Error('the caller failed');
       })
       .catch(() => undefined);
@@ -82,7 +91,9 @@ describe('notification e-mails and unsubscribing', () => {
     expect(page.status).toBe(200);
     expect(page.type).toBe('text/html');
     expect(page.text).toContain('Urgent water concerns');
-    expect(page.text).toMatch(/<form method="post" action="\/api\/unsubscribe\?token=[^"]+"><button type="submit">Yes, stop them<\/button>/);
+    expect(page.text).toMatch(
+      /<form method="post" action="\/api\/unsubscribe\?token=[^"]+"><button type="submit">Yes, stop them<\/button>/,
+    );
     expect((await emailModesOf(t.dataSource.manager, mentor.user.id))['concern.urgent']).toBe('immediate');
 
     const action = page.text.match(/action="([^"]+)"/)![1]!.replaceAll('&amp;', '&');
@@ -96,13 +107,18 @@ describe('notification e-mails and unsubscribing', () => {
     await t.dataSource.query(`DELETE FROM captured_mail`);
     const [later] = await send({ title: 'Another urgent one' });
     expect(await settledMailsTo(t.dataSource, mentor.user.email, 0)).toEqual([]);
-    expect((await t.dataSource.getRepository(Notification).findOneByOrFail({ id: later!.id })).emailedAt).toBeNull();
+    expect(
+      (await t.dataSource.getRepository(Notification).findOneByOrFail({ id: later!.id })).emailedAt,
+    ).toBeNull();
   });
 
   it('when a mail client uses one-click unsubscribe (RFC 8058), then the POST alone turns it off', async () => {
     await send();
     const link = linkIn(await waitForMail(t.dataSource, mentor.user.email), '/api/unsubscribe');
-    const res = await request(t.app).post(`${link.pathname}${link.search}`).type('form').send('List-Unsubscribe=One-Click');
+    const res = await request(t.app)
+      .post(`${link.pathname}${link.search}`)
+      .type('form')
+      .send('List-Unsubscribe=One-Click');
     expect(res.status).toBe(200);
     expect((await emailModesOf(t.dataSource.manager, mentor.user.id))['concern.urgent']).toBe('off');
   });
@@ -110,25 +126,34 @@ describe('notification e-mails and unsubscribing', () => {
   it('when the "stop every e-mail" link is used, then every kind is off', async () => {
     await send();
     const mail = await waitForMail(t.dataSource, mentor.user.email);
-    const links = [...mail.text.matchAll(/https?:\/\/\S*\/api\/unsubscribe\?token=\S+/g)].map((m) => new URL(m[0]));
+    const links = [...mail.text.matchAll(/https?:\/\/\S*\/api\/unsubscribe\?token=\S+/g)].map(
+      (m) => new URL(m[0]),
+    );
     expect(links).toHaveLength(2);
     const all = links[1]!;
     expect((await request(t.app).post(`${all.pathname}${all.search}`)).status).toBe(200);
-    expect(new Set(Object.values(await emailModesOf(t.dataSource.manager, mentor.user.id)))).toEqual(new Set(['off']));
+    expect(new Set(Object.values(await emailModesOf(t.dataSource.manager, mentor.user.id)))).toEqual(
+      new Set(['off']),
+    );
   });
 
   it('when the token is tampered with, then 400 and nothing changes', async () => {
     const secret = t.config.sessionSecret;
     const good = signUnsubscribeToken(secret, { userId: mentor.user.id, scope: 'concern.urgent' });
     const [payload, signature] = good.split('.') as [string, string];
-    const someoneElse = Buffer.from(`${(await makeMember(t.dataSource, club, 'Victim')).user.id}:all`).toString('base64url');
+    const someoneElse = Buffer.from(
+      `${(await makeMember(t.dataSource, club, 'Victim')).user.id}:all`,
+    ).toString('base64url');
     const flipped = `${signature.slice(0, -2)}${signature.at(-2) === 'A' ? 'B' : 'A'}${signature.at(-1)}`;
     const tampered = [
       `${someoneElse}.${signature}`,
       `${payload}.${flipped}`,
       payload,
       `${payload}.${signature}.x`,
-      signUnsubscribeToken('another-secret-of-at-least-32-characters!', { userId: mentor.user.id, scope: 'all' }),
+      signUnsubscribeToken('another-secret-of-at-least-32-characters!', {
+        userId: mentor.user.id,
+        scope: 'all',
+      }),
       '',
     ];
     for (const token of tampered) {

@@ -47,7 +47,12 @@ describe('notifications over the socket', () => {
 
   async function socketOf(email: string): Promise<Socket> {
     const c = await signedIn(server.url, email);
-    const socket = connect(server.url, { transports: ['websocket'], extraHeaders: { Cookie: c.cookies.join('; '), Origin: new URL(server.url).origin }, reconnection: false, forceNew: true });
+    const socket = connect(server.url, {
+      transports: ['websocket'],
+      extraHeaders: { Cookie: c.cookies.join('; '), Origin: new URL(server.url).origin },
+      reconnection: false,
+      forceNew: true,
+    });
     sockets.push(socket);
     await new Promise<void>((resolve, reject) => {
       socket.once('connect', () => resolve());
@@ -61,11 +66,25 @@ describe('notifications over the socket', () => {
     const ottoGot = listen(await socketOf(otto.user.email));
     const sentAt = Date.now();
     const [row] = await server.dataSource.transaction((tx) =>
-      server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'Milo mentioned you', body: 'Look at this nitrate.', link: '/tanks/t1' }),
+      server.deps.notify(tx, {
+        userIds: [mina.user.id],
+        clubId: club.id,
+        kind: 'mention',
+        title: 'Milo mentioned you',
+        body: 'Look at this nitrate.',
+        link: '/tanks/t1',
+      }),
     );
     expect(await until(() => minaGot.length === 1, 1_000)).toBe(true);
     expect(Date.now() - sentAt).toBeLessThan(1_000);
-    expect(minaGot[0]).toMatchObject({ id: row!.id, kind: 'mention', title: 'Milo mentioned you', clubName: 'Socket Club', link: '/tanks/t1', readAt: null });
+    expect(minaGot[0]).toMatchObject({
+      id: row!.id,
+      kind: 'mention',
+      title: 'Milo mentioned you',
+      clubName: 'Socket Club',
+      link: '/tanks/t1',
+      readAt: null,
+    });
     // Give a stray event time to arrive before concluding there is none.
     await new Promise((r) => setTimeout(r, 400));
     expect(ottoGot).toEqual([]);
@@ -76,25 +95,55 @@ describe('notifications over the socket', () => {
     const minaGot = listen(await socketOf(mina.user.email));
     await server.dataSource
       .transaction(async (tx) => {
-        await server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'never happened', link: '/' });
+        await server.deps.notify(tx, {
+          userIds: [mina.user.id],
+          clubId: club.id,
+          kind: 'mention',
+          title: 'never happened',
+          link: '/',
+        });
         throw new Error('roll back');
       })
       .catch(() => undefined);
     // A savepoint rolled back inside a transaction that commits takes its notification with it.
     await server.dataSource.transaction(async (tx) => {
-      await tx.transaction((inner) => server.deps.notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a released savepoint', link: '/' }));
+      await tx.transaction((inner) =>
+        server.deps.notify(inner, {
+          userIds: [mina.user.id],
+          clubId: club.id,
+          kind: 'mention',
+          title: 'inside a released savepoint',
+          link: '/',
+        }),
+      );
       await tx
         .transaction(async (inner) => {
-          await server.deps.notify(inner, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'inside a rolled-back savepoint', link: '/' });
+          await server.deps.notify(inner, {
+            userIds: [mina.user.id],
+            clubId: club.id,
+            kind: 'mention',
+            title: 'inside a rolled-back savepoint',
+            link: '/',
+          });
           throw new Error('roll back the savepoint');
         })
         .catch(() => undefined);
-      await server.deps.notify(tx, { userIds: [mina.user.id], clubId: club.id, kind: 'mention', title: 'this one did', link: '/' });
+      await server.deps.notify(tx, {
+        userIds: [mina.user.id],
+        clubId: club.id,
+        kind: 'mention',
+        title: 'this one did',
+        link: '/',
+      });
     });
     expect(await until(() => minaGot.length >= 2, 1_000)).toBe(true);
     await new Promise((r) => setTimeout(r, 300));
     expect(minaGot.map((n) => n.title)).toEqual(['inside a released savepoint', 'this one did']);
-    expect((await server.dataSource.query(`SELECT title FROM notification ORDER BY created_at`)).map((r: { title: string }) => r.title)).toEqual(['inside a released savepoint', 'this one did']);
+    expect(
+      (await server.dataSource.query(`SELECT title FROM notification ORDER BY created_at`)).map(
+        (r: { title: string }) => r.title,
+      ),
+    ).toEqual(['inside a released savepoint', 'this one did']);
   });
 
   it('when a member asks for a mentor over HTTP, then the admin’s open socket hears about it', async () => {
@@ -104,7 +153,12 @@ describe('notifications over the socket', () => {
     const c = await signedIn(server.url, mina.user.email);
     expect((await c.post(`/api/clubs/${club.id}/mentor-requests`, { note: 'Please!' })).status).toBe(201);
     expect(await until(() => adminGot.length === 1, 1_000)).toBe(true);
-    expect(adminGot[0]).toMatchObject({ kind: 'mentor-request', title: 'Mina Member asks for a mentor', body: 'Please!', link: '/club' });
+    expect(adminGot[0]).toMatchObject({
+      kind: 'mentor-request',
+      title: 'Mina Member asks for a mentor',
+      body: 'Please!',
+      link: '/club',
+    });
     expect(minaGot).toEqual([]);
   });
 });

@@ -15,16 +15,51 @@ export async function questionPeople(t: TestApp) {
   const ada = await makeMember(t.dataSource, club, 'Ada Admin', 'admin');
   const olga = await makeMember(t.dataSource, other, 'Olga Outsider');
   await assignMentor(t.dataSource, club, milo.user, sky.user);
-  await assignMentor(t.dataSource, club, otto.user, (await makeMember(t.dataSource, club, 'Spare Member')).user);
-  const [asSky, asMilo, asOtto, asAda, asOlga] = await Promise.all([sky, milo, otto, ada, olga].map((p) => signedIn(t.app, p.user.email)));
-  const tankRes = await asSky!.post(`/api/clubs/${club.id}/tanks`, { name: 'Seahorse corner', systemType: 'seahorse', phase: 'established', volume: { source: 'entered', value: 200 } });
+  await assignMentor(
+    t.dataSource,
+    club,
+    otto.user,
+    (await makeMember(t.dataSource, club, 'Spare Member')).user,
+  );
+  const [asSky, asMilo, asOtto, asAda, asOlga] = await Promise.all(
+    [sky, milo, otto, ada, olga].map((p) => signedIn(t.app, p.user.email)),
+  );
+  const tankRes = await asSky!.post(`/api/clubs/${club.id}/tanks`, {
+    name: 'Seahorse corner',
+    systemType: 'seahorse',
+    phase: 'established',
+    volume: { source: 'entered', value: 200 },
+  });
   if (tankRes.status !== 201) throw new Error(`tank: ${tankRes.status} ${JSON.stringify(tankRes.body)}`);
   const tankId = tankRes.body.tank.id as string;
-  return { club, other, sky, milo, otto, ada, olga, asSky: asSky!, asMilo: asMilo!, asOtto: asOtto!, asAda: asAda!, asOlga: asOlga!, tankId };
+  return {
+    club,
+    other,
+    sky,
+    milo,
+    otto,
+    ada,
+    olga,
+    asSky: asSky!,
+    asMilo: asMilo!,
+    asOtto: asOtto!,
+    asAda: asAda!,
+    asOlga: asOlga!,
+    tankId,
+  };
 }
 
-export async function addTest(client: Client, clubId: string, tankId: string, entries: Record<string, { value: number; unit?: string }>, takenAt = new Date(Date.now() - 3_600_000)): Promise<string> {
-  const res = await client.post(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, { takenAt: takenAt.toISOString(), entries });
+export async function addTest(
+  client: Client,
+  clubId: string,
+  tankId: string,
+  entries: Record<string, { value: number; unit?: string }>,
+  takenAt = new Date(Date.now() - 3_600_000),
+): Promise<string> {
+  const res = await client.post(`/api/clubs/${clubId}/tanks/${tankId}/water-tests`, {
+    takenAt: takenAt.toISOString(),
+    entries,
+  });
   if (res.status !== 201) throw new Error(`test: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.waterTest.id as string;
 }

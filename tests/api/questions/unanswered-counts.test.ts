@@ -14,16 +14,35 @@ describe('unanswered questions per tank (for the mentor desk)', () => {
 
   it('counts open questions whose last word is the asker’s, per tank, in the club asked about only', async () => {
     const p = await questionPeople(t);
-    const secondTank = (await p.asSky.post(`/api/clubs/${p.club.id}/tanks`, { name: 'Quarantine tub', systemType: 'seahorse', phase: 'established', volume: { source: 'entered', value: 60 } })).body.tank.id as string;
-    const quietTank = (await p.asSky.post(`/api/clubs/${p.club.id}/tanks`, { name: 'Empty tank', systemType: 'seahorse', phase: 'established', volume: { source: 'entered', value: 60 } })).body.tank.id as string;
+    const secondTank = (
+      await p.asSky.post(`/api/clubs/${p.club.id}/tanks`, {
+        name: 'Quarantine tub',
+        systemType: 'seahorse',
+        phase: 'established',
+        volume: { source: 'entered', value: 60 },
+      })
+    ).body.tank.id as string;
+    const quietTank = (
+      await p.asSky.post(`/api/clubs/${p.club.id}/tanks`, {
+        name: 'Empty tank',
+        systemType: 'seahorse',
+        phase: 'established',
+        volume: { source: 'entered', value: 60 },
+      })
+    ).body.tank.id as string;
     const testA = await addTest(p.asSky, p.club.id, p.tankId, { nitrate: { value: 15, unit: 'mg/L NO3' } });
     const testB = await addTest(p.asSky, p.club.id, secondTank, { nitrate: { value: 5, unit: 'mg/L NO3' } });
     const ask = async (tankId: string, waterTestId: string, title: string) => {
-      const res = await p.asSky.post(`/api/clubs/${p.club.id}/tanks/${tankId}/questions`, { title, body: 'Is this fine?', waterTestId });
+      const res = await p.asSky.post(`/api/clubs/${p.club.id}/tanks/${tankId}/questions`, {
+        title,
+        body: 'Is this fine?',
+        waterTestId,
+      });
       expect(res.status).toBe(201);
       return `/api/clubs/${p.club.id}/questions/${res.body.question.id as string}`;
     };
-    const reply = async (path: string, client: typeof p.asSky, body = 'Reply.') => expect((await client.post(`${path}/replies`, { body })).status).toBe(201);
+    const reply = async (path: string, client: typeof p.asSky, body = 'Reply.') =>
+      expect((await client.post(`${path}/replies`, { body })).status).toBe(201);
 
     await ask(p.tankId, testA, 'No answer yet'); // waiting
     const answeredByMentor = await ask(p.tankId, testA, 'Mentor replied');
@@ -36,7 +55,11 @@ describe('unanswered questions per tank (for the mentor desk)', () => {
     const adminAnswered = await ask(secondTank, testB, 'Admin replied');
     await reply(adminAnswered, p.asAda); // not waiting
 
-    const counts = await unansweredCountsByTank(t.dataSource.manager, p.club.id, [p.tankId, secondTank, quietTank]);
+    const counts = await unansweredCountsByTank(t.dataSource.manager, p.club.id, [
+      p.tankId,
+      secondTank,
+      quietTank,
+    ]);
     expect(Object.fromEntries(counts)).toEqual({ [p.tankId]: 2, [secondTank]: 0, [quietTank]: 0 });
 
     // The same tanks asked about under another club's id count nothing.

@@ -16,7 +16,12 @@ const CALM = {
 };
 
 function listen(url: string, client: Client): Promise<{ socket: Socket; concerns: TankChangedPayload[] }> {
-  const socket = connect(url, { transports: ['websocket'], extraHeaders: { Cookie: client.cookies.join('; '), Origin: new URL(url).origin }, reconnection: false, forceNew: true });
+  const socket = connect(url, {
+    transports: ['websocket'],
+    extraHeaders: { Cookie: client.cookies.join('; '), Origin: new URL(url).origin },
+    reconnection: false,
+    forceNew: true,
+  });
   const concerns: TankChangedPayload[] = [];
   socket.on('concern', (p: TankChangedPayload) => concerns.push(p));
   return new Promise((resolve, reject) => {
@@ -57,7 +62,12 @@ describe('the live desk across instances', () => {
     const assignment = await assignMentor(a.dataSource, club, mentor.user, keeper.user);
 
     const onA = await signedIn(a.url, keeper.user.email);
-    const tank = await onA.post(`/api/clubs/${club.id}/tanks`, { name: 'Seahorse home', systemType: 'seahorse', phase: 'established', volume: { source: 'entered', value: 200 } });
+    const tank = await onA.post(`/api/clubs/${club.id}/tanks`, {
+      name: 'Seahorse home',
+      systemType: 'seahorse',
+      phase: 'established',
+      volume: { source: 'entered', value: 200 },
+    });
     expect(tank.status).toBe(201);
     const tankId = tank.body.tank.id as string;
 
@@ -70,17 +80,25 @@ describe('the live desk across instances', () => {
       entries: { ...CALM, nitrite: { value: 1.0, unit: 'mg/L NO2' } },
     });
     expect(saved.status).toBe(201);
-    const heard = await until(() => mentorSocket.concerns.find((c) => c.tankId === tankId && c.worst === 'urgent'), 1_000);
+    const heard = await until(
+      () => mentorSocket.concerns.find((c) => c.tankId === tankId && c.worst === 'urgent'),
+      1_000,
+    );
     expect(heard).toBeDefined();
     expect(Date.now() - savedAt).toBeLessThan(1_500);
     await new Promise((r) => setTimeout(r, 500));
     expect(strangerSocket.concerns).toEqual([]);
 
-    const ended = await (await signedIn(a.url, admin.user.email)).post(`/api/clubs/${club.id}/mentor-assignments/${assignment.id}/end`);
+    const ended = await (
+      await signedIn(a.url, admin.user.email)
+    ).post(`/api/clubs/${club.id}/mentor-assignments/${assignment.id}/end`);
     expect(ended.status).toBe(200);
     mentorSocket.concerns.length = 0;
     // A past mentee stays readable for 30 days, but live updates stop with the pairing.
-    await onA.post(`/api/clubs/${club.id}/tanks/${tankId}/water-tests`, { takenAt: new Date().toISOString(), entries: { ...CALM, nitrite: { value: 2.0, unit: 'mg/L NO2' } } });
+    await onA.post(`/api/clubs/${club.id}/tanks/${tankId}/water-tests`, {
+      takenAt: new Date().toISOString(),
+      entries: { ...CALM, nitrite: { value: 2.0, unit: 'mg/L NO2' } },
+    });
     await new Promise((r) => setTimeout(r, 1_000));
     expect(mentorSocket.concerns).toEqual([]);
     expect(strangerSocket.concerns).toEqual([]);

@@ -7,7 +7,12 @@ import { signedIn } from '@tests/helpers/http';
 import { testConfig } from '@tests/helpers/test-app';
 
 function open(url: string, headers: Record<string, string>): Socket {
-  return connect(url, { transports: ['websocket'], extraHeaders: headers, reconnection: false, forceNew: true });
+  return connect(url, {
+    transports: ['websocket'],
+    extraHeaders: headers,
+    reconnection: false,
+    forceNew: true,
+  });
 }
 
 function outcome(socket: Socket): Promise<'connected' | string> {
@@ -27,7 +32,8 @@ describe('sockets and sessions', () => {
   afterAll(() => server.close());
   beforeEach(async () => {
     await resetDatabase(server.dataSource);
-    email = (await makeMember(server.dataSource, await makeClub(server.dataSource), 'Sasha Socket')).user.email;
+    email = (await makeMember(server.dataSource, await makeClub(server.dataSource), 'Sasha Socket')).user
+      .email;
   });
 
   it('when there is no signed-in session, then the socket is refused', async () => {
@@ -50,7 +56,10 @@ describe('sockets and sessions', () => {
     const closed = new Promise<number>((resolve) => socket.once('disconnect', () => resolve(Date.now())));
     const signedOutAt = Date.now();
     expect((await c.delete('/api/session')).status).toBe(204);
-    const at = await Promise.race([closed, new Promise<number>((r) => setTimeout(() => r(Number.NaN), 2_000))]);
+    const at = await Promise.race([
+      closed,
+      new Promise<number>((r) => setTimeout(() => r(Number.NaN), 2_000)),
+    ]);
     expect(at - signedOutAt).toBeLessThan(1_000);
     socket.close();
   });

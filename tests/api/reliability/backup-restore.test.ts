@@ -21,7 +21,9 @@ async function fingerprint(ds: DataSource): Promise<Record<string, string>> {
   );
   const out: Record<string, string> = {};
   for (const { name } of tables) {
-    const [row] = (await ds.query(`SELECT count(*)::int AS n, coalesce(md5(string_agg(t::text, '|' ORDER BY t::text)), '') AS h FROM ${name} t`)) as [{ n: number; h: string }];
+    const [row] = (await ds.query(
+      `SELECT count(*)::int AS n, coalesce(md5(string_agg(t::text, '|' ORDER BY t::text)), '') AS h FROM ${name} t`,
+    )) as [{ n: number; h: string }];
     out[name] = `${row.n} rows ${row.h}`;
   }
   return out;
@@ -77,14 +79,18 @@ describe('backup and restore', () => {
     await run('scripts/restore', [file, '--yes'], { env });
     const after = await fingerprint(ds);
     const filled = Object.values(before).filter((v) => !v.startsWith('0 rows')).length;
-    console.info(`backup and restore: ${Object.keys(before).length} tables (${filled} with rows), ${(statSync(file).size / 1024).toFixed(0)} kB`);
+    console.info(
+      `backup and restore: ${Object.keys(before).length} tables (${filled} with rows), ${(statSync(file).size / 1024).toFixed(0)} kB`,
+    );
     expect(filled).toBeGreaterThan(15);
     expect(after).toEqual(before);
   }, 60_000);
 
   it('when restore is run without --yes and without a terminal, then it refuses and changes nothing', async () => {
     const before = await fingerprint(ds);
-    await expect(run('scripts/restore', [join(dir, 'club.dump')], { env: { ...process.env, DATABASE_URL: url } })).rejects.toMatchObject({ stderr: expect.stringMatching(/--yes/) });
+    await expect(
+      run('scripts/restore', [join(dir, 'club.dump')], { env: { ...process.env, DATABASE_URL: url } }),
+    ).rejects.toMatchObject({ stderr: expect.stringMatching(/--yes/) });
     expect(await fingerprint(ds)).toEqual(before);
   });
 });

@@ -46,7 +46,9 @@ describe('database outage under load', () => {
     direct = await openDataSource(databaseUrl, createLogger({ logLevel: 'silent' }));
     await resetDatabase(direct);
     uploadsDir = mkdtempSync(join(tmpdir(), 'shoalwise-outage-'));
-    running = await startServer(testConfig({ DATABASE_URL: proxy.urlFor(databaseUrl), UPLOADS_DIR: uploadsDir }));
+    running = await startServer(
+      testConfig({ DATABASE_URL: proxy.urlFor(databaseUrl), UPLOADS_DIR: uploadsDir }),
+    );
   });
   afterAll(async () => {
     await proxy?.up();
@@ -59,8 +61,14 @@ describe('database outage under load', () => {
   it('when PostgreSQL stops during traffic, then answers are fast 503s, it recovers by itself and no acknowledged write is lost', async () => {
     const club = await makeClub(direct, 'Outage Club');
     const keeper = await makeMember(direct, club, 'Olive Outage');
-    const clients = await Promise.all(Array.from({ length: WRITERS }, () => signedIn(running.url, keeper.user.email)));
-    const created = await clients[0]!.post(`/api/clubs/${club.id}/tanks`, { name: 'Outage tank', systemType: 'tropical-freshwater', volume: { source: 'entered', value: 80 } });
+    const clients = await Promise.all(
+      Array.from({ length: WRITERS }, () => signedIn(running.url, keeper.user.email)),
+    );
+    const created = await clients[0]!.post(`/api/clubs/${club.id}/tanks`, {
+      name: 'Outage tank',
+      systemType: 'tropical-freshwater',
+      volume: { source: 'entered', value: 80 },
+    });
     expect(created.status).toBe(201);
     const tankPath = `/api/clubs/${club.id}/tanks/${created.body.tank.id as string}`;
     for (const c of clients) await c.csrfToken();
@@ -72,17 +80,31 @@ describe('database outage under load', () => {
     const stopAt = upAt + AFTER_MS;
     let n = 0;
 
-    async function timed(kind: Answer['kind'], send: () => Promise<{ status: number; body: unknown }>): Promise<void> {
+    async function timed(
+      kind: Answer['kind'],
+      send: () => Promise<{ status: number; body: unknown }>,
+    ): Promise<void> {
       const startedAt = Date.now();
       try {
         const res = await send();
         const body = res.body as { error?: { message?: string }; waterTest?: { id?: string } };
-        answers.push({ kind, startedAt, ms: Date.now() - startedAt, status: res.status, message: body?.error?.message, id: body?.waterTest?.id });
+        answers.push({
+          kind,
+          startedAt,
+          ms: Date.now() - startedAt,
+          status: res.status,
+          message: body?.error?.message,
+          id: body?.waterTest?.id,
+        });
       } catch {
         answers.push({ kind, startedAt, ms: Date.now() - startedAt, status: 0 });
       }
     }
-    async function loop(kind: Answer['kind'], client: Client, send: (c: Client) => Promise<{ status: number; body: unknown }>): Promise<void> {
+    async function loop(
+      kind: Answer['kind'],
+      client: Client,
+      send: (c: Client) => Promise<{ status: number; body: unknown }>,
+    ): Promise<void> {
       while (Date.now() < stopAt) {
         await timed(kind, () => send(client));
         await new Promise((r) => setTimeout(r, 20));
@@ -91,7 +113,13 @@ describe('database outage under load', () => {
 
     const load = Promise.all([
       ...clients.map((c) =>
-        loop('write', c, (cl) => cl.post(`${tankPath}/water-tests`, { takenAt: new Date(Date.now() - 60_000).toISOString(), note: `outage ${++n}`, entries: { nitrate: { value: 10, unit: 'mg/L NO3' } } })),
+        loop('write', c, (cl) =>
+          cl.post(`${tankPath}/water-tests`, {
+            takenAt: new Date(Date.now() - 60_000).toISOString(),
+            note: `outage ${++n}`,
+            entries: { nitrate: { value: 10, unit: 'mg/L NO3' } },
+          }),
+        ),
       ),
       loop('read', clients[0]!, (cl) => cl.get(`${tankPath}/water-tests?limit=5`)),
       loop('health', new Client(running.url), (cl) => cl.get('/api/health')),
@@ -104,10 +132,16 @@ describe('database outage under load', () => {
 
     const during = answers.filter((a) => a.startedAt >= downAt && a.startedAt + a.ms <= upAt);
     const after = answers.filter((a) => a.startedAt >= upAt);
-    const firstOk = (kind: Answer['kind']) => Math.min(...after.filter((a) => a.kind === kind && a.status < 300).map((a) => a.startedAt + a.ms - upAt));
+    const firstOk = (kind: Answer['kind']) =>
+      Math.min(
+        ...after.filter((a) => a.kind === kind && a.status < 300).map((a) => a.startedAt + a.ms - upAt),
+      );
     const recovered = { write: firstOk('write'), read: firstOk('read'), health: firstOk('health') };
     const acknowledged = answers.filter((a) => a.kind === 'write' && a.status === 201).map((a) => a.id!);
-    const [{ found }] = (await direct.query(`SELECT count(*)::int AS found FROM water_test WHERE id = ANY($1)`, [acknowledged])) as [{ found: number }];
+    const [{ found }] = (await direct.query(
+      `SELECT count(*)::int AS found FROM water_test WHERE id = ANY($1)`,
+      [acknowledged],
+    )) as [{ found: number }];
     const slowest = Math.max(...during.map((a) => a.ms));
     console.info(
       `database outage ${OUTAGE_MS / 1000} s: ${answers.length} requests; during it ${during.length} answers, ` +
@@ -115,7 +149,10 @@ describe('database outage under load', () => {
         `${recovered.read} ms (reads), ${recovered.health} ms (health); ${acknowledged.length} writes acknowledged, ${found} found`,
     );
 
-    expect(answers.filter((a) => a.status === 0 || (a.status >= 500 && a.status !== 503)), 'hung or failed requests').toEqual([]);
+    expect(
+      answers.filter((a) => a.status === 0 || (a.status >= 500 && a.status !== 503)),
+      'hung or failed requests',
+    ).toEqual([]);
     expect(during.length).toBeGreaterThan(20);
     expect(new Set(during.map((a) => a.kind))).toEqual(new Set(['write', 'read', 'health']));
     expect(during.filter((a) => a.status !== 503 || !a.message || a.ms > FAST_MS)).toEqual([]);
@@ -125,7 +162,10 @@ describe('database outage under load', () => {
     expect(acknowledged.length).toBeGreaterThan(0);
     expect(found).toBe(acknowledged.length);
     // A request whose session could not be loaded must not delete that session when it ends: nobody is signed out.
-    const [{ sessions }] = (await direct.query(`SELECT count(*)::int AS sessions FROM session WHERE sess->>'userId' = $1`, [keeper.user.id])) as [{ sessions: number }];
+    const [{ sessions }] = (await direct.query(
+      `SELECT count(*)::int AS sessions FROM session WHERE sess->>'userId' = $1`,
+      [keeper.user.id],
+    )) as [{ sessions: number }];
     expect(sessions).toBe(WRITERS);
   }, 60_000);
 

@@ -33,7 +33,25 @@ export interface ValidRequest {
 }
 
 /** Every query parameter some route reads, plus keys that aim at the query parser. */
-const QUERY_KEYS = ['status', 'state', 'limit', 'before', 'cursor', 'unreadOnly', 'urgentOnly', 'cycling', 'unanswered', 'tankId', 'waterTestId', 'eventId', 'token', 'kind', 'a[b]', 'limit[]', ...POLLUTION_KEYS];
+const QUERY_KEYS = [
+  'status',
+  'state',
+  'limit',
+  'before',
+  'cursor',
+  'unreadOnly',
+  'urgentOnly',
+  'cycling',
+  'unanswered',
+  'tankId',
+  'waterTestId',
+  'eventId',
+  'token',
+  'kind',
+  'a[b]',
+  'limit[]',
+  ...POLLUTION_KEYS,
+];
 
 /** Percent-encodes the UTF-8 bytes (encodeURIComponent throws on unpaired surrogates, which we want to send). */
 export function percentEncode(s: string): string {
@@ -61,7 +79,11 @@ function fieldPaths(value: unknown, prefix = ''): string[] {
 
 const clone = (v: unknown): unknown => (v === undefined ? undefined : JSON.parse(JSON.stringify(v)));
 
-function setAt(body: unknown, path: string, update: (parent: Record<string, unknown>, key: string) => void): unknown {
+function setAt(
+  body: unknown,
+  path: string,
+  update: (parent: Record<string, unknown>, key: string) => void,
+): unknown {
   const copy = clone(body) as Record<string, unknown>;
   const keys = path.split('.');
   let parent = copy;
@@ -70,18 +92,30 @@ function setAt(body: unknown, path: string, update: (parent: Record<string, unkn
   return copy;
 }
 
-const valueAt = (root: unknown, path: string): unknown => path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)?.[k], root);
+const valueAt = (root: unknown, path: string): unknown =>
+  path.split('.').reduce<unknown>((o, k) => (o as Record<string, unknown>)?.[k], root);
 
 const queryPair = fc.tuple(
   fc.constantFrom(...QUERY_KEYS),
-  fc.oneof({ weight: 4, arbitrary: hostileString.map(percentEncode) }, { weight: 1, arbitrary: fc.constantFrom(...RAW_ESCAPES) }),
+  fc.oneof(
+    { weight: 4, arbitrary: hostileString.map(percentEncode) },
+    { weight: 1, arbitrary: fc.constantFrom(...RAW_ESCAPES) },
+  ),
 );
 
 const headerTrouble = fc.constantFrom<{ label: string; headers: Record<string, string>; sendCsrf: boolean }>(
   { label: 'no CSRF token', headers: {}, sendCsrf: false },
   { label: 'huge CSRF token', headers: { 'X-CSRF-Token': 'A'.repeat(20_000) }, sendCsrf: false },
-  { label: 'forged session cookie', headers: { Cookie: 'shoalwise.sid=s%3Aforged.c2lnbmF0dXJl; __proto__=x' }, sendCsrf: false },
-  { label: 'forwarded-for junk', headers: { 'X-Forwarded-For': '1.2.3.4, <script>, ::ffff:999.1.1.1' }, sendCsrf: true },
+  {
+    label: 'forged session cookie',
+    headers: { Cookie: 'shoalwise.sid=s%3Aforged.c2lnbmF0dXJl; __proto__=x' },
+    sendCsrf: false,
+  },
+  {
+    label: 'forwarded-for junk',
+    headers: { 'X-Forwarded-For': '1.2.3.4, <script>, ::ffff:999.1.1.1' },
+    sendCsrf: true,
+  },
   { label: 'gzip that is not gzip', headers: { 'Content-Encoding': 'gzip' }, sendCsrf: true },
   { label: 'unknown content encoding', headers: { 'Content-Encoding': 'x-unknown' }, sendCsrf: true },
   { label: 'odd accept', headers: { Accept: 'text/html;q=0.1, */*;q=nonsense' }, sendCsrf: true },
@@ -98,9 +132,14 @@ export function fuzzCaseArbitrary(valid: ValidRequest): fc.Arbitrary<FuzzCase> {
   const body = valid.body;
   const fields = fieldPaths(body);
   const strings = fields.filter((f) => typeof valueAt(body, f) === 'string');
-  const objects = fields.filter((f) => { const v = valueAt(body, f); return v !== null && typeof v === 'object' && !Array.isArray(v); });
+  const objects = fields.filter((f) => {
+    const v = valueAt(body, f);
+    return v !== null && typeof v === 'object' && !Array.isArray(v);
+  });
 
-  const build = (over: Partial<FuzzCase> & { mutation: string; segments?: string[]; extraQuery?: string }): FuzzCase => {
+  const build = (
+    over: Partial<FuzzCase> & { mutation: string; segments?: string[]; extraQuery?: string },
+  ): FuzzCase => {
     const query = [validQuery, over.extraQuery].filter(Boolean).join('&');
     return {
       route: valid.route,
@@ -121,40 +160,87 @@ export function fuzzCaseArbitrary(valid: ValidRequest): fc.Arbitrary<FuzzCase> {
     choices.push({
       weight: hasBody ? 3 : 6,
       arbitrary: fc
-        .tuple(fc.constantFrom(...paramPositions), fc.oneof({ weight: 5, arbitrary: hostileId.map(percentEncode) }, { weight: 1, arbitrary: fc.constantFrom(...RAW_ESCAPES) }))
-        .map(([at, id]) => build({ mutation: `path ${patternSegments[at]} = ${id.slice(0, 40)}`, segments: segments.map((s, i) => (i === at ? id : s)) })),
+        .tuple(
+          fc.constantFrom(...paramPositions),
+          fc.oneof(
+            { weight: 5, arbitrary: hostileId.map(percentEncode) },
+            { weight: 1, arbitrary: fc.constantFrom(...RAW_ESCAPES) },
+          ),
+        )
+        .map(([at, id]) =>
+          build({
+            mutation: `path ${patternSegments[at]} = ${id.slice(0, 40)}`,
+            segments: segments.map((s, i) => (i === at ? id : s)),
+          }),
+        ),
     });
   }
   choices.push({
     weight: hasBody ? 2 : 6,
     arbitrary: fc
       .array(queryPair, { minLength: 1, maxLength: 4 })
-      .map((pairs) => build({ mutation: `query ${pairs.map(([k]) => k).join(',')}`, extraQuery: pairs.map(([k, v]) => `${percentEncode(k)}=${v}`).join('&') })),
+      .map((pairs) =>
+        build({
+          mutation: `query ${pairs.map(([k]) => k).join(',')}`,
+          extraQuery: pairs.map(([k, v]) => `${percentEncode(k)}=${v}`).join('&'),
+        }),
+      ),
   });
-  choices.push({ weight: 1, arbitrary: headerTrouble.map((h) => build({ mutation: `header: ${h.label}`, headers: h.headers, sendCsrf: h.sendCsrf })) });
-  choices.push({ weight: hasBody ? 3 : 1, arbitrary: rawBody.map((raw) => build({ mutation: `raw body ${raw.contentType}: ${raw.bytes.subarray(0, 30).toString('latin1')}`, body: { raw } })) });
-  choices.push({ weight: hasBody ? 2 : 1, arbitrary: hostileValue.map((json) => build({ mutation: 'whole body replaced', body: { json } })) });
+  choices.push({
+    weight: 1,
+    arbitrary: headerTrouble.map((h) =>
+      build({ mutation: `header: ${h.label}`, headers: h.headers, sendCsrf: h.sendCsrf }),
+    ),
+  });
+  choices.push({
+    weight: hasBody ? 3 : 1,
+    arbitrary: rawBody.map((raw) =>
+      build({
+        mutation: `raw body ${raw.contentType}: ${raw.bytes.subarray(0, 30).toString('latin1')}`,
+        body: { raw },
+      }),
+    ),
+  });
+  choices.push({
+    weight: hasBody ? 2 : 1,
+    arbitrary: hostileValue.map((json) => build({ mutation: 'whole body replaced', body: { json } })),
+  });
   choices.push({
     weight: hasBody ? 3 : 1,
     arbitrary: fc.tuple(fc.constantFrom('', ...objects), hostileKey, hostileValue).map(([at, key, value]) => {
       const target = (clone(body) ?? {}) as Record<string, unknown>;
       const parent = at ? (valueAt(target, at) as Record<string, unknown>) : target;
       withOwnKey(parent, key, value);
-      return build({ mutation: `extra key ${JSON.stringify(key)}${at ? ` in ${at}` : ''}`, body: { json: target } });
+      return build({
+        mutation: `extra key ${JSON.stringify(key)}${at ? ` in ${at}` : ''}`,
+        body: { json: target },
+      });
     }),
   });
   if (fields.length) {
     choices.push({
       weight: 8,
-      arbitrary: fc.tuple(fc.constantFrom(...fields), hostileValue).map(([field, value]) =>
-        build({ mutation: `field ${field} set`, field, body: { json: setAt(body, field, (parent, key) => (parent[key] = value)) } }),
-      ),
+      arbitrary: fc
+        .tuple(fc.constantFrom(...fields), hostileValue)
+        .map(([field, value]) =>
+          build({
+            mutation: `field ${field} set`,
+            field,
+            body: { json: setAt(body, field, (parent, key) => (parent[key] = value)) },
+          }),
+        ),
     });
     choices.push({
       weight: 2,
-      arbitrary: fc.constantFrom(...fields).map((field) =>
-        build({ mutation: `field ${field} dropped`, field, body: { json: setAt(body, field, (parent, key) => delete parent[key]) } }),
-      ),
+      arbitrary: fc
+        .constantFrom(...fields)
+        .map((field) =>
+          build({
+            mutation: `field ${field} dropped`,
+            field,
+            body: { json: setAt(body, field, (parent, key) => delete parent[key]) },
+          }),
+        ),
     });
   }
   if (strings.length) {

@@ -23,13 +23,24 @@ const REQUESTS = Number(process.env.FUZZ_REQUESTS ?? 2_000);
 /** Replays one route's cases (e.g. FUZZ_ROUTE='POST /password-resets'); LOG_LEVEL=error shows the server's side. */
 const ONLY_ROUTE = process.env.FUZZ_ROUTE;
 /** Written by design on a refused request: sessions (touched on every request), security events, mail sent later by the queue. */
-const WRITTEN_WHEN_REFUSED = ['session', 'audit_event', 'captured_mail', 'socket_io_attachments', 'rate_limit_hit'];
+const WRITTEN_WHEN_REFUSED = [
+  'session',
+  'audit_event',
+  'captured_mail',
+  'socket_io_attachments',
+  'rate_limit_hit',
+];
 /** Pages for people following an e-mail link: they answer in HTML, refusals included. */
 const HTML_PAGES = ['GET /unsubscribe', 'POST /unsubscribe'];
 /** A CSV that parses into a single column is answered on the separator option: the file is fine, the separator is not. */
 // A CSV mangled so that its columns or dates change is answered on the choice that no longer fits the file.
 const ANSWERED_ON: Record<string, string[]> = { csv: ['delimiter', 'mapping', 'dateFormat'] };
-const SIGNED_IN: Exclude<Persona, 'anonymous' | 'outsider' | 'suspended'>[] = ['member', 'admin', 'mentor', 'otherMentor'];
+const SIGNED_IN: Exclude<Persona, 'anonymous' | 'outsider' | 'suspended'>[] = [
+  'member',
+  'admin',
+  'mentor',
+  'otherMentor',
+];
 
 /** Someone the route lets through: anonymous when everyone gets the same answer, else the person it serves best. */
 function personaFor(row: MatrixRow): Persona {
@@ -42,7 +53,11 @@ function personaFor(row: MatrixRow): Persona {
 /** Reads before writes, and the requests that end or remove the world's objects last, so fewer cases meet a 404. */
 function order(row: MatrixRow): number {
   const [method, path] = row.route.split(' ') as [string, string];
-  if (method === 'DELETE' || /\/(archive|end|accept|decline|resolve|acknowledge|answered|members\/:membershipId)$/.test(path)) return 2;
+  if (
+    method === 'DELETE' ||
+    /\/(archive|end|accept|decline|resolve|acknowledge|answered|members\/:membershipId)$/.test(path)
+  )
+    return 2;
   return method === 'GET' ? 0 : 1;
 }
 
@@ -82,9 +97,15 @@ describe('hostile input over every route', () => {
   async function restoreWorld(): Promise<void> {
     for (const p of Object.values(world.people)) {
       const m = p.membership as { id: string; role?: string; status?: string };
-      await t.dataSource.query(`UPDATE membership SET role = $2, status = $3 WHERE id = $1 AND (role <> $2 OR status <> $3)`, [m.id, m.role, m.status]);
+      await t.dataSource.query(
+        `UPDATE membership SET role = $2, status = $3 WHERE id = $1 AND (role <> $2 OR status <> $3)`,
+        [m.id, m.role, m.status],
+      );
     }
-    await t.dataSource.query(`UPDATE tank SET archived_at = NULL WHERE id = ANY($1) AND archived_at IS NOT NULL`, [[world.tank.tank.id, world.spareTank.tank.id]]);
+    await t.dataSource.query(
+      `UPDATE tank SET archived_at = NULL WHERE id = ANY($1) AND archived_at IS NOT NULL`,
+      [[world.tank.tank.id, world.spareTank.tank.id]],
+    );
     for (const p of SIGNED_IN) {
       const me = await request(base).get('/api/me').set('Cookie', clients.get(p)!.cookies);
       if (me.status !== 200) clients.set(p, await signedIn(base, world.people[p].user.email));
@@ -97,7 +118,8 @@ describe('hostile input over every route', () => {
     let req = request(base)[c.method](c.path).set('Cookie', client.cookies).timeout(15_000);
     if (token) req = req.set('X-CSRF-Token', token);
     for (const [k, v] of Object.entries(c.headers)) req = req.set(k, v);
-    if (c.body && 'raw' in c.body) return req.set('Content-Type', c.body.raw.contentType).send(c.body.raw.bytes);
+    if (c.body && 'raw' in c.body)
+      return req.set('Content-Type', c.body.raw.contentType).send(c.body.raw.bytes);
     if (c.body) return req.set('Content-Type', 'application/json').send(JSON.stringify(c.body.json));
     return req;
   }
@@ -133,29 +155,66 @@ describe('hostile input over every route', () => {
         sent++;
         const changed = await watch.take();
         byStatus[res.status] = (byStatus[res.status] ?? 0) + 1;
-        if (res.status >= 500) findings.push({ case: label, status: res.status, problem: 'server error', body: res.body });
+        if (res.status >= 500)
+          findings.push({ case: label, status: res.status, problem: 'server error', body: res.body });
         if (res.status < 400) continue;
         refused++;
-        if (Object.keys(changed).length) findings.push({ case: label, status: res.status, problem: 'rows changed by a refused request', body: changed });
+        if (Object.keys(changed).length)
+          findings.push({
+            case: label,
+            status: res.status,
+            problem: 'rows changed by a refused request',
+            body: changed,
+          });
         const error = (res.body as { error?: { code?: unknown; message?: unknown } })?.error;
         const html = HTML_PAGES.includes(c.route) && /text\/html/.test(String(res.headers['content-type']));
-        if (!html && (typeof error?.code !== 'string' || typeof error?.message !== 'string' || !error.message)) {
-          findings.push({ case: label, status: res.status, problem: 'no JSON error with a code and a message', body: res.text?.slice(0, 200) });
+        if (
+          !html &&
+          (typeof error?.code !== 'string' || typeof error?.message !== 'string' || !error.message)
+        ) {
+          findings.push({
+            case: label,
+            status: res.status,
+            problem: 'no JSON error with a code and a message',
+            body: res.text?.slice(0, 200),
+          });
         }
         const issues = (res.body as { issues?: { path?: unknown; message?: unknown }[] }).issues;
         if (res.status === 400 && issues) {
-          if (!issues.length || issues.some((x) => typeof x.path !== 'string' || !x.path || typeof x.message !== 'string' || !x.message)) {
-            findings.push({ case: label, status: 400, problem: 'a field issue without a field or a reason', body: issues });
+          if (
+            !issues.length ||
+            issues.some(
+              (x) => typeof x.path !== 'string' || !x.path || typeof x.message !== 'string' || !x.message,
+            )
+          ) {
+            findings.push({
+              case: label,
+              status: 400,
+              problem: 'a field issue without a field or a reason',
+              body: issues,
+            });
           }
           if (c.field) {
             fieldAimed++;
             const field = c.field;
-            const names = (p: unknown) => typeof p === 'string' && (p === field || p.startsWith(`${field}.`) || field.startsWith(`${p}.`));
+            const names = (p: unknown) =>
+              typeof p === 'string' &&
+              (p === field || p.startsWith(`${field}.`) || field.startsWith(`${p}.`));
             // Removing a field can leave a body that fails a rule about the whole ("change at least one thing").
             const wholeRule = c.mutation.endsWith('dropped') && issues.some((x) => x.path === '(root)');
-            const explained = issues.some((x) => names(x.path) || ANSWERED_ON[field]?.some((a) => x.path === a || String(x.path).startsWith(`${a}.`)));
+            const explained = issues.some(
+              (x) =>
+                names(x.path) ||
+                ANSWERED_ON[field]?.some((a) => x.path === a || String(x.path).startsWith(`${a}.`)),
+            );
             if (explained || wholeRule) fieldNamed++;
-            else findings.push({ case: label, status: 400, problem: `the 400 does not name ${c.field}`, body: issues });
+            else
+              findings.push({
+                case: label,
+                status: 400,
+                problem: `the 400 does not name ${c.field}`,
+                body: issues,
+              });
           }
         }
       }
@@ -164,11 +223,14 @@ describe('hostile input over every route', () => {
     const polluted = Object.keys(Object.prototype).concat('polluted' in {} ? ['polluted'] : []);
     console.info(
       `hostile input: seed ${SEED}, ${rows.length} routes, ${sent} requests, ${refused} refused (4xx), ` +
-        `${Object.entries(byStatus).map(([s, n]) => `${s}×${n}`).join(' ')}, ${findings.length} findings, ` +
+        `${Object.entries(byStatus)
+          .map(([s, n]) => `${s}×${n}`)
+          .join(' ')}, ${findings.length} findings, ` +
         `${fieldNamed}/${fieldAimed} aimed 400s named their field`,
     );
     expect(polluted, 'Object.prototype gained keys').toEqual([]);
-    for (const f of findings.slice(0, 60)) console.info(`${f.problem} (${f.status}): ${f.case}\n  ${JSON.stringify(f.body)?.slice(0, 300)}`);
+    for (const f of findings.slice(0, 60))
+      console.info(`${f.problem} (${f.status}): ${f.case}\n  ${JSON.stringify(f.body)?.slice(0, 300)}`);
     expect(findings.map((f) => `${f.problem} (${f.status}): ${f.case}`).slice(0, 40)).toEqual([]);
     if (!ONLY_ROUTE) expect(sent).toBeGreaterThanOrEqual(REQUESTS);
   }, 600_000);

@@ -11,14 +11,19 @@ import { createTestApp, type TestApp } from '../../helpers/test-app';
  */
 const ACCOUNT_AND_ADDRESS_LIMIT = 10;
 
-async function failedSignIn(app: TestApp['app'], email: string, forwardedFor?: string): Promise<request.Response> {
+async function failedSignIn(
+  app: TestApp['app'],
+  email: string,
+  forwardedFor?: string,
+): Promise<request.Response> {
   const c = new Client(app);
   const token = await c.csrfToken();
   let req = request(app).post('/api/session').set('Cookie', c.cookies).set('X-CSRF-Token', token);
   if (forwardedFor) req = req.set('X-Forwarded-For', forwardedFor);
   return req.send({ email, password: 'not the password' });
 }
-const failSignIn = async (app: TestApp['app'], email: string, forwardedFor?: string) => (await failedSignIn(app, email, forwardedFor)).status;
+const failSignIn = async (app: TestApp['app'], email: string, forwardedFor?: string) =>
+  (await failedSignIn(app, email, forwardedFor)).status;
 
 describe('rate limits shared by every instance', () => {
   let a: TestApp;
@@ -33,10 +38,16 @@ describe('rate limits shared by every instance', () => {
 
   it('when 20 failed sign-ins for one account arrive at once, split over two instances, then exactly 10 get through', async () => {
     const email = 'target@test.example';
-    const statuses = await Promise.all(Array.from({ length: 2 * ACCOUNT_AND_ADDRESS_LIMIT }, (_, i) => failSignIn(i % 2 ? a.app : b.app, email)));
+    const statuses = await Promise.all(
+      Array.from({ length: 2 * ACCOUNT_AND_ADDRESS_LIMIT }, (_, i) =>
+        failSignIn(i % 2 ? a.app : b.app, email),
+      ),
+    );
     expect(statuses.filter((s) => s === 401)).toHaveLength(ACCOUNT_AND_ADDRESS_LIMIT);
     expect(statuses.filter((s) => s === 429)).toHaveLength(ACCOUNT_AND_ADDRESS_LIMIT);
-    const [row] = (await a.dataSource.query(`SELECT hits FROM rate_limit_hit WHERE key LIKE 'sign-in:account+address:%'`)) as [{ hits: number }];
+    const [row] = (await a.dataSource.query(
+      `SELECT hits FROM rate_limit_hit WHERE key LIKE 'sign-in:account+address:%'`,
+    )) as [{ hits: number }];
     expect(row.hits).toBe(2 * ACCOUNT_AND_ADDRESS_LIMIT);
   });
 
@@ -44,7 +55,12 @@ describe('rate limits shared by every instance', () => {
     const c = new Client(a.app);
     const token = await c.csrfToken();
     for (const path of ['/api/session', '/api/password-resets']) {
-      const res = await request(a.app).post(path).set('Cookie', c.cookies).set('X-CSRF-Token', token).set('Content-Type', 'application/json').send('{"email":{"toString":"x"},"password":"p"}');
+      const res = await request(a.app)
+        .post(path)
+        .set('Cookie', c.cookies)
+        .set('X-CSRF-Token', token)
+        .set('Content-Type', 'application/json')
+        .send('{"email":{"toString":"x"},"password":"p"}');
       expect(res.status, path).toBe(400);
       expect(res.body.issues).toEqual(expect.arrayContaining([expect.objectContaining({ path: 'email' })]));
     }
@@ -63,7 +79,10 @@ describe('rate limits behind a proxy (TRUST_PROXY)', () => {
   let loopbackProxy: TestApp;
   let oneHop: TestApp;
   beforeAll(async () => {
-    [loopbackProxy, oneHop] = await Promise.all([createTestApp({ TRUST_PROXY: 'loopback' }), createTestApp({ TRUST_PROXY: '1' })]);
+    [loopbackProxy, oneHop] = await Promise.all([
+      createTestApp({ TRUST_PROXY: 'loopback' }),
+      createTestApp({ TRUST_PROXY: '1' }),
+    ]);
   });
   afterAll(async () => {
     await Promise.all([loopbackProxy?.close(), oneHop?.close()]);
@@ -72,7 +91,8 @@ describe('rate limits behind a proxy (TRUST_PROXY)', () => {
 
   it('when the trusted proxy forwards two clients, then each has its own limit (not one for everyone behind the proxy)', async () => {
     const email = 'shared-laptop@test.example';
-    for (let i = 0; i < ACCOUNT_AND_ADDRESS_LIMIT; i++) expect(await failSignIn(loopbackProxy.app, email, '203.0.113.5')).toBe(401);
+    for (let i = 0; i < ACCOUNT_AND_ADDRESS_LIMIT; i++)
+      expect(await failSignIn(loopbackProxy.app, email, '203.0.113.5')).toBe(401);
     expect(await failSignIn(loopbackProxy.app, email, '203.0.113.5')).toBe(429);
     expect(await failSignIn(loopbackProxy.app, email, '198.51.100.7')).toBe(401);
   });
@@ -80,10 +100,13 @@ describe('rate limits behind a proxy (TRUST_PROXY)', () => {
   it('when a client forges entries in front of the address the proxy added, then the limit keys on the real address', async () => {
     const email = 'forger@test.example';
     const statuses: number[] = [];
-    for (let i = 0; i <= ACCOUNT_AND_ADDRESS_LIMIT; i++) statuses.push(await failSignIn(oneHop.app, email, `10.9.8.${i}, 192.0.2.44`));
+    for (let i = 0; i <= ACCOUNT_AND_ADDRESS_LIMIT; i++)
+      statuses.push(await failSignIn(oneHop.app, email, `10.9.8.${i}, 192.0.2.44`));
     expect(statuses.slice(0, ACCOUNT_AND_ADDRESS_LIMIT).every((s) => s === 401)).toBe(true);
     expect(statuses[ACCOUNT_AND_ADDRESS_LIMIT]).toBe(429);
-    const keys: { key: string }[] = await oneHop.dataSource.query(`SELECT key FROM rate_limit_hit WHERE key LIKE 'sign-in:address:%'`);
+    const keys: { key: string }[] = await oneHop.dataSource.query(
+      `SELECT key FROM rate_limit_hit WHERE key LIKE 'sign-in:address:%'`,
+    );
     expect(keys.map((k) => k.key)).toEqual(['sign-in:address:192.0.2.44']);
   });
 });

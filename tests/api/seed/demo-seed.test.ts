@@ -17,7 +17,12 @@ describe('the demo club seed', () => {
 
   it('when seeded twice, then the second run changes nothing', async () => {
     expect((await seedDemoClub(t.dataSource)).created).toBe(true);
-    const count = async () => (await t.dataSource.query(`SELECT (SELECT count(*) FROM club)::int AS clubs, (SELECT count(*) FROM tank)::int AS tanks, (SELECT count(*) FROM water_test)::int AS tests`))[0];
+    const count = async () =>
+      (
+        await t.dataSource.query(
+          `SELECT (SELECT count(*) FROM club)::int AS clubs, (SELECT count(*) FROM tank)::int AS tanks, (SELECT count(*) FROM water_test)::int AS tests`,
+        )
+      )[0];
     const first = await count();
     expect((await seedDemoClub(t.dataSource)).created).toBe(false);
     expect(await count()).toEqual(first);
@@ -29,7 +34,10 @@ describe('the demo club seed', () => {
     const me = (await teodor.get('/api/me')).body;
     const clubId = me.memberships.find((m: { clubSlug: string }) => m.clubSlug === 'harbourlight').clubId;
     const desk = (await teodor.get(`/api/clubs/${clubId}/desk`)).body;
-    expect(desk.rows.map((r: { name: string }) => r.name).sort()).toEqual(['Reef-edge fish room', 'Seagrass corner']);
+    expect(desk.rows.map((r: { name: string }) => r.name).sort()).toEqual([
+      'Reef-edge fish room',
+      'Seagrass corner',
+    ]);
     const fish = desk.rows.find((r: { name: string }) => r.name === 'Reef-edge fish room');
     expect(fish.worstConcern.parameter).toBe('nitrate');
   });
@@ -38,7 +46,15 @@ describe('the demo club seed', () => {
     const jonah = await signedIn(t.app, 'jonah@harbourlight.example', DEMO_PASSWORD);
     const me = (await jonah.get('/api/me')).body;
     const clubId = me.memberships.find((m: { clubSlug: string }) => m.clubSlug === 'harbourlight').clubId;
-    const meetups = (await jonah.get(`/api/clubs/${clubId}/meetups`)).body.meetups as { id: string; kind: string; title: string; goingCount: number; capacity: number; waitlistCount: number; mine: { status: string; slotStartsAt: string | null; tank: { name: string } | null } | null }[];
+    const meetups = (await jonah.get(`/api/clubs/${clubId}/meetups`)).body.meetups as {
+      id: string;
+      kind: string;
+      title: string;
+      goingCount: number;
+      capacity: number;
+      waitlistCount: number;
+      mine: { status: string; slotStartsAt: string | null; tank: { name: string } | null } | null;
+    }[];
     expect(meetups.map((m) => m.kind)).toEqual(['talk', 'clinic', 'online', 'swap']);
     const clinic = meetups.find((m) => m.kind === 'clinic')!;
     expect(clinic.mine).toMatchObject({ status: 'going', tank: { name: 'Seagrass corner' } });
@@ -46,7 +62,10 @@ describe('the demo club seed', () => {
     const swap = meetups.find((m) => m.kind === 'swap')!;
     expect(swap).toMatchObject({ goingCount: 3, capacity: 3, waitlistCount: 1 });
     const wendell = await signedIn(t.app, 'wendell@harbourlight.example', DEMO_PASSWORD);
-    expect((await wendell.get(`/api/clubs/${clubId}/meetups/${swap.id}`)).body.meetup.mine).toMatchObject({ status: 'waitlisted', waitlistPosition: 1 });
+    expect((await wendell.get(`/api/clubs/${clubId}/meetups/${swap.id}`)).body.meetup.mine).toMatchObject({
+      status: 'waitlisted',
+      waitlistPosition: 1,
+    });
   });
 
   it('when the cycling seahorse tank is read, then it is past the ammonia peak with nitrite on the way down', async () => {

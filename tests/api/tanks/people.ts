@@ -15,12 +15,31 @@ export async function tankPeople(t: TestApp) {
   const [asKeeper, asMentor, asNeighbour, asStranger] = await Promise.all(
     [keeper, mentor, neighbour, stranger].map((p) => signedIn(t.app, p.user.email)),
   );
-  return { club, other, keeper, mentor, neighbour, stranger, asKeeper: asKeeper!, asMentor: asMentor!, asNeighbour: asNeighbour!, asStranger: asStranger! };
+  return {
+    club,
+    other,
+    keeper,
+    mentor,
+    neighbour,
+    stranger,
+    asKeeper: asKeeper!,
+    asMentor: asMentor!,
+    asNeighbour: asNeighbour!,
+    asStranger: asStranger!,
+  };
 }
 
-export const REEF: CreateTankInput = { name: 'Living-room reef', systemType: 'reef', volume: { source: 'entered', value: 300 } };
+export const REEF: CreateTankInput = {
+  name: 'Living-room reef',
+  systemType: 'reef',
+  volume: { source: 'entered', value: 300 },
+};
 
-export async function makeTankVia(client: Client, clubId: string, body: CreateTankInput = REEF): Promise<{ id: string; [k: string]: unknown }> {
+export async function makeTankVia(
+  client: Client,
+  clubId: string,
+  body: CreateTankInput = REEF,
+): Promise<{ id: string; [k: string]: unknown }> {
   const res = await client.post(`/api/clubs/${clubId}/tanks`, body);
   if (res.status !== 201) throw new Error(`tank creation failed: ${res.status} ${JSON.stringify(res.body)}`);
   return res.body.tank;

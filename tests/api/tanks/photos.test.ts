@@ -26,15 +26,26 @@ describe('photos', () => {
     upload = `${tank}/photos`;
   });
   const files = () => readdirSync(t.config.uploadsDir).sort();
-  const photoUrl = (id: string, thumb = false) => `/api/clubs/${p.club.id}/photos/${id}${thumb ? '/thumb' : ''}`;
+  const photoUrl = (id: string, thumb = false) =>
+    `/api/clubs/${p.club.id}/photos/${id}${thumb ? '/thumb' : ''}`;
 
   it('when a JPEG with EXIF and GPS is uploaded, then a WebP without any metadata is stored and served with safe headers (ASVS 5.2.2, 5.4.1)', async () => {
     const jpeg = await jpegWithExif(2400, 1800);
     expect((await sharp(jpeg).metadata()).exif?.length).toBeGreaterThan(0);
-    const res = await p.asKeeper.upload(upload, [{ data: jpeg, name: 'IMG_0001.jpg', type: 'image/jpeg' }], { caption: 'Day one' });
+    const res = await p.asKeeper.upload(upload, [{ data: jpeg, name: 'IMG_0001.jpg', type: 'image/jpeg' }], {
+      caption: 'Day one',
+    });
     expect(res.status).toBe(201);
     const [photo] = res.body.photos;
-    expect(photo).toMatchObject({ caption: 'Day one', width: PHOTO_FULL_PX, height: 1200, url: photoUrl(photo.id), thumbUrl: photoUrl(photo.id, true), waterTestId: null, eventId: null });
+    expect(photo).toMatchObject({
+      caption: 'Day one',
+      width: PHOTO_FULL_PX,
+      height: 1200,
+      url: photoUrl(photo.id),
+      thumbUrl: photoUrl(photo.id, true),
+      waterTestId: null,
+      eventId: null,
+    });
     const row = await t.dataSource.getRepository(Photo).findOneByOrFail({ id: photo.id });
     expect(row.originalType).toBe('image/jpeg');
     expect(files()).toEqual([`${row.storageKey}.thumb.webp`, `${row.storageKey}.webp`]);
@@ -55,15 +66,25 @@ describe('photos', () => {
   });
 
   it('when a PNG is named .jpg and declared as a JPEG, then the bytes decide: it is accepted as a PNG and stored as WebP', async () => {
-    const res = await p.asKeeper.upload(upload, [{ data: await png(), name: 'holiday.jpg', type: 'image/jpeg' }]);
+    const res = await p.asKeeper.upload(upload, [
+      { data: await png(), name: 'holiday.jpg', type: 'image/jpeg' },
+    ]);
     expect(res.status).toBe(201);
     const row = await t.dataSource.getRepository(Photo).findOneByOrFail({ id: res.body.photos[0].id });
     expect(row.originalType).toBe('image/png');
-    expect((await sharp((await p.asKeeper.get(photoUrl(row.id))).body as Buffer).metadata()).format).toBe('webp');
+    expect((await sharp((await p.asKeeper.get(photoUrl(row.id))).body as Buffer).metadata()).format).toBe(
+      'webp',
+    );
   });
 
   it('when a text file is named .png, then 400 says it is not a picture and nothing is stored', async () => {
-    const res = await p.asKeeper.upload(upload, [{ data: Buffer.from('just some notes about the tank\n'.repeat(20)), name: 'notes.png', type: 'image/png' }]);
+    const res = await p.asKeeper.upload(upload, [
+      {
+        data: Buffer.from('just some notes about the tank\n'.repeat(20)),
+        name: 'notes.png',
+        type: 'image/png',
+      },
+    ]);
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe('"notes.png" is not a JPEG, PNG or WebP picture.');
     expect(res.body.issues).toEqual([{ path: 'photos.0', message: 'Choose a JPEG, PNG or WebP picture.' }]);
@@ -73,7 +94,9 @@ describe('photos', () => {
 
   it('when a file starts like a JPEG but is damaged, then 400 says it could not be read', async () => {
     const jpeg = await jpegWithExif();
-    const res = await p.asKeeper.upload(upload, [{ data: Buffer.concat([jpeg.subarray(0, 400), Buffer.alloc(2000, 7)]), name: 'broken.jpg' }]);
+    const res = await p.asKeeper.upload(upload, [
+      { data: Buffer.concat([jpeg.subarray(0, 400), Buffer.alloc(2000, 7)]), name: 'broken.jpg' },
+    ]);
     expect(res.status).toBe(400);
     expect(res.body.error.message).toBe('"broken.jpg" could not be read as a picture: it may be damaged.');
     expect(files()).toEqual([]);
@@ -83,7 +106,10 @@ describe('photos', () => {
     const big = Buffer.concat([await png(), Buffer.alloc(PHOTO_MAX_BYTES)]);
     const res = await p.asKeeper.upload(upload, [{ data: big, name: 'huge.png', type: 'image/png' }]);
     expect(res.status).toBe(413);
-    expect(res.body.error).toEqual({ code: 'too_large', message: 'A photo is larger than 10 MB. Choose a smaller one.' });
+    expect(res.body.error).toEqual({
+      code: 'too_large',
+      message: 'A photo is larger than 10 MB. Choose a smaller one.',
+    });
     expect(await t.dataSource.getRepository(Photo).count()).toBe(0);
     expect(files()).toEqual([]);
   });
@@ -95,24 +121,48 @@ describe('photos', () => {
     expect(none.status).toBe(400);
     expect(none.body.error.message).toBe('Attach at least one photo.');
     const { default: request } = await import('supertest');
-    const noToken = await request(t.app).post(upload).set('Cookie', p.asKeeper.cookies).attach('photos', one.data, 'a.png');
+    const noToken = await request(t.app)
+      .post(upload)
+      .set('Cookie', p.asKeeper.cookies)
+      .attach('photos', one.data, 'a.png');
     expect(noToken.status).toBe(403);
     expect(await t.dataSource.getRepository(Photo).count()).toBe(0);
   });
 
   it('when a photo is attached to a test of another tank, then 400 and the files already written are removed', async () => {
-    const other = await makeTankVia(p.asKeeper, p.club.id, { name: 'Second tank', systemType: 'coldwater', volume: { source: 'entered', value: 90 } });
-    const test = await p.asKeeper.post(`/api/clubs/${p.club.id}/tanks/${other.id}/water-tests`, { takenAt: new Date().toISOString(), entries: { pH: { value: 7.6 } } });
-    const res = await p.asKeeper.upload(upload, [{ data: await png(), name: 'a.png' }], { waterTestId: test.body.waterTest.id });
+    const other = await makeTankVia(p.asKeeper, p.club.id, {
+      name: 'Second tank',
+      systemType: 'coldwater',
+      volume: { source: 'entered', value: 90 },
+    });
+    const test = await p.asKeeper.post(`/api/clubs/${p.club.id}/tanks/${other.id}/water-tests`, {
+      takenAt: new Date().toISOString(),
+      entries: { pH: { value: 7.6 } },
+    });
+    const res = await p.asKeeper.upload(upload, [{ data: await png(), name: 'a.png' }], {
+      waterTestId: test.body.waterTest.id,
+    });
     expect(res.status).toBe(400);
-    expect(res.body.issues).toEqual([{ path: 'waterTestId', message: 'That water test is not on this tank.' }]);
+    expect(res.body.issues).toEqual([
+      { path: 'waterTestId', message: 'That water test is not on this tank.' },
+    ]);
     expect(files()).toEqual([]);
   });
 
   it('when photos belong to a water test, then the test shows them; deleting the test deletes their files', async () => {
-    const test = await p.asKeeper.post(`${tank}/water-tests`, { takenAt: new Date().toISOString(), entries: { nitrate: { value: 10, unit: 'mg/L NO3' } } });
+    const test = await p.asKeeper.post(`${tank}/water-tests`, {
+      takenAt: new Date().toISOString(),
+      entries: { nitrate: { value: 10, unit: 'mg/L NO3' } },
+    });
     const testId = test.body.waterTest.id as string;
-    const res = await p.asKeeper.upload(upload, [{ data: await png(), name: 'strip.png' }, { data: await jpegWithExif(), name: 'kit.jpg' }], { waterTestId: testId });
+    const res = await p.asKeeper.upload(
+      upload,
+      [
+        { data: await png(), name: 'strip.png' },
+        { data: await jpegWithExif(), name: 'kit.jpg' },
+      ],
+      { waterTestId: testId },
+    );
     expect(res.status).toBe(201);
     expect(res.body.photos.map((x: { waterTestId: string }) => x.waterTestId)).toEqual([testId, testId]);
     expect((await p.asMentor.get(`${tank}/water-tests/${testId}`)).body.waterTest.photos).toHaveLength(2);

@@ -1,5 +1,13 @@
 import { describe, expect, it } from 'vitest';
-import { TROPICAL_FRESHWATER_PROFILE, calendarDaysBetween, dueTests, groupDueByDay, localDate, toTestToday, type DueTest } from '@shared/care';
+import {
+  TROPICAL_FRESHWATER_PROFILE,
+  calendarDaysBetween,
+  dueTests,
+  groupDueByDay,
+  localDate,
+  toTestToday,
+  type DueTest,
+} from '@shared/care';
 
 /**
  * Offsets and daylight-saving dates are the IANA Time Zone Database's (Eggert, Olson et al., tzdata 2025b):
@@ -11,7 +19,11 @@ import { TROPICAL_FRESHWATER_PROFILE, calendarDaysBetween, dueTests, groupDueByD
  * Test cadences (ammonia and nitrite daily while cycling) are common practice, no source.
  */
 
-const row = (parameter: DueTest['parameter'], dueAt: string, lastTestedAt: string | null = null): DueTest => ({
+const row = (
+  parameter: DueTest['parameter'],
+  dueAt: string,
+  lastTestedAt: string | null = null,
+): DueTest => ({
   parameter,
   cadenceDays: 1,
   lastTestedAt,
@@ -73,14 +85,22 @@ describe('groupDueByDay', () => {
   it('in Los Angeles, behind UTC, a test due at noon local time is still today in the evening although UTC has moved on', () => {
     const now = '2026-01-16T06:00:00Z'; // Los Angeles: Thursday 15 January, 22:00 (UTC already says the 16th)
     const due = [row('ammonia', '2026-01-15T20:00:00Z')]; // Los Angeles 15 Jan 12:00
-    expect(params(groupDueByDay(due, { now, timeZone: 'America/Los_Angeles' }).dueToday)).toEqual(['ammonia']);
-    expect(groupDueByDay(due, { now, timeZone: 'UTC' }).overdue[0]).toMatchObject({ parameter: 'ammonia', daysLate: 1 });
+    expect(params(groupDueByDay(due, { now, timeZone: 'America/Los_Angeles' }).dueToday)).toEqual([
+      'ammonia',
+    ]);
+    expect(groupDueByDay(due, { now, timeZone: 'UTC' }).overdue[0]).toMatchObject({
+      parameter: 'ammonia',
+      daysLate: 1,
+    });
   });
 
   it('counts calendar days, not 24-hour blocks, across the spring daylight-saving change', () => {
     // Due 07:30 UTC on 8 March 2026 = 23:30 PST on the 7th (the clocks go forward at 10:00 UTC that day).
     // 24 hours later it is 00:30 PDT on the 9th: two local dates later, so two days late.
-    const grouped = groupDueByDay([row('pH', '2026-03-08T07:30:00Z')], { now: '2026-03-09T07:30:00Z', timeZone: 'America/Los_Angeles' });
+    const grouped = groupDueByDay([row('pH', '2026-03-08T07:30:00Z')], {
+      now: '2026-03-09T07:30:00Z',
+      timeZone: 'America/Los_Angeles',
+    });
     expect(grouped.overdue[0]).toMatchObject({ dueDay: '2026-03-07', daysLate: 2 });
   });
 
@@ -107,8 +127,19 @@ describe('groupDueByDay', () => {
     // (the profile's cadences: common practice, no source). Tested at 19:00 yesterday in Kolkata.
     const tested = '2026-01-14T13:30:00Z';
     const rows = dueTests(
-      { phase: 'cycling', systemType: 'tropical-freshwater', profile: TROPICAL_FRESHWATER_PROFILE, createdAt: '2026-01-01T00:00:00Z' },
-      [{ id: 't1', takenAt: tested, values: { ammonia: 2, nitrite: 0.5, nitrate: 5, pH: 7.4, temperature: 26 } }],
+      {
+        phase: 'cycling',
+        systemType: 'tropical-freshwater',
+        profile: TROPICAL_FRESHWATER_PROFILE,
+        createdAt: '2026-01-01T00:00:00Z',
+      },
+      [
+        {
+          id: 't1',
+          takenAt: tested,
+          values: { ammonia: 2, nitrite: 0.5, nitrate: 5, pH: 7.4, temperature: 26 },
+        },
+      ],
       '2026-01-15T03:30:00Z', // 09:00 in Kolkata: ammonia and nitrite come due at 19:00 tonight
     );
     const g = groupDueByDay(rows, { now: '2026-01-15T03:30:00Z', timeZone: 'Asia/Kolkata' });

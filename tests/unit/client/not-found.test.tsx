@@ -7,7 +7,9 @@ describe('not-found page', () => {
   it('when a route is unknown, then it names the address and offers the tanks, the questions and home', async () => {
     const router = createMemoryRouter([{ path: '*', element: <NotFound /> }], { initialEntries: ['/tankz'] });
     render(<RouterProvider router={router} />);
-    expect(await screen.findByRole('heading', { name: 'There is nothing at this address' })).toBeInTheDocument();
+    expect(
+      await screen.findByRole('heading', { name: 'There is nothing at this address' }),
+    ).toBeInTheDocument();
     expect(screen.getByText('/tankz')).toBeInTheDocument();
     expect(screen.getByRole('link', { name: 'Go to my tanks' })).toHaveAttribute('href', '/tanks');
     expect(screen.getByRole('link', { name: 'My questions' })).toHaveAttribute('href', '/questions');

@@ -16,8 +16,12 @@ const TANK = 'tank-1';
 const TESTS = `/api/clubs/${CLUB}/tanks/${TANK}/water-tests`;
 const PHOTOS = `/api/clubs/${CLUB}/tanks/${TANK}/photos`;
 
-const json = (status: number, body: unknown) => new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
-const saved = (values: Record<string, number>) => ({ waterTest: { id: 'test-1', takenAt: new Date().toISOString(), values }, warnings: [] });
+const json = (status: number, body: unknown) =>
+  new Response(JSON.stringify(body), { status, headers: { 'Content-Type': 'application/json' } });
+const saved = (values: Record<string, number>) => ({
+  waterTest: { id: 'test-1', takenAt: new Date().toISOString(), values },
+  warnings: [],
+});
 
 /** A stand-in server: answers the CSRF token, the test and the photo upload (failing the first `photoFailures` times). */
 function server({ photoFailures = 0 } = {}) {
@@ -28,7 +32,10 @@ function server({ photoFailures = 0 } = {}) {
     calls.push({ method, path, body: typeof init?.body === 'string' ? JSON.parse(init.body) : init?.body });
     if (path === '/api/csrf') return json(200, { token: 'token' });
     if (path.startsWith(TESTS)) return json(method === 'POST' ? 201 : 200, saved({ pH: 8.1 }));
-    if (path === PHOTOS) return failuresLeft-- > 0 ? json(503, { error: { code: 'unavailable', message: 'Try again.' } }) : json(201, { photos: [] });
+    if (path === PHOTOS)
+      return failuresLeft-- > 0
+        ? json(503, { error: { code: 'unavailable', message: 'Try again.' } })
+        : json(201, { photos: [] });
     return json(404, { error: { code: 'not_found', message: path } });
   });
   vi.stubGlobal('fetch', fetch);
@@ -38,7 +45,9 @@ function server({ photoFailures = 0 } = {}) {
 
 function setUp(editing?: WaterTestView) {
   const qc = new QueryClient({ defaultOptions: { queries: { retry: false, staleTime: Infinity } } });
-  const wrapper = ({ children }: { children: ReactNode }) => <QueryClientProvider client={qc}>{children}</QueryClientProvider>;
+  const wrapper = ({ children }: { children: ReactNode }) => (
+    <QueryClientProvider client={qc}>{children}</QueryClientProvider>
+  );
   const { result } = renderHook(() => useSaveWaterTest({ clubId: CLUB, tankId: TANK, editing }), { wrapper });
   const draft = newDraft(PREFS, {});
   draft.entries.pH.value = '8.1';
@@ -69,13 +78,22 @@ describe('saving a water test (useSaveWaterTest)', () => {
     const notice = await act(() => save()(input, [photo()], draft));
     expect(net.to('POST', TESTS)).toHaveLength(1);
     expect(net.to('POST', PHOTOS)).toHaveLength(2);
-    expect(notice).toEqual({ message: 'Test saved: 1 reading. It is on the charts.', toCharts: true, warnings: [] });
+    expect(notice).toEqual({
+      message: 'Test saved: 1 reading. It is on the charts.',
+      toCharts: true,
+      warnings: [],
+    });
   });
 
   it('when a test is saved, then the tank, its lists and its care are refetched, and its units are remembered', async () => {
     server();
     const { qc, save, draft, input } = setUp();
-    const keys = [tankKeys.detail(CLUB, TANK), tankKeys.testsSince(CLUB, TANK, null), tankKeys.list(CLUB, { mine: true, includeArchived: false }), careKeys.summary(TANK)];
+    const keys = [
+      tankKeys.detail(CLUB, TANK),
+      tankKeys.testsSince(CLUB, TANK, null),
+      tankKeys.list(CLUB, { mine: true, includeArchived: false }),
+      careKeys.summary(TANK),
+    ];
     for (const key of keys) qc.setQueryData(key, {});
     await act(() => save()(input, [], draft));
     expect(keys.map((key) => qc.getQueryState(key)?.isInvalidated)).toEqual([true, true, true, true]);
@@ -84,7 +102,10 @@ describe('saving a water test (useSaveWaterTest)', () => {
 
   it('when a test is changed, then the PATCH carries the form and removes the entries taken off it', async () => {
     const net = server();
-    const editing = { id: 'test-1', entries: { pH: { value: 8, unit: 'pH' }, nitrate: { value: 10, unit: 'mg/L NO3' } } } as unknown as WaterTestView;
+    const editing = {
+      id: 'test-1',
+      entries: { pH: { value: 8, unit: 'pH' }, nitrate: { value: 10, unit: 'mg/L NO3' } },
+    } as unknown as WaterTestView;
     const { save, draft, input } = setUp(editing);
     await act(() => save()(input, [], draft));
     expect(net.to('POST', TESTS)).toHaveLength(0);

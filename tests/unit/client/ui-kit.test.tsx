@@ -29,8 +29,12 @@ describe('the UI kit', () => {
     const toast = useToast();
     return (
       <>
-        <button type="button" onClick={() => toast.success('Test saved.')}>Save</button>
-        <button type="button" onClick={() => toast.error('Could not save.')}>Fail</button>
+        <button type="button" onClick={() => toast.success('Test saved.')}>
+          Save
+        </button>
+        <button type="button" onClick={() => toast.error('Could not save.')}>
+          Fail
+        </button>
       </>
     );
   }

@@ -12,6 +12,11 @@ describe('README', () => {
 
   it('when someone reads it, then it shows exactly the two set-up commands', () => {
     const block = readme.split('## Two commands')[1]!.split('```')[1]!;
-    expect(block.trim().split('\n').map((l) => l.split('#')[0]!.trim())).toEqual(['sh', './scripts/start', './scripts/test']);
+    expect(
+      block
+        .trim()
+        .split('\n')
+        .map((l) => l.split('#')[0]!.trim()),
+    ).toEqual(['sh', './scripts/start', './scripts/test']);
   });
 });

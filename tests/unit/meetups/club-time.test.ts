@@ -1,6 +1,11 @@
 import { describe, expect, it } from 'vitest';
 import { clinicSlots } from '../../../shared/meetups/clinic-slots';
-import { clubTimeToUtc, describeClubTime, isRealLocalDateTime, utcToClubTime } from '../../../shared/meetups/club-time';
+import {
+  clubTimeToUtc,
+  describeClubTime,
+  isRealLocalDateTime,
+  utcToClubTime,
+} from '../../../shared/meetups/club-time';
 import { lastSundayOfMarch, thursdaysAroundSpringChange } from '../../helpers/dst-dates';
 
 describe('meetup times in the club’s time zone', () => {
@@ -17,14 +22,24 @@ describe('meetup times in the club’s time zone', () => {
       const start = clubTimeToUtc(`${day}T19:00`, 'Europe/London');
       expect(utcToClubTime(start, 'Europe/London')).toBe(`${day}T19:00`);
     }
-    const spring = describeClubTime(clubTimeToUtc(`${after}T19:00`, 'Europe/London'), clubTimeToUtc(`${after}T21:00`, 'Europe/London'), 'Europe/London');
+    const spring = describeClubTime(
+      clubTimeToUtc(`${after}T19:00`, 'Europe/London'),
+      clubTimeToUtc(`${after}T21:00`, 'Europe/London'),
+      'Europe/London',
+    );
     expect(spring).toBe('Thursday, 1 April 2027, 19:00–21:00 (BST)');
-    const winter = describeClubTime(clubTimeToUtc(`${before}T19:00`, 'Europe/London'), clubTimeToUtc(`${before}T21:00`, 'Europe/London'), 'Europe/London');
+    const winter = describeClubTime(
+      clubTimeToUtc(`${before}T19:00`, 'Europe/London'),
+      clubTimeToUtc(`${before}T21:00`, 'Europe/London'),
+      'Europe/London',
+    );
     expect(winter).toBe('Thursday, 25 March 2027, 19:00–21:00 (GMT)');
   });
 
   it('when the zone is far from UTC, then the wall time still round-trips (Pacific/Auckland, NZDT UTC+13 in January, from memory)', () => {
-    expect(clubTimeToUtc('2027-01-14T19:00', 'Pacific/Auckland').toISOString()).toBe('2027-01-14T06:00:00.000Z');
+    expect(clubTimeToUtc('2027-01-14T19:00', 'Pacific/Auckland').toISOString()).toBe(
+      '2027-01-14T06:00:00.000Z',
+    );
     expect(utcToClubTime('2027-01-14T06:00:00Z', 'Pacific/Auckland')).toBe('2027-01-14T19:00');
   });
 
@@ -37,6 +52,8 @@ describe('meetup times in the club’s time zone', () => {
 
   it('when a clinic runs 19:00–20:10 in 15-minute slots, then only whole slots are offered', () => {
     const start = '2027-04-01T18:00:00.000Z';
-    expect(clinicSlots(start, '2027-04-01T19:10:00.000Z', 15)).toEqual(['18:00', '18:15', '18:30', '18:45'].map((t) => `2027-04-01T${t}:00.000Z`));
+    expect(clinicSlots(start, '2027-04-01T19:10:00.000Z', 15)).toEqual(
+      ['18:00', '18:15', '18:30', '18:45'].map((t) => `2027-04-01T${t}:00.000Z`),
+    );
   });
 });

@@ -10,7 +10,10 @@ const people = [
 
 describe('mentions', () => {
   it('when a message names people with @, then each is found once, the longer name winning', () => {
-    expect(mentionedIn('@Ana Lee, what do you think? cc @milo mentor.', people).sort()).toEqual(['ana-lee', 'milo']);
+    expect(mentionedIn('@Ana Lee, what do you think? cc @milo mentor.', people).sort()).toEqual([
+      'ana-lee',
+      'milo',
+    ]);
     expect(mentionedIn('@Ana and @Ana Lee', people).sort()).toEqual(['ana', 'ana-lee']);
     expect(mentionedIn('email ana@club.example or @Anastasia', people)).toEqual([]);
   });

@@ -6,24 +6,46 @@ import { guessTarget, guessUnit, parameterHeader } from '@shared/readings/csv-co
 import { detectDateFormat, parseDateCell, wallTimeToUtc } from '@shared/readings/csv-dates';
 import { csvImportSchema } from '@shared/schemas/csv-import.schema';
 
-const ctx: AnalyzeContext = { systemType: 'tropical-freshwater', now: '2025-12-31T00:00:00.000Z', timeZone: 'UTC', existingTakenAt: new Set() };
-const analyze = (csv: string, extra: Record<string, unknown> = {}) => analyzeCsv(csvImportSchema.parse({ csv, ...extra }), ctx);
+const ctx: AnalyzeContext = {
+  systemType: 'tropical-freshwater',
+  now: '2025-12-31T00:00:00.000Z',
+  timeZone: 'UTC',
+  existingTakenAt: new Set(),
+};
+const analyze = (csv: string, extra: Record<string, unknown> = {}) =>
+  analyzeCsv(csvImportSchema.parse({ csv, ...extra }), ctx);
 
 describe('reading dates from a spreadsheet', () => {
   it('when dates are ISO or day-first or month-first, then each is read in the time zone given', () => {
-    expect(parseDateCell('2025-03-04 18:30', undefined, 'iso', 'UTC')).toEqual({ iso: '2025-03-04T18:30:00.000Z' });
-    expect(parseDateCell('2025-03-04T18:30:00+02:00', undefined, 'iso', 'America/New_York')).toEqual({ iso: '2025-03-04T16:30:00.000Z' });
-    expect(parseDateCell('04/03/2025 6:30 pm', undefined, 'dmy', 'UTC')).toEqual({ iso: '2025-03-04T18:30:00.000Z' });
+    expect(parseDateCell('2025-03-04 18:30', undefined, 'iso', 'UTC')).toEqual({
+      iso: '2025-03-04T18:30:00.000Z',
+    });
+    expect(parseDateCell('2025-03-04T18:30:00+02:00', undefined, 'iso', 'America/New_York')).toEqual({
+      iso: '2025-03-04T16:30:00.000Z',
+    });
+    expect(parseDateCell('04/03/2025 6:30 pm', undefined, 'dmy', 'UTC')).toEqual({
+      iso: '2025-03-04T18:30:00.000Z',
+    });
     expect(parseDateCell('03/04/2025', '18:30', 'mdy', 'UTC')).toEqual({ iso: '2025-03-04T18:30:00.000Z' });
-    expect(parseDateCell('2025-07-01 09:00', undefined, 'iso', 'Europe/Berlin')).toEqual({ iso: '2025-07-01T07:00:00.000Z' });
-    expect(parseDateCell('2025-01-01 09:00', undefined, 'iso', 'Europe/Berlin')).toEqual({ iso: '2025-01-01T08:00:00.000Z' });
+    expect(parseDateCell('2025-07-01 09:00', undefined, 'iso', 'Europe/Berlin')).toEqual({
+      iso: '2025-07-01T07:00:00.000Z',
+    });
+    expect(parseDateCell('2025-01-01 09:00', undefined, 'iso', 'Europe/Berlin')).toEqual({
+      iso: '2025-01-01T08:00:00.000Z',
+    });
     expect(parseDateCell('2025-03-04', undefined, 'iso', 'UTC')).toEqual({ iso: '2025-03-04T12:00:00.000Z' });
   });
 
   it('when a date does not exist, then the error says so', () => {
-    expect(parseDateCell('31/02/2025', undefined, 'dmy', 'UTC')).toEqual({ error: '"31/02/2025" is not a real date.' });
-    expect(parseDateCell('2025-03-04 25:10', undefined, 'iso', 'UTC')).toEqual({ error: '"2025-03-04 25:10" has an impossible time.' });
-    expect(parseDateCell('yesterday', undefined, 'iso', 'UTC')).toEqual({ error: '"yesterday" is not a date in the form 2025-03-04 18:30.' });
+    expect(parseDateCell('31/02/2025', undefined, 'dmy', 'UTC')).toEqual({
+      error: '"31/02/2025" is not a real date.',
+    });
+    expect(parseDateCell('2025-03-04 25:10', undefined, 'iso', 'UTC')).toEqual({
+      error: '"2025-03-04 25:10" has an impossible time.',
+    });
+    expect(parseDateCell('yesterday', undefined, 'iso', 'UTC')).toEqual({
+      error: '"yesterday" is not a date in the form 2025-03-04 18:30.',
+    });
   });
 
   it('when detecting the format, then a day above 12 decides; none is ambiguous; both is mixed', () => {
@@ -36,9 +58,15 @@ describe('reading dates from a spreadsheet', () => {
 
   it('when the wall time is skipped or repeated by a DST change, then the later instant is used', () => {
     // Lisbon jumps from 01:00 to 02:00 on 30 March 2025 and falls back from 02:00 to 01:00 on 26 October.
-    expect(new Date(wallTimeToUtc(Date.UTC(2025, 2, 30, 1, 30), 'Europe/Lisbon')).toISOString()).toBe('2025-03-30T01:30:00.000Z');
-    expect(new Date(wallTimeToUtc(Date.UTC(2025, 9, 26, 1, 30), 'Europe/Lisbon')).toISOString()).toBe('2025-10-26T01:30:00.000Z');
-    expect(new Date(wallTimeToUtc(Date.UTC(2025, 9, 26, 0, 30), 'Europe/Lisbon')).toISOString()).toBe('2025-10-25T23:30:00.000Z');
+    expect(new Date(wallTimeToUtc(Date.UTC(2025, 2, 30, 1, 30), 'Europe/Lisbon')).toISOString()).toBe(
+      '2025-03-30T01:30:00.000Z',
+    );
+    expect(new Date(wallTimeToUtc(Date.UTC(2025, 9, 26, 1, 30), 'Europe/Lisbon')).toISOString()).toBe(
+      '2025-10-26T01:30:00.000Z',
+    );
+    expect(new Date(wallTimeToUtc(Date.UTC(2025, 9, 26, 0, 30), 'Europe/Lisbon')).toISOString()).toBe(
+      '2025-10-25T23:30:00.000Z',
+    );
   });
 });
 
@@ -68,7 +96,12 @@ describe('reading columns from a spreadsheet', () => {
   it('when a semicolon file uses decimal commas and repeats a header, then numbers read and columns get distinct names', () => {
     const { preview } = analyze('Date;pH;pH;Tank colour\n2025-01-01 08:00;7,4;7,5;green\n');
     expect(preview.columns).toEqual(['Date', 'pH', 'pH (2)', 'Tank colour']);
-    expect(preview.mapping).toEqual({ Date: 'takenAt', pH: 'pH', 'pH (2)': 'ignore', 'Tank colour': 'ignore' });
+    expect(preview.mapping).toEqual({
+      Date: 'takenAt',
+      pH: 'pH',
+      'pH (2)': 'ignore',
+      'Tank colour': 'ignore',
+    });
     expect(preview.sample[0]!.values).toEqual({ pH: 7.4 });
   });
 

@@ -14,22 +14,35 @@ describe('loadConfig', () => {
 
   it('when nothing is set, then it serves 127.0.0.1:3000 with a base URL to match', () => {
     const c = loadConfig({});
-    expect(c).toMatchObject({ host: '127.0.0.1', port: 3000, baseUrl: 'http://127.0.0.1:3000', isProduction: false });
+    expect(c).toMatchObject({
+      host: '127.0.0.1',
+      port: 3000,
+      baseUrl: 'http://127.0.0.1:3000',
+      isProduction: false,
+    });
   });
 
   it('when UPLOADS_DIR is not set, then photos go to .data/uploads as an absolute path; inside the served client it refuses to start', () => {
     expect(loadConfig({}).uploadsDir).toBe(resolve('.data/uploads'));
     expect(() => loadConfig({ UPLOADS_DIR: 'dist/client/uploads' })).toThrow(/UPLOADS_DIR must be outside/);
     expect(() => loadConfig({ UPLOADS_DIR: 'public' })).toThrow(/UPLOADS_DIR/);
-    expect(loadConfig({ UPLOADS_DIR: '/var/lib/shoalwise/photos' }).uploadsDir).toBe('/var/lib/shoalwise/photos');
+    expect(loadConfig({ UPLOADS_DIR: '/var/lib/shoalwise/photos' }).uploadsDir).toBe(
+      '/var/lib/shoalwise/photos',
+    );
   });
 
   it('when production lacks a session secret, then it refuses to start', () => {
-    expect(() => loadConfig({ NODE_ENV: 'production', PUBLIC_BASE_URL: 'https://club.example' })).toThrow(/SESSION_SECRET/);
+    expect(() => loadConfig({ NODE_ENV: 'production', PUBLIC_BASE_URL: 'https://club.example' })).toThrow(
+      /SESSION_SECRET/,
+    );
   });
 
   it('when production does not say which proxies to trust, then it refuses to start, naming TRUST_PROXY', () => {
-    const prod = { NODE_ENV: 'production', PUBLIC_BASE_URL: 'https://club.example', SESSION_SECRET: 's'.repeat(32) };
+    const prod = {
+      NODE_ENV: 'production',
+      PUBLIC_BASE_URL: 'https://club.example',
+      SESSION_SECRET: 's'.repeat(32),
+    };
     expect(() => loadConfig(prod)).toThrow(/TRUST_PROXY is required/);
     expect(loadConfig({ ...prod, TRUST_PROXY: 'none' }).trustProxy).toBe(false);
   });
@@ -37,7 +50,12 @@ describe('loadConfig', () => {
   it('when TRUST_PROXY names hops or proxies, then Express gets them; "true" (believe anyone) and junk are refused', () => {
     expect(loadConfig({}).trustProxy).toBe(false);
     expect(loadConfig({ TRUST_PROXY: '1' }).trustProxy).toBe(1);
-    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8, fd00::/8, 192.0.2.7' }).trustProxy).toEqual(['loopback', '10.0.0.0/8', 'fd00::/8', '192.0.2.7']);
+    expect(loadConfig({ TRUST_PROXY: 'loopback, 10.0.0.0/8, fd00::/8, 192.0.2.7' }).trustProxy).toEqual([
+      'loopback',
+      '10.0.0.0/8',
+      'fd00::/8',
+      '192.0.2.7',
+    ]);
     for (const bad of ['true', '0', '11', '10.0.0.0/33', 'proxy.example', 'loopback,,nonsense']) {
       expect(() => loadConfig({ TRUST_PROXY: bad }), bad).toThrow(/TRUST_PROXY/);
     }

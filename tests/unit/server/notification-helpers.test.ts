@@ -1,6 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { localDayAndHour } from '@server/modules/notifications/local-day';
-import { signUnsubscribeToken, unsubscribeUrl, verifyUnsubscribeToken } from '@server/modules/notifications/unsubscribe-token';
+import {
+  signUnsubscribeToken,
+  unsubscribeUrl,
+  verifyUnsubscribeToken,
+} from '@server/modules/notifications/unsubscribe-token';
 
 const SECRET = 'a-test-secret-that-is-long-enough-0123456789';
 const USER = '0b5a3c1e-8d2f-4a6b-9c7d-1e2f3a4b5c6d';
@@ -15,15 +19,23 @@ describe('unsubscribe tokens', () => {
   it('when a well-signed payload names an unknown scope or a non-id, then it is refused', () => {
     // Sign arbitrary payloads the way the module does, to prove the checks after the signature matter.
     for (const payload of [`${USER}:everything`, `not-a-uuid:all`, `${USER}`]) {
-      const forged = signUnsubscribeToken(SECRET, { userId: payload.split(':')[0]!, scope: (payload.split(':')[1] ?? '') as 'all' });
+      const forged = signUnsubscribeToken(SECRET, {
+        userId: payload.split(':')[0]!,
+        scope: (payload.split(':')[1] ?? '') as 'all',
+      });
       expect(verifyUnsubscribeToken(SECRET, forged), payload).toBeNull();
     }
   });
 
   it('when put in a URL, then it survives encoding', () => {
-    const url = new URL(unsubscribeUrl('https://club.example', SECRET, { userId: USER, scope: 'concern.urgent' }));
+    const url = new URL(
+      unsubscribeUrl('https://club.example', SECRET, { userId: USER, scope: 'concern.urgent' }),
+    );
     expect(url.pathname).toBe('/api/unsubscribe');
-    expect(verifyUnsubscribeToken(SECRET, url.searchParams.get('token')!)).toEqual({ userId: USER, scope: 'concern.urgent' });
+    expect(verifyUnsubscribeToken(SECRET, url.searchParams.get('token')!)).toEqual({
+      userId: USER,
+      scope: 'concern.urgent',
+    });
   });
 });
 

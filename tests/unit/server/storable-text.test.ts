@@ -4,12 +4,19 @@ import { rejectUnstorableText, unstorableTextPaths } from '../../../server/middl
 
 describe('text PostgreSQL cannot store', () => {
   it('when a value or a key holds NUL or an unpaired surrogate, then its path is named', () => {
-    const body = { note: 'fine', entries: { pH: { note: 'a\u0000b' } }, list: ['ok', '\uD800'], ['k\u0000']: 1 };
+    const body = {
+      note: 'fine',
+      entries: { pH: { note: 'a\u0000b' } },
+      list: ['ok', '\uD800'],
+      ['k\u0000']: 1,
+    };
     expect(unstorableTextPaths(body, '').sort()).toEqual(['(root)', 'entries.pH.note', 'list.1']);
   });
 
   it('when the text is unusual but well-formed (emoji, combining marks, right-to-left marks), then nothing is named', () => {
-    expect(unstorableTextPaths({ name: '🐠 e\u0301 \u202E Ω', details: { 'ключ': 'значение' } }, '')).toEqual([]);
+    expect(unstorableTextPaths({ name: '🐠 e\u0301 \u202E Ω', details: { ключ: 'значение' } }, '')).toEqual(
+      [],
+    );
   });
 
   it('when a body is nested 100,000 levels deep, then it is walked without overflowing the stack', () => {
@@ -21,10 +28,17 @@ describe('text PostgreSQL cannot store', () => {
   it('when a path segment decodes to NUL, then the request is refused naming the params; a malformed escape is left to the router', () => {
     const outcome = (path: string) => {
       let passed: unknown = 'not called';
-      rejectUnstorableText()({ path, body: undefined, query: {} } as unknown as Request, { locals: {} } as never, (err?: unknown) => (passed = err));
+      rejectUnstorableText()(
+        { path, body: undefined, query: {} } as unknown as Request,
+        { locals: {} } as never,
+        (err?: unknown) => (passed = err),
+      );
       return passed as { status?: number; issues?: { path: string }[] } | undefined;
     };
-    expect(outcome('/clubs/x/care-profiles/%00')).toMatchObject({ status: 400, issues: [{ path: 'params' }] });
+    expect(outcome('/clubs/x/care-profiles/%00')).toMatchObject({
+      status: 400,
+      issues: [{ path: 'params' }],
+    });
     expect(outcome('/clubs/x/care-profiles/%E0%A4%A')).toBeUndefined();
     expect(outcome('/clubs/x/care-profiles/reef%20tank')).toBeUndefined();
   });
@@ -32,10 +46,16 @@ describe('text PostgreSQL cannot store', () => {
   it('when a route checks a field itself, then the guard leaves that field to it and still checks the others', () => {
     const outcome = (body: unknown) => {
       let passed: unknown = 'not called';
-      rejectUnstorableText({ ownRules: ['csv'] })({ path: '/x', body, query: {} } as unknown as Request, { locals: {} } as never, (err?: unknown) => (passed = err));
+      rejectUnstorableText({ ownRules: ['csv'] })(
+        { path: '/x', body, query: {} } as unknown as Request,
+        { locals: {} } as never,
+        (err?: unknown) => (passed = err),
+      );
       return passed as { issues?: { path: string }[] } | undefined;
     };
     expect(outcome({ csv: 'date,pH\u0000\n' })).toBeUndefined();
-    expect(outcome({ csv: 'date,pH\n', timeZone: 'a\u0000' })).toMatchObject({ issues: [{ path: 'timeZone' }] });
+    expect(outcome({ csv: 'date,pH\n', timeZone: 'a\u0000' })).toMatchObject({
+      issues: [{ path: 'timeZone' }],
+    });
   });
 });

@@ -2,7 +2,8 @@ import { describe, expect, it } from 'vitest';
 import { niceTicks, seriesOf, yDomain } from '@client/lib/chart-data';
 import type { WaterTestView } from '@shared/schemas/tank-views';
 
-const test = (takenAt: string, values: WaterTestView['values']) => ({ id: takenAt, takenAt, values, freeAmmonia: null }) as WaterTestView;
+const test = (takenAt: string, values: WaterTestView['values']) =>
+  ({ id: takenAt, takenAt, values, freeAmmonia: null }) as WaterTestView;
 
 describe('chart data', () => {
   it('when an axis spans an awkward range, then its ticks are round steps that cover it', () => {
@@ -15,8 +16,15 @@ describe('chart data', () => {
     expect(yDomain([8.1, 8.1])).toEqual([8.1 - 8.1 * 0.05, 8.1 + 8.1 * 0.05]);
   });
 
-  it('when tests come newest first, then a series is oldest first in the member\'s units', () => {
-    const points = seriesOf([test('2025-03-02T10:00:00Z', { temperature: 25 }), test('2025-03-01T10:00:00Z', { temperature: 20, pH: 8 })], 'temperature', { temperatureUnit: 'F', volumeUnit: 'L', salinityDisplay: 'ppt' });
+  it("when tests come newest first, then a series is oldest first in the member's units", () => {
+    const points = seriesOf(
+      [
+        test('2025-03-02T10:00:00Z', { temperature: 25 }),
+        test('2025-03-01T10:00:00Z', { temperature: 20, pH: 8 }),
+      ],
+      'temperature',
+      { temperatureUnit: 'F', volumeUnit: 'L', salinityDisplay: 'ppt' },
+    );
     expect(points.map((p) => p.v)).toEqual([68, 77]);
   });
 });

@@ -33,7 +33,7 @@ describe('display units', () => {
     expect(formatDisplay('salinity', 35, METRIC)).toBe('35 ppt');
   });
 
-  it("when a profile band is shown to a °F keeper, then both ends are converted", () => {
+  it('when a profile band is shown to a °F keeper, then both ends are converted', () => {
     const band = TROPICAL_FRESHWATER_PROFILE.ranges.temperature!.ideal;
     const [lo, hi] = band.map((c) => String(Number(convert(c, '°C', '°F').toFixed(1))));
     expect(bandText('temperature', band, US)).toBe(`${lo}–${hi} °F`);
@@ -42,10 +42,27 @@ describe('display units', () => {
 
   it('when a US keeper works the volume out from inches, then the live preview shows gross and net US gallons with litres beside', async () => {
     const qc = new QueryClient();
-    qc.setQueryData(profileKeys.all('club-1'), { profiles: [{ key: 'tropical-freshwater', name: 'Tropical freshwater', version: 1, systemTypes: ['tropical-freshwater'], animals: 'fish', source: 'built-in' }] });
+    qc.setQueryData(profileKeys.all('club-1'), {
+      profiles: [
+        {
+          key: 'tropical-freshwater',
+          name: 'Tropical freshwater',
+          version: 1,
+          systemTypes: ['tropical-freshwater'],
+          animals: 'fish',
+          source: 'built-in',
+        },
+      ],
+    });
     render(
       <QueryClientProvider client={qc}>
-        <TankForm clubId="club-1" prefs={US} initial={newTankDraft(US, 'tropical-freshwater', 'tropical-freshwater')} submitLabel="Add" onSaved={() => {}} />
+        <TankForm
+          clubId="club-1"
+          prefs={US}
+          initial={newTankDraft(US, 'tropical-freshwater', 'tropical-freshwater')}
+          submitLabel="Add"
+          onSaved={() => {}}
+        />
       </QueryClientProvider>,
     );
     const user = userEvent.setup();
@@ -57,6 +74,8 @@ describe('display units', () => {
     await user.type(screen.getByLabelText('Height, in'), '16');
     await user.type(screen.getByLabelText('Taken up by rock and sand, %'), '10');
     // 36 × 12 × 16 in = 6912 in³ = 29.9 US gal (113.3 L, shown whole above 100); 10 % rock and sand leaves 26.9 US gal.
-    expect(screen.getByText(/Full to the brim/)).toHaveTextContent('Full to the brim: 29.9 US gal (113 L). Water it holds: about 26.9 US gal (102 L).');
+    expect(screen.getByText(/Full to the brim/)).toHaveTextContent(
+      'Full to the brim: 29.9 US gal (113 L). Water it holds: about 26.9 US gal (102 L).',
+    );
   });
 });

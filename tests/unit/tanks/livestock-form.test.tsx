@@ -22,6 +22,13 @@ describe('adding animals', () => {
     await user.type(screen.getByLabelText('How many'), '2');
     await user.type(screen.getByLabelText('Where they came from'), 'Club breeder, captive-bred');
     await user.click(screen.getByRole('button', { name: 'Add to the tank' }));
-    expect(onSave).toHaveBeenCalledWith(expect.objectContaining({ speciesCommonName: 'Lined seahorse', count: 2, source: 'Club breeder, captive-bred', quarantineNotes: '' }));
+    expect(onSave).toHaveBeenCalledWith(
+      expect.objectContaining({
+        speciesCommonName: 'Lined seahorse',
+        count: 2,
+        source: 'Club breeder, captive-bred',
+        quarantineNotes: '',
+      }),
+    );
   });
 });

@@ -5,7 +5,10 @@ import type { useSaveWaterTest } from '@client/features/readings/api/water-tests
 import { formatNumber } from '@shared/care/parameters';
 import { REEF_PROFILE, TROPICAL_FRESHWATER_PROFILE } from '@shared/care/profiles';
 import { normalizeWaterTest } from '@shared/readings/normalize-water-test';
-import { WaterTestForm, type WaterTestFormProps } from '@client/features/readings/components/water-test/water-test-form';
+import {
+  WaterTestForm,
+  type WaterTestFormProps,
+} from '@client/features/readings/components/water-test/water-test-form';
 import type { UnitPrefs } from '@client/lib/display-units';
 import { newDraft } from '@client/features/readings/lib/water-test-draft';
 import { ApiError } from '@client/lib/api-client';
@@ -23,7 +26,14 @@ function renderForm(over: Partial<WaterTestFormProps> & { prefs?: UnitPrefs } = 
   save.onSave = onSave;
   const props: WaterTestFormProps = {
     clubId: 'club-1',
-    tank: { id: 'tank-1', systemType: 'reef', careProfileKey: 'reef', phase: 'established', volumeL: 200, hasLivestock: true },
+    tank: {
+      id: 'tank-1',
+      systemType: 'reef',
+      careProfileKey: 'reef',
+      phase: 'established',
+      volumeL: 200,
+      hasLivestock: true,
+    },
     lastKnown: {},
     profile: REEF_PROFILE,
     prefs,
@@ -37,7 +47,8 @@ function renderForm(over: Partial<WaterTestFormProps> & { prefs?: UnitPrefs } = 
 }
 
 /** The parameter's block of the form (its fieldset). */
-const block = (parameter: string) => document.querySelector<HTMLElement>(`fieldset[data-parameter="${parameter}"]`)!;
+const block = (parameter: string) =>
+  document.querySelector<HTMLElement>(`fieldset[data-parameter="${parameter}"]`)!;
 
 describe('water-test form', () => {
   afterEach(cleanup);
@@ -54,7 +65,10 @@ describe('water-test form', () => {
     const stored = normalizeWaterTest(
       {
         takenAt: new Date().toISOString(),
-        entries: { temperature: { value: 25, unit: '°C' }, salinity: { value: 1.0245, unit: 'SG', method: 'refractometer', referenceTempC: 25 } },
+        entries: {
+          temperature: { value: 25, unit: '°C' },
+          salinity: { value: 1.0245, unit: 'SG', method: 'refractometer', referenceTempC: 25 },
+        },
       },
       { systemType: 'reef', careProfileKey: 'reef', profile: REEF_PROFILE, now: new Date().toISOString() },
     ).values.salinity!;
@@ -67,7 +81,9 @@ describe('water-test form', () => {
   it('when pH 80 is typed, then the plausibility message shows at once and saving is blocked', async () => {
     const { user, onSave } = renderForm();
     await user.type(screen.getByLabelText('pH'), '80');
-    expect(within(block('pH')).getByRole('alert')).toHaveTextContent('pH 80 is not possible — did you mean 8.0?');
+    expect(within(block('pH')).getByRole('alert')).toHaveTextContent(
+      'pH 80 is not possible — did you mean 8.0?',
+    );
     expect(screen.getByText(/Fix the reading marked in red first/)).toBeInTheDocument();
     await user.click(screen.getByRole('button', { name: 'Save test' }));
     expect(onSave).not.toHaveBeenCalled();
@@ -84,7 +100,14 @@ describe('water-test form', () => {
     const prefs: UnitPrefs = { temperatureUnit: 'F', volumeUnit: 'USgal', salinityDisplay: 'ppt' };
     const { user, onSave } = renderForm({
       prefs,
-      tank: { id: 'tank-2', systemType: 'tropical-freshwater', careProfileKey: 'tropical-freshwater', phase: 'established', volumeL: 200, hasLivestock: true },
+      tank: {
+        id: 'tank-2',
+        systemType: 'tropical-freshwater',
+        careProfileKey: 'tropical-freshwater',
+        phase: 'established',
+        volumeL: 200,
+        hasLivestock: true,
+      },
       profile: TROPICAL_FRESHWATER_PROFILE,
       memory: { parameters: ['temperature'], entries: {} },
     });
@@ -107,11 +130,21 @@ describe('water-test form', () => {
 
   it('when the server refuses a reading with a 400, then its message sits under that field, the typed values stay and saving again retries', async () => {
     const { user, onSave } = renderForm();
-    onSave.mockRejectedValueOnce(new ApiError(400, 'bad_request', 'Some readings need attention.', [{ path: 'entries.salinity.value', message: 'Specific gravity 1.0245 with water at 40 °C is outside what fresh to very salty water reads.' }]));
+    onSave.mockRejectedValueOnce(
+      new ApiError(400, 'bad_request', 'Some readings need attention.', [
+        {
+          path: 'entries.salinity.value',
+          message:
+            'Specific gravity 1.0245 with water at 40 °C is outside what fresh to very salty water reads.',
+        },
+      ]),
+    );
     await user.type(screen.getByLabelText('Salinity'), '1.0245');
     await user.type(screen.getByLabelText('pH'), '8.2');
     await user.click(screen.getByRole('button', { name: 'Save test' }));
-    expect(await within(block('salinity')).findByRole('alert')).toHaveTextContent('Specific gravity 1.0245 with water at 40 °C');
+    expect(await within(block('salinity')).findByRole('alert')).toHaveTextContent(
+      'Specific gravity 1.0245 with water at 40 °C',
+    );
     expect(screen.getByLabelText('Salinity')).toHaveValue('1.0245');
     expect(screen.getByLabelText('pH')).toHaveValue('8.2');
     await user.click(screen.getByRole('button', { name: 'Save test' }));
@@ -120,14 +153,18 @@ describe('water-test form', () => {
 
   it('when opened from a link with the tests due, then those readings come first in that order, before the usual ones', () => {
     renderForm({ firstReadings: ['nitrite', 'ammonia'] });
-    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map((f) => f.dataset.parameter);
+    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map(
+      (f) => f.dataset.parameter,
+    );
     // Due first, then the member's usual readings (remembered on the device) without repeats.
     expect(order).toEqual(['nitrite', 'ammonia', 'temperature', 'salinity', 'pH']);
   });
 
   it('when no tests are named, then the form starts with the usual readings as before', () => {
     renderForm();
-    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map((f) => f.dataset.parameter);
+    const order = [...document.querySelectorAll<HTMLElement>('fieldset[data-parameter]')].map(
+      (f) => f.dataset.parameter,
+    );
     expect(order).toEqual(['temperature', 'salinity', 'pH', 'ammonia']);
   });
 });

@@ -18,4 +18,5 @@ export const invitePreviewQuery = (token: string) =>
     staleTime: Infinity,
   });
 
-export const useInvitePreview = (token: string) => useQuery({ ...invitePreviewQuery(token), enabled: token.length > 0 });
+export const useInvitePreview = (token: string) =>
+  useQuery({ ...invitePreviewQuery(token), enabled: token.length > 0 });

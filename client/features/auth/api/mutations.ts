@@ -29,19 +29,23 @@ export function useSignOut() {
 export function useAcceptInvite() {
   const changed = useSessionChanged();
   return useMutation({
-    mutationFn: (input: AcceptInviteInput) => api.post<{ user: MeUser; clubId: string }>('/invites/accept', input),
+    mutationFn: (input: AcceptInviteInput) =>
+      api.post<{ user: MeUser; clubId: string }>('/invites/accept', input),
     onSuccess: changed,
   });
 }
 
 export function useRequestPasswordReset() {
-  return useMutation({ mutationFn: (email: string) => api.post<{ message: string }>('/password-resets', { email }) });
+  return useMutation({
+    mutationFn: (email: string) => api.post<{ message: string }>('/password-resets', { email }),
+  });
 }
 
 export function useResetPassword() {
   const changed = useSessionChanged();
   return useMutation({
-    mutationFn: (input: { token: string; password: string }) => api.post<{ user: MeUser }>('/password-resets/confirm', input),
+    mutationFn: (input: { token: string; password: string }) =>
+      api.post<{ user: MeUser }>('/password-resets/confirm', input),
     onSuccess: changed,
   });
 }

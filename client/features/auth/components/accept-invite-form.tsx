@@ -19,19 +19,26 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
   const preview = useInvitePreview(token);
   const me = useMe();
   const accept = useAcceptInvite();
-  const { register, handleSubmit, setError, formState } = useForm<Input>({ resolver: zodResolver(newAccountFormSchema) });
+  const { register, handleSubmit, setError, formState } = useForm<Input>({
+    resolver: zodResolver(newAccountFormSchema),
+  });
   const { formError, attempt } = useSaveErrors(fieldsIn(['displayName', 'password']), setError);
 
-  if (!token) return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
+  if (!token)
+    return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
   if (preview.isPending) return <Loading label="Checking your invitation…" />;
   if (preview.isError) {
-    const message = preview.error instanceof ApiError && preview.error.isNotFound ? 'This invitation link is not valid. Check that you copied all of it.' : preview.error.message;
+    const message =
+      preview.error instanceof ApiError && preview.error.isNotFound
+        ? 'This invitation link is not valid. Check that you copied all of it.'
+        : preview.error.message;
     return <Notice tone="error">{message}</Notice>;
   }
   const invite = preview.data;
   const intro = (
     <p className="mb-4 text-ink-soft">
-      <strong>{invite.clubName}</strong> invites <strong>{invite.email}</strong> to join as {ROLE_LABELS[invite.role].toLowerCase()}.
+      <strong>{invite.clubName}</strong> invites <strong>{invite.email}</strong> to join as{' '}
+      {ROLE_LABELS[invite.role].toLowerCase()}.
     </p>
   );
 
@@ -48,11 +55,18 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
         {intro}
         {formError ? <Notice tone="error">{formError}</Notice> : null}
         {signedInAsInvitee ? (
-          <Button className="w-full" busy={accept.isPending} onClick={() => void acceptAs()}>Join {invite.clubName}</Button>
+          <Button className="w-full" busy={accept.isPending} onClick={() => void acceptAs()}>
+            Join {invite.clubName}
+          </Button>
         ) : (
           <>
-            <Notice>You already have a Shoalwise account. Sign in as {invite.email}, then open this link again.</Notice>
-            <ButtonLink to={`/sign-in?next=${encodeURIComponent(`/invites/accept?token=${token}`)}`} className="w-full">
+            <Notice>
+              You already have a Shoalwise account. Sign in as {invite.email}, then open this link again.
+            </Notice>
+            <ButtonLink
+              to={`/sign-in?next=${encodeURIComponent(`/invites/accept?token=${token}`)}`}
+              className="w-full"
+            >
               Sign in
             </ButtonLink>
           </>
@@ -62,13 +76,38 @@ export function AcceptInviteForm({ token, onDone }: { token: string; onDone: (cl
   }
 
   return (
-    <form onSubmit={handleSubmit((v) => acceptAs({ displayName: v.displayName, password: v.password }))} noValidate className="space-y-4">
+    <form
+      onSubmit={handleSubmit((v) => acceptAs({ displayName: v.displayName, password: v.password }))}
+      noValidate
+      className="space-y-4"
+    >
       {intro}
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      <TextField label="Your name" autoComplete="name" hint="Shown to your club." error={formState.errors.displayName?.message} {...register('displayName')} />
-      <TextField label="Choose a password" type="password" autoComplete="new-password" hint="At least 10 characters. A short sentence works well." error={formState.errors.password?.message} {...register('password')} />
-      <TextField label="Type it again" type="password" autoComplete="new-password" error={formState.errors.confirmPassword?.message} {...register('confirmPassword')} />
-      <Button type="submit" className="w-full" busy={formState.isSubmitting}>Create my account and join</Button>
+      <TextField
+        label="Your name"
+        autoComplete="name"
+        hint="Shown to your club."
+        error={formState.errors.displayName?.message}
+        {...register('displayName')}
+      />
+      <TextField
+        label="Choose a password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters. A short sentence works well."
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="Type it again"
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.confirmPassword?.message}
+        {...register('confirmPassword')}
+      />
+      <Button type="submit" className="w-full" busy={formState.isSubmitting}>
+        Create my account and join
+      </Button>
     </form>
   );
 }

@@ -10,25 +10,48 @@ import { useRequestPasswordReset, useResetPassword } from '../api/mutations';
 
 export function ForgotPasswordForm() {
   const request = useRequestPasswordReset();
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof requestPasswordResetSchema>, unknown, z.output<typeof requestPasswordResetSchema>>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    z.input<typeof requestPasswordResetSchema>,
+    unknown,
+    z.output<typeof requestPasswordResetSchema>
+  >({
     resolver: zodResolver(requestPasswordResetSchema),
   });
   const { formError, attempt } = useSaveErrors(fieldsIn(['email']), setError);
-  if (request.isSuccess) return <Notice tone="success">{request.data.message} Check your inbox; the link works for 30 minutes.</Notice>;
+  if (request.isSuccess)
+    return (
+      <Notice tone="success">{request.data.message} Check your inbox; the link works for 30 minutes.</Notice>
+    );
   return (
-    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => attempt(() => request.mutateAsync(v.email)))}>
+    <form
+      noValidate
+      className="space-y-4"
+      onSubmit={handleSubmit((v) => attempt(() => request.mutateAsync(v.email)))}
+    >
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      <TextField label="Your e-mail" type="email" autoComplete="email" inputMode="email" error={formState.errors.email?.message} {...register('email')} />
-      <Button type="submit" className="w-full" busy={formState.isSubmitting}>Send me a reset link</Button>
+      <TextField
+        label="Your e-mail"
+        type="email"
+        autoComplete="email"
+        inputMode="email"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
+      <Button type="submit" className="w-full" busy={formState.isSubmitting}>
+        Send me a reset link
+      </Button>
     </form>
   );
 }
 
 export function ResetPasswordForm({ token, onDone }: { token: string; onDone: () => void }) {
   const reset = useResetPassword();
-  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof resetPasswordFormSchema>>({ resolver: zodResolver(resetPasswordFormSchema) });
+  const { register, handleSubmit, setError, formState } = useForm<z.input<typeof resetPasswordFormSchema>>({
+    resolver: zodResolver(resetPasswordFormSchema),
+  });
   const { formError, attempt } = useSaveErrors(fieldsIn(['password']), setError);
-  if (!token) return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
+  if (!token)
+    return <Notice tone="error">This link is missing its code. Open the link from your e-mail again.</Notice>;
   return (
     <form
       noValidate
@@ -41,9 +64,24 @@ export function ResetPasswordForm({ token, onDone }: { token: string; onDone: ()
       )}
     >
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      <TextField label="New password" type="password" autoComplete="new-password" hint="At least 10 characters. This signs you out on every other device." error={formState.errors.password?.message} {...register('password')} />
-      <TextField label="Type it again" type="password" autoComplete="new-password" error={formState.errors.confirmPassword?.message} {...register('confirmPassword')} />
-      <Button type="submit" className="w-full" busy={formState.isSubmitting}>Save my new password</Button>
+      <TextField
+        label="New password"
+        type="password"
+        autoComplete="new-password"
+        hint="At least 10 characters. This signs you out on every other device."
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
+      <TextField
+        label="Type it again"
+        type="password"
+        autoComplete="new-password"
+        error={formState.errors.confirmPassword?.message}
+        {...register('confirmPassword')}
+      />
+      <Button type="submit" className="w-full" busy={formState.isSubmitting}>
+        Save my new password
+      </Button>
     </form>
   );
 }

@@ -17,7 +17,11 @@ const schema = updateProfileSchema.required();
 type Input = z.input<typeof schema>;
 
 const LABELS = {
-  experienceLevel: { beginner: 'New to the hobby', 'some-experience': 'Kept a tank or two', experienced: 'Experienced keeper' },
+  experienceLevel: {
+    beginner: 'New to the hobby',
+    'some-experience': 'Kept a tank or two',
+    experienced: 'Experienced keeper',
+  },
   temperatureUnit: { C: '°C', F: '°F' },
   volumeUnit: { L: 'Litres', USgal: 'US gallons' },
   salinityDisplay: { sg: 'Specific gravity (e.g. 1.025)', ppt: 'Parts per thousand (e.g. 35 ppt)' },
@@ -42,18 +46,53 @@ export function ProfileForm({ user }: { user: MeUser }) {
   const { formError, attempt } = useSaveErrors(fieldsIn(Object.keys(schema.shape)), setError);
   const e = formState.errors;
   return (
-    <form noValidate className="space-y-4" onSubmit={handleSubmit((v) => attempt(async () => { await update.mutateAsync(v); toast.success('Profile and units saved.'); }))}>
+    <form
+      noValidate
+      className="space-y-4"
+      onSubmit={handleSubmit((v) =>
+        attempt(async () => {
+          await update.mutateAsync(v);
+          toast.success('Profile and units saved.');
+        }),
+      )}
+    >
       {formError ? <Notice tone="error">{formError}</Notice> : null}
       <TextField label="Your name" error={e.displayName?.message} {...register('displayName')} />
-      <SelectField label="Experience" options={options('experienceLevel', EXPERIENCE_LEVELS)} error={e.experienceLevel?.message} {...register('experienceLevel')} />
-      <TextField label="Time zone" hint="Used for reminders and the dates on your tests, e.g. Europe/London." error={e.timeZone?.message} {...register('timeZone')} />
+      <SelectField
+        label="Experience"
+        options={options('experienceLevel', EXPERIENCE_LEVELS)}
+        error={e.experienceLevel?.message}
+        {...register('experienceLevel')}
+      />
+      <TextField
+        label="Time zone"
+        hint="Used for reminders and the dates on your tests, e.g. Europe/London."
+        error={e.timeZone?.message}
+        {...register('timeZone')}
+      />
       <fieldset className="grid gap-4 sm:grid-cols-3">
-        <legend className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">Units I read</legend>
-        <SelectField label="Temperature" options={options('temperatureUnit', TEMPERATURE_UNITS)} {...register('temperatureUnit')} />
-        <SelectField label="Tank volume" options={options('volumeUnit', VOLUME_UNITS)} {...register('volumeUnit')} />
-        <SelectField label="Salinity" options={options('salinityDisplay', SALINITY_DISPLAYS)} {...register('salinityDisplay')} />
+        <legend className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">
+          Units I read
+        </legend>
+        <SelectField
+          label="Temperature"
+          options={options('temperatureUnit', TEMPERATURE_UNITS)}
+          {...register('temperatureUnit')}
+        />
+        <SelectField
+          label="Tank volume"
+          options={options('volumeUnit', VOLUME_UNITS)}
+          {...register('volumeUnit')}
+        />
+        <SelectField
+          label="Salinity"
+          options={options('salinityDisplay', SALINITY_DISPLAYS)}
+          {...register('salinityDisplay')}
+        />
       </fieldset>
-      <Button type="submit" busy={formState.isSubmitting}>Save</Button>
+      <Button type="submit" busy={formState.isSubmitting}>
+        Save
+      </Button>
     </form>
   );
 }

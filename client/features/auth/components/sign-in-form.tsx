@@ -13,7 +13,11 @@ type Input = z.input<typeof signInSchema>;
 
 export function SignInForm({ onDone }: { onDone: () => void }) {
   const signIn = useSignIn();
-  const { register, handleSubmit, setError, formState } = useForm<Input, unknown, z.output<typeof signInSchema>>({
+  const { register, handleSubmit, setError, formState } = useForm<
+    Input,
+    unknown,
+    z.output<typeof signInSchema>
+  >({
     resolver: zodResolver(signInSchema),
   });
   const { formError, attempt } = useSaveErrors(fieldsIn(['email', 'password']), setError);
@@ -26,11 +30,28 @@ export function SignInForm({ onDone }: { onDone: () => void }) {
   return (
     <form onSubmit={submit} noValidate className="space-y-4">
       {formError ? <Notice tone="error">{formError}</Notice> : null}
-      <TextField label="E-mail" type="email" autoComplete="email" inputMode="email" error={formState.errors.email?.message} {...register('email')} />
-      <TextField label="Password" type="password" autoComplete="current-password" error={formState.errors.password?.message} {...register('password')} />
-      <Button type="submit" busy={formState.isSubmitting} className="w-full">Sign in</Button>
+      <TextField
+        label="E-mail"
+        type="email"
+        autoComplete="email"
+        inputMode="email"
+        error={formState.errors.email?.message}
+        {...register('email')}
+      />
+      <TextField
+        label="Password"
+        type="password"
+        autoComplete="current-password"
+        error={formState.errors.password?.message}
+        {...register('password')}
+      />
+      <Button type="submit" busy={formState.isSubmitting} className="w-full">
+        Sign in
+      </Button>
       <p className="text-center text-sm">
-        <Link to="/forgot-password" className="font-bold text-link underline">Forgot your password?</Link>
+        <Link to="/forgot-password" className="font-bold text-link underline">
+          Forgot your password?
+        </Link>
       </p>
     </form>
   );

@@ -20,7 +20,9 @@ export function UserMenu() {
             className="min-h-touch max-w-40 rounded-full border-0 bg-chrome-active px-3 text-sm font-bold text-on-chrome sm:max-w-56"
           >
             {clubs.map((c) => (
-              <option key={c.clubId} value={c.clubId}>{c.clubName} · {ROLE_LABELS[c.role]}</option>
+              <option key={c.clubId} value={c.clubId}>
+                {c.clubName} · {ROLE_LABELS[c.role]}
+              </option>
             ))}
           </select>
         </label>
@@ -28,14 +30,19 @@ export function UserMenu() {
         <span className="hidden text-sm font-bold text-on-chrome-muted sm:inline">{activeClub.clubName}</span>
       ) : null}
       <details className="relative">
-        <summary className="flex size-touch cursor-pointer list-none items-center justify-center rounded-full bg-chrome-active font-extrabold text-on-chrome" aria-label={`Account of ${me.user.displayName}`}>
+        <summary
+          className="flex size-touch cursor-pointer list-none items-center justify-center rounded-full bg-chrome-active font-extrabold text-on-chrome"
+          aria-label={`Account of ${me.user.displayName}`}
+        >
           {me.user.displayName.slice(0, 1).toUpperCase()}
         </summary>
         <div className="absolute right-0 z-20 mt-2 w-56 rounded-card bg-surface p-2 shadow-card ring-1 ring-line">
           <p className="px-3 py-2 text-sm text-ink-muted">
             Signed in as <strong className="block text-ink">{me.user.displayName}</strong>
           </p>
-          <Link to="/profile" className="block rounded-lg px-3 py-2 font-bold text-ink-soft hover:bg-tint">Profile and units</Link>
+          <Link to="/profile" className="block rounded-lg px-3 py-2 font-bold text-ink-soft hover:bg-tint">
+            Profile and units
+          </Link>
           <button
             type="button"
             className="block w-full rounded-lg px-3 py-2 text-left font-bold text-ink-soft hover:bg-tint"

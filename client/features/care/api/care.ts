@@ -25,7 +25,13 @@ export interface ConcernView {
 export interface CareSummary {
   profile: { key: string; name: string; version: number; animals: string };
   cycle: CycleStageResult;
-  cycleTypical: { typicalMin: number; typicalMax: number; rangeMin: number; rangeMax: number; provenance: string };
+  cycleTypical: {
+    typicalMin: number;
+    typicalMax: number;
+    rangeMin: number;
+    rangeMax: number;
+    provenance: string;
+  };
   due: DueTest[];
   readiness: {
     ready: boolean;
@@ -46,15 +52,20 @@ export const careSummaryQuery = (clubId: string, tankId: string) =>
 export const concernHistoryQuery = (clubId: string, tankId: string) =>
   queryOptions({
     queryKey: careKeys.concerns(tankId, 'all'),
-    queryFn: ({ signal }) => api.get<{ concerns: ConcernView[] }>(`/clubs/${clubId}/tanks/${tankId}/concerns?status=all`, signal),
+    queryFn: ({ signal }) =>
+      api.get<{ concerns: ConcernView[] }>(`/clubs/${clubId}/tanks/${tankId}/concerns?status=all`, signal),
   });
 
 export const useCareSummary = (clubId: string, tankId: string) => useQuery(careSummaryQuery(clubId, tankId));
-export const useConcernHistory = (clubId: string, tankId: string, enabled: boolean) => useQuery({ ...concernHistoryQuery(clubId, tankId), enabled });
+export const useConcernHistory = (clubId: string, tankId: string, enabled: boolean) =>
+  useQuery({ ...concernHistoryQuery(clubId, tankId), enabled });
 
 function useTankCareMutation<I>(tankId: string, fn: (input: I) => Promise<unknown>) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: fn, onSuccess: () => qc.invalidateQueries({ queryKey: careKeys.tank(tankId) }) });
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => qc.invalidateQueries({ queryKey: careKeys.tank(tankId) }),
+  });
 }
 
 export const useConcernAction = (clubId: string, tankId: string) =>
@@ -62,8 +73,12 @@ export const useConcernAction = (clubId: string, tankId: string) =>
     api.post(`/clubs/${clubId}/concerns/${i.concernId}/${i.action}`, { note: i.note }),
   );
 export const useSaveChecklist = (clubId: string, tankId: string) =>
-  useTankCareMutation(tankId, (i: ReadinessChecklistInput) => api.put(`/clubs/${clubId}/tanks/${tankId}/readiness`, i));
+  useTankCareMutation(tankId, (i: ReadinessChecklistInput) =>
+    api.put(`/clubs/${clubId}/tanks/${tankId}/readiness`, i),
+  );
 export const useSignOff = (clubId: string, tankId: string) =>
-  useTankCareMutation(tankId, (i: { note: string }) => api.post(`/clubs/${clubId}/tanks/${tankId}/sign-off`, i));
+  useTankCareMutation(tankId, (i: { note: string }) =>
+    api.post(`/clubs/${clubId}/tanks/${tankId}/sign-off`, i),
+  );
 export const useWithdrawSignOff = (clubId: string, tankId: string) =>
   useTankCareMutation(tankId, () => api.delete(`/clubs/${clubId}/tanks/${tankId}/sign-off`));

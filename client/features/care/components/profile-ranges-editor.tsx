@@ -10,7 +10,17 @@ import { useSaveProfile } from '@client/lib/care-profiles';
 type Band = [number, number];
 
 /** The profile's bands as a table; a club copy can be adjusted here, each save becoming a new version. */
-export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId: string; profile: CareProfile; id?: string; editable: boolean }) {
+export function ProfileRangesEditor({
+  clubId,
+  profile,
+  id,
+  editable,
+}: {
+  clubId: string;
+  profile: CareProfile;
+  id?: string;
+  editable: boolean;
+}) {
   const save = useSaveProfile(clubId);
   const [draft, setDraft] = useState(() => structuredClone(profile));
   const [note, setNote] = useState('');
@@ -26,7 +36,8 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
       band[i] = Number.isFinite(n) ? n : band[i];
       range[which] = band;
       // A target outside a new ideal band would be refused; it falls back to the band's upper end.
-      if (range.target !== undefined && (range.target < range.ideal[0] || range.target > range.ideal[1])) delete range.target;
+      if (range.target !== undefined && (range.target < range.ideal[0] || range.target > range.ideal[1]))
+        delete range.target;
       return next;
     });
   };
@@ -60,9 +71,15 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
               const r = draft.ranges[key]!;
               return (
                 <tr key={key}>
-                  <th scope="row" className="py-2 pr-3 text-left font-bold text-ink">{parameterInfo(key).label} <span className="font-normal text-ink-muted">({r.unit})</span></th>
-                  <td className="pr-3 whitespace-nowrap">{cell(key, 'ideal', 0)} – {cell(key, 'ideal', 1)}</td>
-                  <td className="pr-3 whitespace-nowrap">{cell(key, 'caution', 0)} – {cell(key, 'caution', 1)}</td>
+                  <th scope="row" className="py-2 pr-3 text-left font-bold text-ink">
+                    {parameterInfo(key).label} <span className="font-normal text-ink-muted">({r.unit})</span>
+                  </th>
+                  <td className="pr-3 whitespace-nowrap">
+                    {cell(key, 'ideal', 0)} – {cell(key, 'ideal', 1)}
+                  </td>
+                  <td className="pr-3 whitespace-nowrap">
+                    {cell(key, 'caution', 0)} – {cell(key, 'caution', 1)}
+                  </td>
                   <td className="text-ink-muted">{provenanceLabel(r.provenance)}</td>
                 </tr>
               );
@@ -73,7 +90,11 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
       {editable ? (
         <div className="flex flex-wrap items-end gap-2">
           <div className="grow">
-            <TextField label="Why the change (kept in the history)" value={note} onChange={(e) => setNote(e.target.value)} />
+            <TextField
+              label="Why the change (kept in the history)"
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+            />
           </div>
           <Button
             disabled={!dirty}
@@ -81,11 +102,23 @@ export function ProfileRangesEditor({ clubId, profile, id, editable }: { clubId:
             onClick={async () => {
               setMessage(undefined);
               try {
-                const res = await save.mutateAsync({ id: id!, definition: draft, baseVersion: profile.version, note });
-                toast.success(`Saved as version ${res.profile.version}: ${res.changes.length} ${res.changes.length === 1 ? 'change' : 'changes'}.`);
+                const res = await save.mutateAsync({
+                  id: id!,
+                  definition: draft,
+                  baseVersion: profile.version,
+                  note,
+                });
+                toast.success(
+                  `Saved as version ${res.profile.version}: ${res.changes.length} ${res.changes.length === 1 ? 'change' : 'changes'}.`,
+                );
               } catch (e) {
                 const err = e instanceof ApiError ? e : undefined;
-                setMessage({ tone: 'error', text: err ? [err.message, ...err.issues.map((i) => `${i.path}: ${i.message}`)].join(' ') : 'Could not save.' });
+                setMessage({
+                  tone: 'error',
+                  text: err
+                    ? [err.message, ...err.issues.map((i) => `${i.path}: ${i.message}`)].join(' ')
+                    : 'Could not save.',
+                });
               }
             }}
           >

@@ -15,7 +15,17 @@ const CHECKS = [
 ] as const;
 
 /** The checklist before animals go in, and the mentor's sign-off. */
-export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readiness: CareSummary['readiness']; clubId: string; tankId: string; ownerId: string }) {
+export function ReadinessPanel({
+  readiness,
+  clubId,
+  tankId,
+  ownerId,
+}: {
+  readiness: CareSummary['readiness'];
+  clubId: string;
+  tankId: string;
+  ownerId: string;
+}) {
   const save = useSaveChecklist(clubId, tankId);
   const signOff = useSignOff(clubId, tankId);
   const withdraw = useWithdrawSignOff(clubId, tankId);
@@ -31,14 +41,22 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
   };
   return (
     <section aria-labelledby="ready-heading" className="space-y-3">
-      <h3 id="ready-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Ready for animals?</h3>
-      <p className={`rounded-xl px-3 py-2 font-bold ${readiness.ready ? 'bg-ok-soft text-ok' : 'bg-tint text-ink-soft'}`}>
-        {readiness.ready ? '✔ Ready: your mentor has signed this tank off.' : 'Not ready yet. Every line below needs a tick first.'}
+      <h3 id="ready-heading" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">
+        Ready for animals?
+      </h3>
+      <p
+        className={`rounded-xl px-3 py-2 font-bold ${readiness.ready ? 'bg-ok-soft text-ok' : 'bg-tint text-ink-soft'}`}
+      >
+        {readiness.ready
+          ? '✔ Ready: your mentor has signed this tank off.'
+          : 'Not ready yet. Every line below needs a tick first.'}
       </p>
       <ul className="space-y-2">
         {readiness.items.map((item) => (
           <li key={item.key} className="flex gap-2 text-sm">
-            <span aria-hidden className={`font-extrabold ${item.met ? 'text-ok' : 'text-ink-muted'}`}>{item.met ? '✔' : '○'}</span>
+            <span aria-hidden className={`font-extrabold ${item.met ? 'text-ok' : 'text-ink-muted'}`}>
+              {item.met ? '✔' : '○'}
+            </span>
             <span>
               <strong className="text-ink">{item.label}</strong>
               <span className="sr-only">{item.met ? ' (done)' : ' (not yet)'}</span>
@@ -52,7 +70,13 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
           <legend className="text-sm font-bold text-ink-soft">Your checklist</legend>
           {CHECKS.map((c) => (
             <label key={c.key} className="flex min-h-touch items-center gap-3 text-sm text-ink">
-              <input type="checkbox" className="size-5 accent-accent" checked={readiness.checklist[c.key]} disabled={save.isPending} onChange={(e) => void toggle(c.key, e.target.checked)} />
+              <input
+                type="checkbox"
+                className="size-5 accent-accent"
+                checked={readiness.checklist[c.key]}
+                disabled={save.isPending}
+                onChange={(e) => void toggle(c.key, e.target.checked)}
+              />
               {c.label}
             </label>
           ))}
@@ -60,7 +84,13 @@ export function ReadinessPanel({ readiness, clubId, tankId, ownerId }: { readine
       </Can>
       <Can<AppAbility> I="signOff" this={tank}>
         {readiness.signOff ? (
-          <ConfirmButton title="Withdraw your sign-off?" question="The member will see the tank as not ready for animals until you sign it off again." confirmLabel="Withdraw it" busy={withdraw.isPending} onConfirm={() => withdraw.mutateAsync()}>
+          <ConfirmButton
+            title="Withdraw your sign-off?"
+            question="The member will see the tank as not ready for animals until you sign it off again."
+            confirmLabel="Withdraw it"
+            busy={withdraw.isPending}
+            onConfirm={() => withdraw.mutateAsync()}
+          >
             Withdraw my sign-off
           </ConfirmButton>
         ) : (

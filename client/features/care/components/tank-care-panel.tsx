@@ -8,9 +8,26 @@ import { DueTests } from './due-tests';
 import { ReadinessPanel } from './readiness-panel';
 
 /** The tank page's judgement: what needs attention, the cycle, the tests due and readiness for animals. */
-export function TankCarePanel({ clubId, tankId, ownerId, phase, timeZone }: { clubId: string; tankId: string; ownerId: string; phase: 'cycling' | 'established'; timeZone: string }) {
+export function TankCarePanel({
+  clubId,
+  tankId,
+  ownerId,
+  phase,
+  timeZone,
+}: {
+  clubId: string;
+  tankId: string;
+  ownerId: string;
+  phase: 'cycling' | 'established';
+  timeZone: string;
+}) {
   const care = useCareSummary(clubId, tankId);
-  if (care.isPending) return <Card><Loading label="Working out how the tank is doing…" /></Card>;
+  if (care.isPending)
+    return (
+      <Card>
+        <Loading label="Working out how the tank is doing…" />
+      </Card>
+    );
   if (care.isError) return <Notice tone="error">{care.error.message}</Notice>;
   const s = care.data;
   return (

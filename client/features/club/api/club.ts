@@ -48,28 +48,52 @@ export const clubKeys = {
 };
 
 export const clubQuery = (clubId: string) =>
-  queryOptions({ queryKey: clubKeys.detail(clubId), queryFn: ({ signal }) => api.get<{ club: ClubView }>(`/clubs/${clubId}`, signal).then((r) => r.club), enabled: Boolean(clubId) });
+  queryOptions({
+    queryKey: clubKeys.detail(clubId),
+    queryFn: ({ signal }) => api.get<{ club: ClubView }>(`/clubs/${clubId}`, signal).then((r) => r.club),
+    enabled: Boolean(clubId),
+  });
 export const membersQuery = (clubId: string) =>
-  queryOptions({ queryKey: clubKeys.members(clubId), queryFn: ({ signal }) => api.get<{ members: ClubMember[] }>(`/clubs/${clubId}/members`, signal) });
+  queryOptions({
+    queryKey: clubKeys.members(clubId),
+    queryFn: ({ signal }) => api.get<{ members: ClubMember[] }>(`/clubs/${clubId}/members`, signal),
+  });
 export const invitesQuery = (clubId: string) =>
-  queryOptions({ queryKey: clubKeys.invites(clubId), queryFn: ({ signal }) => api.get<{ invites: PendingInvite[] }>(`/clubs/${clubId}/invites`, signal) });
+  queryOptions({
+    queryKey: clubKeys.invites(clubId),
+    queryFn: ({ signal }) => api.get<{ invites: PendingInvite[] }>(`/clubs/${clubId}/invites`, signal),
+  });
 export const assignmentsQuery = (clubId: string) =>
-  queryOptions({ queryKey: clubKeys.assignments(clubId), queryFn: ({ signal }) => api.get<{ assignments: Assignment[] }>(`/clubs/${clubId}/mentor-assignments`, signal) });
+  queryOptions({
+    queryKey: clubKeys.assignments(clubId),
+    queryFn: ({ signal }) =>
+      api.get<{ assignments: Assignment[] }>(`/clubs/${clubId}/mentor-assignments`, signal),
+  });
 
 export const useClub = (clubId: string) => useQuery(clubQuery(clubId));
 export const useMembers = (clubId: string) => useQuery(membersQuery(clubId));
-export const useInvites = (clubId: string, enabled: boolean) => useQuery({ ...invitesQuery(clubId), enabled });
+export const useInvites = (clubId: string, enabled: boolean) =>
+  useQuery({ ...invitesQuery(clubId), enabled });
 export const useAssignments = (clubId: string) => useQuery(assignmentsQuery(clubId));
 
 /** After any change in a club its members, loads, pairings, invites and requests may all differ: refetch the club's queries. */
 export function useClubMutation<I, O>(clubId: string, fn: (input: I) => Promise<O>) {
   const qc = useQueryClient();
-  return useMutation({ mutationFn: fn, onSuccess: () => qc.invalidateQueries({ queryKey: clubKeys.all(clubId) }) });
+  return useMutation({
+    mutationFn: fn,
+    onSuccess: () => qc.invalidateQueries({ queryKey: clubKeys.all(clubId) }),
+  });
 }
 
-export const useSendInvite = (clubId: string) => useClubMutation(clubId, (i: CreateInviteInput) => api.post(`/clubs/${clubId}/invites`, i));
-export const useResendInvite = (clubId: string) => useClubMutation(clubId, (id: string) => api.post(`/clubs/${clubId}/invites/${id}/resend`));
-export const useRevokeInvite = (clubId: string) => useClubMutation(clubId, (id: string) => api.delete(`/clubs/${clubId}/invites/${id}`));
+export const useSendInvite = (clubId: string) =>
+  useClubMutation(clubId, (i: CreateInviteInput) => api.post(`/clubs/${clubId}/invites`, i));
+export const useResendInvite = (clubId: string) =>
+  useClubMutation(clubId, (id: string) => api.post(`/clubs/${clubId}/invites/${id}/resend`));
+export const useRevokeInvite = (clubId: string) =>
+  useClubMutation(clubId, (id: string) => api.delete(`/clubs/${clubId}/invites/${id}`));
 export const useAssignMentor = (clubId: string) =>
-  useClubMutation(clubId, (i: { mentorId: string; menteeId: string }) => api.post(`/clubs/${clubId}/mentor-assignments`, i));
-export const useEndAssignment = (clubId: string) => useClubMutation(clubId, (id: string) => api.post(`/clubs/${clubId}/mentor-assignments/${id}/end`));
+  useClubMutation(clubId, (i: { mentorId: string; menteeId: string }) =>
+    api.post(`/clubs/${clubId}/mentor-assignments`, i),
+  );
+export const useEndAssignment = (clubId: string) =>
+  useClubMutation(clubId, (id: string) => api.post(`/clubs/${clubId}/mentor-assignments/${id}/end`));

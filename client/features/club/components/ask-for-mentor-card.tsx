@@ -28,7 +28,11 @@ function AskForm({ clubId, userId }: { clubId: string; userId: string }) {
         ask.mutate({ note: note.trim() || undefined, preferredMentorId: preferred || undefined });
       }}
     >
-      {ask.isError ? <Notice tone="error">{error?.message ?? 'Could not send your request. Check your connection and try again.'}</Notice> : null}
+      {ask.isError ? (
+        <Notice tone="error">
+          {error?.message ?? 'Could not send your request. Check your connection and try again.'}
+        </Notice>
+      ) : null}
       <TextAreaField
         id={noteId}
         label="What would you like help with? (optional)"
@@ -39,9 +43,18 @@ function AskForm({ clubId, userId }: { clubId: string; userId: string }) {
         error={error?.fieldMessage('note')}
       />
       {options.length ? (
-        <MentorSelect id={`${noteId}-mentor`} label="Someone in mind? (optional)" placeholder="Let the admins choose" value={preferred} onChange={setPreferred} options={options} />
+        <MentorSelect
+          id={`${noteId}-mentor`}
+          label="Someone in mind? (optional)"
+          placeholder="Let the admins choose"
+          value={preferred}
+          onChange={setPreferred}
+          options={options}
+        />
       ) : null}
-      <Button type="submit" busy={ask.isPending}>Ask for a mentor</Button>
+      <Button type="submit" busy={ask.isPending}>
+        Ask for a mentor
+      </Button>
     </form>
   );
 }
@@ -51,37 +64,60 @@ export function AskForMentorCard({ clubId, userId }: { clubId: string; userId: s
   const qc = useQueryClient();
   const mine = useMyRequest(clubId);
   useSocketEvent('notification', ({ notification }) => {
-    if (notification.clubId === clubId && (notification.kind === 'assignment' || notification.kind === 'mentor-request')) {
+    if (
+      notification.clubId === clubId &&
+      (notification.kind === 'assignment' || notification.kind === 'mentor-request')
+    ) {
       void qc.invalidateQueries({ queryKey: mentorRequestKeys.mine(clubId) });
     }
   });
-  if (mine.isPending) return <Card><Loading label="Checking your mentoring…" /></Card>;
+  if (mine.isPending)
+    return (
+      <Card>
+        <Loading label="Checking your mentoring…" />
+      </Card>
+    );
   if (mine.isError) return <Notice tone="error">{mine.error.message}</Notice>;
   const { request, mentor } = mine.data;
   if (mentor) {
     return (
       <Card>
-        <p className="text-ink-soft"><strong className="text-ink">{mentor.displayName}</strong> is your mentor. They see your tank’s tests and can answer your questions.</p>
+        <p className="text-ink-soft">
+          <strong className="text-ink">{mentor.displayName}</strong> is your mentor. They see your tank’s
+          tests and can answer your questions.
+        </p>
       </Card>
     );
   }
   return (
     <Card>
-      <h2 className="text-lg font-extrabold text-ink">{request?.state === 'open' ? 'Your mentor request' : 'Ask for a mentor'}</h2>
+      <h2 className="text-lg font-extrabold text-ink">
+        {request?.state === 'open' ? 'Your mentor request' : 'Ask for a mentor'}
+      </h2>
       {request?.state === 'open' ? (
         <div className="mt-2 space-y-2 text-ink-soft">
-          <Notice tone="info">Sent <RelativeTime at={request.createdAt} />. A club admin will pair you with a mentor; you’ll get a notification.</Notice>
-          {request.preferredMentor ? <p className="text-sm">You asked for {request.preferredMentor.displayName}.</p> : null}
+          <Notice tone="info">
+            Sent <RelativeTime at={request.createdAt} />. A club admin will pair you with a mentor; you’ll get
+            a notification.
+          </Notice>
+          {request.preferredMentor ? (
+            <p className="text-sm">You asked for {request.preferredMentor.displayName}.</p>
+          ) : null}
           {request.note ? <p className="text-sm">“{request.note}”</p> : null}
         </div>
       ) : (
         <>
           {request?.state === 'declined' ? (
             <div className="mt-2">
-              <Notice tone="warning">Your last request was declined{request.declineReason ? `: ${request.declineReason}` : '.'} You can ask again.</Notice>
+              <Notice tone="warning">
+                Your last request was declined{request.declineReason ? `: ${request.declineReason}` : '.'} You
+                can ask again.
+              </Notice>
             </div>
           ) : (
-            <p className="mt-1 text-ink-muted">An experienced keeper from the club watches your tests with you and answers your questions.</p>
+            <p className="mt-1 text-ink-muted">
+              An experienced keeper from the club watches your tests with you and answers your questions.
+            </p>
           )}
           <AskForm clubId={clubId} userId={userId} />
         </>

@@ -14,7 +14,12 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
   const assign = useAssignMentor(clubId);
   const end = useEndAssignment(clubId);
   const [error, setError] = useState<string>();
-  if (members.isPending || assignments.isPending) return <Card><Loading label="Loading…" /></Card>;
+  if (members.isPending || assignments.isPending)
+    return (
+      <Card>
+        <Loading label="Loading…" />
+      </Card>
+    );
   if (members.isError) return <Notice tone="error">{members.error.message}</Notice>;
   const people = members.data.members;
   const byId = new Map(people.map((p) => [p.userId, p]));
@@ -34,7 +39,11 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
   return (
     <Card>
       <h2 className="text-lg font-extrabold text-ink">Members ({people.length})</h2>
-      {error ? <div className="mt-3"><Notice tone="error">{error}</Notice></div> : null}
+      {error ? (
+        <div className="mt-3">
+          <Notice tone="error">{error}</Notice>
+        </div>
+      ) : null}
       <ul className="mt-3 divide-y divide-line">
         {people.map((p) => {
           const a = mentorOf(p.userId);
@@ -42,7 +51,12 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
             <li key={p.membershipId} className="flex flex-wrap items-center justify-between gap-2 py-3">
               <div>
                 <p className="font-bold text-ink">
-                  {p.displayName} {p.status === 'suspended' ? <span className="ml-1 rounded-full bg-danger-soft px-2 text-xs text-danger">suspended</span> : null}
+                  {p.displayName}{' '}
+                  {p.status === 'suspended' ? (
+                    <span className="ml-1 rounded-full bg-danger-soft px-2 text-xs text-danger">
+                      suspended
+                    </span>
+                  ) : null}
                 </p>
                 <p className="text-sm text-ink-muted">
                   {ROLE_LABELS[p.role]}
@@ -53,12 +67,23 @@ export function MembersPanel({ clubId, isAdmin }: { clubId: string; isAdmin: boo
               </div>
               {isAdmin && p.role === 'member' && p.status === 'active' ? (
                 <div className="flex items-center gap-2">
-                  <label className="sr-only" htmlFor={`mentor-${p.userId}`}>Mentor for {p.displayName}</label>
-                  <Select id={`mentor-${p.userId}`} className="" value={a?.mentorId ?? ''} onChange={(e) => e.target.value && void pair(p, e.target.value)}>
+                  <label className="sr-only" htmlFor={`mentor-${p.userId}`}>
+                    Mentor for {p.displayName}
+                  </label>
+                  <Select
+                    id={`mentor-${p.userId}`}
+                    className=""
+                    value={a?.mentorId ?? ''}
+                    onChange={(e) => e.target.value && void pair(p, e.target.value)}
+                  >
                     <option value="">{a ? 'Change mentor…' : 'Choose a mentor…'}</option>
-                    {mentors.filter((m) => m.userId !== p.userId).map((m) => (
-                      <option key={m.userId} value={m.userId}>{m.displayName} ({m.menteeCount ?? 0}/{m.mentorCapacity})</option>
-                    ))}
+                    {mentors
+                      .filter((m) => m.userId !== p.userId)
+                      .map((m) => (
+                        <option key={m.userId} value={m.userId}>
+                          {m.displayName} ({m.menteeCount ?? 0}/{m.mentorCapacity})
+                        </option>
+                      ))}
                   </Select>
                   {a ? (
                     <ConfirmButton

@@ -13,7 +13,9 @@ export function MentorCapacityCard({ clubId, userId }: { clubId: string; userId:
   const members = useMembers(clubId);
   const me = members.data?.members.find((m) => m.userId === userId);
   if (!me || me.mentorCapacity === undefined) return null;
-  return <CapacityForm clubId={clubId} userId={userId} capacity={me.mentorCapacity} load={me.menteeCount ?? 0} />;
+  return (
+    <CapacityForm clubId={clubId} userId={userId} capacity={me.mentorCapacity} load={me.menteeCount ?? 0} />
+  );
 }
 
 function CapacityForm(p: { clubId: string; userId: string; capacity: number; load: number }) {
@@ -21,26 +23,54 @@ function CapacityForm(p: { clubId: string; userId: string; capacity: number; loa
   const toast = useToast();
   const [value, setValue] = useState(String(p.capacity));
   const id = useId();
-  const error = save.error instanceof ApiError ? save.error.fieldMessage('capacity') ?? save.error.message : save.error ? 'Could not save.' : undefined;
+  const error =
+    save.error instanceof ApiError
+      ? (save.error.fieldMessage('capacity') ?? save.error.message)
+      : save.error
+        ? 'Could not save.'
+        : undefined;
   return (
     <Card>
       <form
         className="flex flex-wrap items-end gap-3"
         onSubmit={(e) => {
           e.preventDefault();
-          save.mutate({ userId: p.userId, capacity: Number(value) }, { onSuccess: () => toast.success(`Saved: you can take on ${value} mentees.`) });
+          save.mutate(
+            { userId: p.userId, capacity: Number(value) },
+            { onSuccess: () => toast.success(`Saved: you can take on ${value} mentees.`) },
+          );
         }}
       >
         <div>
-          <label htmlFor={id} className="block text-sm font-bold text-ink-soft">Mentees I can take on</label>
-          <Input id={id} type="number" inputMode="numeric" min={0} max={MAX_MENTOR_CAPACITY} step={1} value={value} onChange={(e) => setValue(e.target.value)} aria-describedby={`${id}-hint`} className="mt-1 w-28" />
+          <label htmlFor={id} className="block text-sm font-bold text-ink-soft">
+            Mentees I can take on
+          </label>
+          <Input
+            id={id}
+            type="number"
+            inputMode="numeric"
+            min={0}
+            max={MAX_MENTOR_CAPACITY}
+            step={1}
+            value={value}
+            onChange={(e) => setValue(e.target.value)}
+            aria-describedby={`${id}-hint`}
+            className="mt-1 w-28"
+          />
         </div>
-        <Button type="submit" variant="secondary" busy={save.isPending}>Save</Button>
+        <Button type="submit" variant="secondary" busy={save.isPending}>
+          Save
+        </Button>
         <p id={`${id}-hint`} className="w-full text-sm text-ink-muted">
-          You mentor {p.load} now. Lowering the number keeps your current mentees; it only stops new ones. 0 to {MAX_MENTOR_CAPACITY}.
+          You mentor {p.load} now. Lowering the number keeps your current mentees; it only stops new ones. 0
+          to {MAX_MENTOR_CAPACITY}.
         </p>
       </form>
-      {error ? <div className="mt-2"><Notice tone="error">{error}</Notice></div> : null}
+      {error ? (
+        <div className="mt-2">
+          <Notice tone="error">{error}</Notice>
+        </div>
+      ) : null}
     </Card>
   );
 }

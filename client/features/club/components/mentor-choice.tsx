@@ -9,16 +9,29 @@ export function mentorOptions(members: ClubMember[], exceptUserId: string) {
       const load = m.menteeCount ?? 0;
       const capacity = m.mentorCapacity ?? 0;
       const full = load >= capacity;
-      return { userId: m.userId, full, label: `${m.displayName} — ${load} of ${capacity} mentees${full ? ' (full)' : ''}` };
+      return {
+        userId: m.userId,
+        full,
+        label: `${m.displayName} — ${load} of ${capacity} mentees${full ? ' (full)' : ''}`,
+      };
     });
 }
 
-export function MentorSelect(p: { id: string; label: string; value: string; onChange(v: string): void; options: ReturnType<typeof mentorOptions>; placeholder: string }) {
+export function MentorSelect(p: {
+  id: string;
+  label: string;
+  value: string;
+  onChange(v: string): void;
+  options: ReturnType<typeof mentorOptions>;
+  placeholder: string;
+}) {
   return (
     <SelectField id={p.id} label={p.label} value={p.value} onChange={(e) => p.onChange(e.target.value)}>
       <option value="">{p.placeholder}</option>
       {p.options.map((o) => (
-        <option key={o.userId} value={o.userId} disabled={o.full}>{o.label}</option>
+        <option key={o.userId} value={o.userId} disabled={o.full}>
+          {o.label}
+        </option>
       ))}
     </SelectField>
   );

@@ -14,7 +14,11 @@ export const deskKeys = {
 };
 
 const qs = (f: DeskFilters) =>
-  new URLSearchParams(Object.entries(f).filter(([, on]) => on).map(([k]) => [k, '1'])).toString();
+  new URLSearchParams(
+    Object.entries(f)
+      .filter(([, on]) => on)
+      .map(([k]) => [k, '1']),
+  ).toString();
 
 export const deskQuery = (clubId: string, f: DeskFilters) =>
   queryOptions({

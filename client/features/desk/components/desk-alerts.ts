@@ -8,7 +8,11 @@ interface AlertPrefs {
 
 function load(): AlertPrefs {
   try {
-    return { sound: false, desktop: false, ...(JSON.parse(localStorage.getItem(KEY) ?? '{}') as Partial<AlertPrefs>) };
+    return {
+      sound: false,
+      desktop: false,
+      ...(JSON.parse(localStorage.getItem(KEY) ?? '{}') as Partial<AlertPrefs>),
+    };
   } catch {
     return { sound: false, desktop: false };
   }
@@ -16,7 +20,9 @@ function load(): AlertPrefs {
 
 /** A short two-note chime made on the spot: no sound file to ship or fetch. */
 function chime(): void {
-  const AudioCtx = window.AudioContext ?? (window as unknown as { webkitAudioContext?: typeof AudioContext }).webkitAudioContext;
+  const AudioCtx =
+    window.AudioContext ??
+    (window as unknown as { webkitAudioContext?: typeof AudioContext }).webkitAudioContext;
   if (!AudioCtx) return;
   const ctx = new AudioCtx();
   [660, 880].forEach((freq, i) => {
@@ -51,11 +57,22 @@ export function useDeskAlerts() {
   const alert = useCallback(
     (title: string, body: string) => {
       if (prefs.sound) chime();
-      if (prefs.desktop && 'Notification' in window && Notification.permission === 'granted' && document.visibilityState !== 'visible') {
+      if (
+        prefs.desktop &&
+        'Notification' in window &&
+        Notification.permission === 'granted' &&
+        document.visibilityState !== 'visible'
+      ) {
         new Notification(title, { body, tag: 'shoalwise-desk' });
       }
     },
     [prefs],
   );
-  return { prefs, setSound, setDesktop, alert, desktopSupported: typeof window !== 'undefined' && 'Notification' in window };
+  return {
+    prefs,
+    setSound,
+    setDesktop,
+    alert,
+    desktopSupported: typeof window !== 'undefined' && 'Notification' in window,
+  };
 }

@@ -20,7 +20,15 @@ function since(days: number | null): { text: string; stale: boolean } {
 }
 
 /** One tank on the desk: why it is where it is, and what the mentor can do about it without leaving the list. */
-export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: boolean; actions: ConcernActions }) {
+export function DeskRow({
+  row,
+  highlighted,
+  actions,
+}: {
+  row: Row;
+  highlighted: boolean;
+  actions: ConcernActions;
+}) {
   const [note, setNote] = useState('');
   const [error, setError] = useState<string>();
   const worst = row.worstConcern;
@@ -43,11 +51,16 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
       <div className="flex flex-wrap items-start justify-between gap-3">
         <div className="min-w-0">
           <h2 className="text-lg font-extrabold text-ink">
-            <Link to={`/tanks/${row.tankId}`} className="hover:underline">{row.name}</Link>
+            <Link to={`/tanks/${row.tankId}`} className="hover:underline">
+              {row.name}
+            </Link>
             <span className="ml-2 text-sm font-semibold text-ink-muted">{row.owner.displayName}</span>
           </h2>
           <p className="mt-0.5 text-sm text-ink-muted">
-            {row.phase === 'established' && row.cycleStage !== 'setback' ? 'established' : CYCLE_STAGE_WORDS[row.cycleStage]} · <span className={last.stale ? 'font-bold text-danger' : ''}>{last.text}</span>
+            {row.phase === 'established' && row.cycleStage !== 'setback'
+              ? 'established'
+              : CYCLE_STAGE_WORDS[row.cycleStage]}{' '}
+            · <span className={last.stale ? 'font-bold text-danger' : ''}>{last.text}</span>
             {row.unansweredQuestions ? (
               <>
                 {' · '}
@@ -60,8 +73,14 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
         </div>
         {row.sparkline ? (
           <div className="text-right">
-            <Sparkline points={row.sparkline.points} label={`${isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : row.sparkline.parameter} over two weeks`} />
-            <p className="text-[11px] text-ink-muted">{isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : ''}, 14 days</p>
+            <Sparkline
+              points={row.sparkline.points}
+              label={`${isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : row.sparkline.parameter} over two weeks`}
+            />
+            <p className="text-[11px] text-ink-muted">
+              {isParameterKey(row.sparkline.parameter) ? parameterInfo(row.sparkline.parameter).label : ''},
+              14 days
+            </p>
           </div>
         ) : null}
       </div>
@@ -69,17 +88,39 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
         <div className="mt-3 space-y-2">
           <p className="flex flex-wrap items-center gap-2">
             <SeverityBadge severity={worst.severity} />
-            {worst.status === 'acknowledged' ? <span className="text-xs font-bold text-ink-muted">seen</span> : null}
+            {worst.status === 'acknowledged' ? (
+              <span className="text-xs font-bold text-ink-muted">seen</span>
+            ) : null}
             <span className="font-bold text-ink">{worst.reason}</span>
           </p>
           <div className="flex flex-wrap items-center gap-2">
-            <label className="sr-only" htmlFor={`desk-note-${row.tankId}`}>Note for {row.owner.displayName}</label>
-            <Input id={`desk-note-${row.tankId}`} value={note} onChange={(e) => setNote(e.target.value)} placeholder="Note for the keeper (optional)" className="min-w-40 flex-1 text-sm" />
-            {worst.status === 'open' ? <Button variant="secondary" busy={actions.busy} onClick={() => void run('acknowledge')}>I’ve seen it</Button> : null}
-            <Button variant="secondary" busy={actions.busy} onClick={() => void run('resolve')}>Resolve</Button>
-            <ButtonLink variant="ghost" to={`/tanks/${row.tankId}`}>Open tank</ButtonLink>
+            <label className="sr-only" htmlFor={`desk-note-${row.tankId}`}>
+              Note for {row.owner.displayName}
+            </label>
+            <Input
+              id={`desk-note-${row.tankId}`}
+              value={note}
+              onChange={(e) => setNote(e.target.value)}
+              placeholder="Note for the keeper (optional)"
+              className="min-w-40 flex-1 text-sm"
+            />
+            {worst.status === 'open' ? (
+              <Button variant="secondary" busy={actions.busy} onClick={() => void run('acknowledge')}>
+                I’ve seen it
+              </Button>
+            ) : null}
+            <Button variant="secondary" busy={actions.busy} onClick={() => void run('resolve')}>
+              Resolve
+            </Button>
+            <ButtonLink variant="ghost" to={`/tanks/${row.tankId}`}>
+              Open tank
+            </ButtonLink>
           </div>
-          {error ? <p role="alert" className="text-sm font-semibold text-danger">{error}</p> : null}
+          {error ? (
+            <p role="alert" className="text-sm font-semibold text-danger">
+              {error}
+            </p>
+          ) : null}
         </div>
       ) : (
         <p className="mt-3 text-sm text-ok">✔ Nothing flagged.</p>
@@ -88,7 +129,9 @@ export function DeskRow({ row, highlighted, actions }: { row: Row; highlighted: 
         <summary className="cursor-pointer">Why here (score {row.score})</summary>
         <ul className="mt-1 list-disc pl-5">
           {row.why.map((p) => (
-            <li key={p.label}>{p.label}: {p.points}</li>
+            <li key={p.label}>
+              {p.label}: {p.points}
+            </li>
           ))}
         </ul>
       </details>

@@ -33,7 +33,11 @@ function QuestionItem({ q, onOpen }: { q: HomeQuestion; onOpen: (q: HomeQuestion
         className={`block rounded-xl px-3 py-2 ring-1 hover:bg-tint ${unread ? 'bg-tint ring-focus' : 'bg-surface ring-line'}`}
       >
         <p className="flex flex-wrap items-center gap-2">
-          {unread ? <span className="rounded-full bg-accent px-2 py-0.5 text-xs font-extrabold text-on-accent">New reply</span> : null}
+          {unread ? (
+            <span className="rounded-full bg-accent px-2 py-0.5 text-xs font-extrabold text-on-accent">
+              New reply
+            </span>
+          ) : null}
           <span className="font-bold text-ink">{q.title}</span>
         </p>
         {q.lastReply ? (
@@ -53,25 +57,43 @@ function QuestionItem({ q, onOpen }: { q: HomeQuestion; onOpen: (q: HomeQuestion
 }
 
 /** Replies and open questions, newest first, and the mentor's good news: what the member should read today. */
-export function MentorWord({ questions, goodNews, onOpenQuestion }: { questions: HomeQuestion[]; goodNews: HomeGoodNews[]; onOpenQuestion: (q: HomeQuestion) => void }) {
+export function MentorWord({
+  questions,
+  goodNews,
+  onOpenQuestion,
+}: {
+  questions: HomeQuestion[];
+  goodNews: HomeGoodNews[];
+  onOpenQuestion: (q: HomeQuestion) => void;
+}) {
   return (
     <Card>
       <h2 className="text-lg font-extrabold text-ink">Questions and news</h2>
       {goodNews.length ? (
         <ul className="mt-3 space-y-2" aria-label="Good news">
-          {goodNews.map((g) => <GoodNewsItem key={`${g.kind}-${g.tankId}-${g.at}`} item={g} />)}
+          {goodNews.map((g) => (
+            <GoodNewsItem key={`${g.kind}-${g.tankId}-${g.at}`} item={g} />
+          ))}
         </ul>
       ) : null}
       {questions.length ? (
         <ul className="mt-3 space-y-2" aria-label="Your questions">
-          {questions.map((q) => <QuestionItem key={q.id} q={q} onOpen={onOpenQuestion} />)}
+          {questions.map((q) => (
+            <QuestionItem key={q.id} q={q} onOpen={onOpenQuestion} />
+          ))}
         </ul>
       ) : (
         <p className="mt-2 text-sm text-ink-muted">
-          No open questions. Unsure about a reading? Open the test on your tank’s page and ask your mentor about it.
+          No open questions. Unsure about a reading? Open the test on your tank’s page and ask your mentor
+          about it.
         </p>
       )}
-      <Link to="/questions" className="mt-3 inline-flex min-h-touch items-center text-sm font-bold text-link underline">All questions</Link>
+      <Link
+        to="/questions"
+        className="mt-3 inline-flex min-h-touch items-center text-sm font-bold text-link underline"
+      >
+        All questions
+      </Link>
     </Card>
   );
 }

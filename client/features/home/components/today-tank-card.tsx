@@ -24,7 +24,10 @@ function LastTest({ test, prefs }: { test: HomeTank['lastTest']; prefs: UnitPref
   const figures = (Object.entries(test.values) as [keyof typeof test.values, number][]).slice(0, 4);
   return (
     <p className="text-sm text-ink-muted" data-testid="last-test">
-      Last test <time dateTime={test.takenAt} title={new Date(test.takenAt).toLocaleString()}>{relativeTime(test.takenAt)}</time>
+      Last test{' '}
+      <time dateTime={test.takenAt} title={new Date(test.takenAt).toLocaleString()}>
+        {relativeTime(test.takenAt)}
+      </time>
       {figures.length ? ': ' : ''}
       {figures
         .map(([k, v]) => {
@@ -37,29 +40,55 @@ function LastTest({ test, prefs }: { test: HomeTank['lastTest']; prefs: UnitPref
 }
 
 /** One of the member's tanks: what state it is in, what is wrong, what to test today, and one action to do it. */
-export function TodayTankCard({ tank, now, timeZone, prefs }: { tank: HomeTank; now: number; timeZone: string; prefs: UnitPrefs }) {
+export function TodayTankCard({
+  tank,
+  now,
+  timeZone,
+  prefs,
+}: {
+  tank: HomeTank;
+  now: number;
+  timeZone: string;
+  prefs: UnitPrefs;
+}) {
   const { groups, toTest } = tankToday(tank, now, timeZone);
   const state = stateInWords(tank);
   const next = groups.later[0];
   const headingId = `tank-${tank.id}`;
   return (
-    <li className="rounded-card bg-surface p-4 shadow-card sm:p-5" aria-labelledby={headingId} data-tank-id={tank.id}>
+    <li
+      className="rounded-card bg-surface p-4 shadow-card sm:p-5"
+      aria-labelledby={headingId}
+      data-tank-id={tank.id}
+    >
       <div className="flex flex-wrap items-start justify-between gap-2">
         <div>
           <h3 id={headingId} className="text-lg font-extrabold text-ink">
-            <Link to={`/tanks/${tank.id}`} className="hover:underline">{tank.name}</Link>
+            <Link to={`/tanks/${tank.id}`} className="hover:underline">
+              {tank.name}
+            </Link>
           </h3>
           <p className="text-sm text-ink-muted">{SYSTEM_TYPE_LABELS[tank.systemType]}</p>
         </div>
-        <span className={`rounded-full px-3 py-1 text-sm font-bold ring-1 ${TONE[state.tone]}`}>{state.text}</span>
+        <span className={`rounded-full px-3 py-1 text-sm font-bold ring-1 ${TONE[state.tone]}`}>
+          {state.text}
+        </span>
       </div>
 
       {tank.worstConcern ? (
-        <Link to={`/tanks/${tank.id}`} className="mt-3 flex items-start gap-2 rounded-xl bg-canvas px-3 py-2 text-sm text-ink ring-1 ring-line hover:bg-tint">
+        <Link
+          to={`/tanks/${tank.id}`}
+          className="mt-3 flex items-start gap-2 rounded-xl bg-canvas px-3 py-2 text-sm text-ink ring-1 ring-line hover:bg-tint"
+        >
           <SeverityBadge severity={tank.worstConcern.severity} />
           <span>
             {tank.worstConcern.reason}
-            {tank.liveConcerns > 1 ? <span className="font-bold text-ink-muted"> +{tank.liveConcerns - 1} more on the tank page</span> : null}
+            {tank.liveConcerns > 1 ? (
+              <span className="font-bold text-ink-muted">
+                {' '}
+                +{tank.liveConcerns - 1} more on the tank page
+              </span>
+            ) : null}
           </span>
         </Link>
       ) : null}
@@ -70,19 +99,31 @@ export function TodayTankCard({ tank, now, timeZone, prefs }: { tank: HomeTank; 
             <h4 className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">To test today</h4>
             <ul className="mt-2 flex flex-wrap gap-2">
               {groups.overdue.map((d) => (
-                <li key={d.parameter} className="rounded-full bg-danger-soft px-3 py-1 text-sm font-bold text-danger ring-1 ring-danger/30" data-due="overdue">
+                <li
+                  key={d.parameter}
+                  className="rounded-full bg-danger-soft px-3 py-1 text-sm font-bold text-danger ring-1 ring-danger/30"
+                  data-due="overdue"
+                >
                   <span aria-hidden>▲ </span>
-                  {label(d.parameter)}: {d.lastTestedAt ? `${d.daysLate} day${d.daysLate === 1 ? '' : 's'} late` : 'not tested yet'}
+                  {label(d.parameter)}:{' '}
+                  {d.lastTestedAt ? `${d.daysLate} day${d.daysLate === 1 ? '' : 's'} late` : 'not tested yet'}
                 </li>
               ))}
               {groups.dueToday.map((d) => (
-                <li key={d.parameter} className="rounded-full bg-watch-soft px-3 py-1 text-sm font-bold text-watch ring-1 ring-watch/30" data-due="today">
+                <li
+                  key={d.parameter}
+                  className="rounded-full bg-watch-soft px-3 py-1 text-sm font-bold text-watch ring-1 ring-watch/30"
+                  data-due="today"
+                >
                   <span aria-hidden>● </span>
                   {label(d.parameter)}: due today
                 </li>
               ))}
             </ul>
-            <Link to={logTestPath(tank.id, toTest)} className={`${LINK_BUTTON.primary} mt-3 min-h-14 w-full text-lg`}>
+            <Link
+              to={logTestPath(tank.id, toTest)}
+              className={`${LINK_BUTTON.primary} mt-3 min-h-14 w-full text-lg`}
+            >
               {toTest.length <= 2 ? `Log ${listOf(toTest.map(label))}` : `Log today’s ${toTest.length} tests`}
             </Link>
           </>
@@ -90,9 +131,15 @@ export function TodayTankCard({ tank, now, timeZone, prefs }: { tank: HomeTank; 
           <>
             <p className="flex items-center gap-2 font-bold text-ok">
               <span aria-hidden>✓</span> Nothing to test today.
-              {next ? <span className="font-normal text-ink-muted">Next: {label(next.parameter)} {inDays(calendarDaysBetween(groups.today, next.dueDay))}.</span> : null}
+              {next ? (
+                <span className="font-normal text-ink-muted">
+                  Next: {label(next.parameter)} {inDays(calendarDaysBetween(groups.today, next.dueDay))}.
+                </span>
+              ) : null}
             </p>
-            <Link to={logTestPath(tank.id)} className={`${LINK_BUTTON.secondary} mt-3 w-full`}>Log a test anyway</Link>
+            <Link to={logTestPath(tank.id)} className={`${LINK_BUTTON.secondary} mt-3 w-full`}>
+              Log a test anyway
+            </Link>
           </>
         )}
       </section>

@@ -27,10 +27,14 @@ export function tankToday(tank: Pick<HomeTank, 'due'>, now: number, timeZone: st
 export type StateTone = 'settled' | 'cycling' | 'trouble';
 
 /** The tank's state in words: its cycle stage while cycling, "Settled" once established (unless it slipped back). */
-export function stateInWords(tank: Pick<HomeTank, 'phase' | 'cycleStage'>): { text: string; tone: StateTone } {
+export function stateInWords(tank: Pick<HomeTank, 'phase' | 'cycleStage'>): {
+  text: string;
+  tone: StateTone;
+} {
   if (tank.cycleStage === 'setback') return { text: 'Setback: ammonia or nitrite is back', tone: 'trouble' };
   if (tank.phase === 'established') return { text: 'Settled', tone: 'settled' };
-  const words = tank.cycleStage === 'cycled' ? 'cycle looks done: ask your mentor' : CYCLE_STAGE_WORDS[tank.cycleStage];
+  const words =
+    tank.cycleStage === 'cycled' ? 'cycle looks done: ask your mentor' : CYCLE_STAGE_WORDS[tank.cycleStage];
   return { text: words.charAt(0).toUpperCase() + words.slice(1), tone: 'cycling' };
 }
 

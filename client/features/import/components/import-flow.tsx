@@ -28,12 +28,24 @@ interface LoadedFile {
 }
 
 const isDelimiter = (d: string): d is Delimiter => (CSV_DELIMITERS as readonly string[]).includes(d);
-const messageOf = (e: unknown) => (e instanceof ApiError ? e.message : 'Could not reach Shoalwise. Check your connection and try again.');
+const messageOf = (e: unknown) =>
+  e instanceof ApiError ? e.message : 'Could not reach Shoalwise. Check your connection and try again.';
 /** A problem with the file itself (encoding, size, empty) sends the member back to choose another one. */
-const isFileProblem = (e: unknown) => e instanceof ApiError && (e.status === 413 || e.issues.some((i) => i.path === 'csv'));
+const isFileProblem = (e: unknown) =>
+  e instanceof ApiError && (e.status === 413 || e.issues.some((i) => i.path === 'csv'));
 
 /** Imports an old log: choose a file, say what each column holds, see every bad row, then save with progress. */
-export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string; tankId: string; prefs: UnitPrefs; timeZone: string }) {
+export function ImportFlow({
+  clubId,
+  tankId,
+  prefs,
+  timeZone,
+}: {
+  clubId: string;
+  tankId: string;
+  prefs: UnitPrefs;
+  timeZone: string;
+}) {
   const [step, setStep] = useState<Step>({ name: 'file' });
   const [file, setFile] = useState<LoadedFile>();
   const [columns, setColumns] = useState<string[]>([]);
@@ -52,15 +64,27 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
   };
 
   const choose = async (picked: File) => {
-    if (picked.size > CSV_MAX_BYTES) return setStep({ name: 'file', problem: `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB. Split it into smaller files.` });
+    if (picked.size > CSV_MAX_BYTES)
+      return setStep({
+        name: 'file',
+        problem: `The file is larger than ${CSV_MAX_BYTES / 1024 / 1024} MB. Split it into smaller files.`,
+      });
     const text = await picked.text();
     const glance = glanceAt(text);
     setFile({ name: picked.name, text, glance });
     setColumns(glance.header);
-    const guessed: ImportSettings = { mapping: Object.fromEntries(glance.header.map((h) => [h, guessTarget(h)])), units: {} };
+    const guessed: ImportSettings = {
+      mapping: Object.fromEntries(glance.header.map((h) => [h, guessTarget(h)])),
+      units: {},
+    };
     try {
       const preview = await runPreview(text, { mapping: {}, units: {} });
-      const found: ImportSettings = { mapping: preview.mapping, units: preview.units, dateFormat: preview.dateFormat, ...(isDelimiter(preview.delimiter) ? { delimiter: preview.delimiter } : {}) };
+      const found: ImportSettings = {
+        mapping: preview.mapping,
+        units: preview.units,
+        dateFormat: preview.dateFormat,
+        ...(isDelimiter(preview.delimiter) ? { delimiter: preview.delimiter } : {}),
+      };
       setColumns(preview.columns);
       setSettings(found);
       setChecked({ settings: found, preview });
@@ -74,7 +98,8 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
 
   const check = async () => {
     if (!file) return;
-    if (checked && JSON.stringify(checked.settings) === JSON.stringify(settings)) return setStep({ name: 'review', preview: checked.preview });
+    if (checked && JSON.stringify(checked.settings) === JSON.stringify(settings))
+      return setStep({ name: 'review', preview: checked.preview });
     try {
       const preview = await runPreview(file.text, settings);
       setColumns(preview.columns);
@@ -88,11 +113,19 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
   const save = async (preview: ImportPreview) => {
     if (!file) return;
     // The save says exactly what the checked preview resolved, so it cannot guess differently from the review.
-    const resolved: ImportSettings = { ...settings, mapping: preview.mapping, units: preview.units, dateFormat: preview.dateFormat, ...(isDelimiter(preview.delimiter) ? { delimiter: preview.delimiter } : {}) };
+    const resolved: ImportSettings = {
+      ...settings,
+      mapping: preview.mapping,
+      units: preview.units,
+      dateFormat: preview.dateFormat,
+      ...(isDelimiter(preview.delimiter) ? { delimiter: preview.delimiter } : {}),
+    };
     setStep({ name: 'saving', preview, fraction: 0 });
     try {
       // One request, one transaction: every valid row is saved, or none is.
-      const result = await commit(requestFor(file.text, resolved), (f) => setStep({ name: 'saving', preview, fraction: f < 1 ? f : null }));
+      const result = await commit(requestFor(file.text, resolved), (f) =>
+        setStep({ name: 'saving', preview, fraction: f < 1 ? f : null }),
+      );
       setStep({ name: 'done', preview, result });
     } catch (e) {
       setStep({ name: 'saving', preview, fraction: 0, problem: messageOf(e) });
@@ -106,40 +139,82 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
   };
 
   if (sending !== undefined) {
-    return <ProgressBar label={sending === null ? `Checking every row of ${file?.name ?? 'the file'}…` : 'Sending the file…'} fraction={sending} />;
+    return (
+      <ProgressBar
+        label={sending === null ? `Checking every row of ${file?.name ?? 'the file'}…` : 'Sending the file…'}
+        fraction={sending}
+      />
+    );
   }
   switch (step.name) {
     case 'file':
       return (
         <div className="space-y-4">
           {step.problem ? <Notice tone="error">{step.problem}</Notice> : null}
-          <p className="text-ink-muted">A CSV file from a spreadsheet: one row per test, a column with the date, and a column per reading. Nothing is saved until you have seen every row that has a problem.</p>
+          <p className="text-ink-muted">
+            A CSV file from a spreadsheet: one row per test, a column with the date, and a column per reading.
+            Nothing is saved until you have seen every row that has a problem.
+          </p>
           <label className="inline-flex min-h-14 cursor-pointer items-center gap-2 rounded-full bg-accent px-6 text-lg font-bold text-on-accent">
             Choose a CSV file
-            <input type="file" accept=".csv,text/csv,text/plain" className="sr-only" onChange={(e) => { const f = e.target.files?.[0]; e.target.value = ''; if (f) void choose(f); }} />
+            <input
+              type="file"
+              accept=".csv,text/csv,text/plain"
+              className="sr-only"
+              onChange={(e) => {
+                const f = e.target.files?.[0];
+                e.target.value = '';
+                if (f) void choose(f);
+              }}
+            />
           </label>
         </div>
       );
     case 'mapping':
       return (
         <div className="space-y-3">
-          <p className="text-sm font-bold text-ink-muted">{file?.name}{checked ? ` · ${checked.preview.rows.toLocaleString()} rows` : ''}</p>
-          <MappingStep columns={columns} glance={file!.glance} settings={settings} problem={step.problem} busy={false} timeZone={timeZone} onChange={setSettings} onCheck={() => void check()} onBack={restart} />
+          <p className="text-sm font-bold text-ink-muted">
+            {file?.name}
+            {checked ? ` · ${checked.preview.rows.toLocaleString()} rows` : ''}
+          </p>
+          <MappingStep
+            columns={columns}
+            glance={file!.glance}
+            settings={settings}
+            problem={step.problem}
+            busy={false}
+            timeZone={timeZone}
+            onChange={setSettings}
+            onCheck={() => void check()}
+            onBack={restart}
+          />
         </div>
       );
     case 'review':
-      return <ReviewStep preview={step.preview} prefs={prefs} onConfirm={() => void save(step.preview)} onBack={() => setStep({ name: 'mapping' })} />;
+      return (
+        <ReviewStep
+          preview={step.preview}
+          prefs={prefs}
+          onConfirm={() => void save(step.preview)}
+          onBack={() => setStep({ name: 'mapping' })}
+        />
+      );
     case 'saving':
       return (
         <div className="space-y-4">
           <ProgressBar
-            label={step.fraction === null ? `Saving ${step.preview.valid.toLocaleString()} tests in one go…` : `Sending ${step.preview.valid.toLocaleString()} tests…`}
+            label={
+              step.fraction === null
+                ? `Saving ${step.preview.valid.toLocaleString()} tests in one go…`
+                : `Sending ${step.preview.valid.toLocaleString()} tests…`
+            }
             fraction={step.fraction}
           />
           {step.problem ? (
             <>
               <Notice tone="error">
-                {step.problem} Nothing was saved: the file is saved all together or not at all, so it is safe to try again.
+                {step.problem} Nothing was saved: the file is saved all together or not at all, so it is safe
+                to try again.
               </Notice>
               <Button onClick={() => void save(step.preview)}>Try again</Button>
             </>
@@ -150,13 +225,20 @@ export function ImportFlow({ clubId, tankId, prefs, timeZone }: { clubId: string
       return (
         <div className="space-y-4">
           <Notice tone="success">
-            Saved {step.result.imported.toLocaleString()} {step.result.imported === 1 ? 'test' : 'tests'} from {file?.name}.
-            {step.preview.invalid ? ` ${step.preview.invalid.toLocaleString()} rows with errors were left out.` : ''}
-            {step.result.duplicates || step.preview.duplicates ? ` ${Math.max(step.result.duplicates, step.preview.duplicates).toLocaleString()} were already on the tank.` : ''}
+            Saved {step.result.imported.toLocaleString()} {step.result.imported === 1 ? 'test' : 'tests'} from{' '}
+            {file?.name}.
+            {step.preview.invalid
+              ? ` ${step.preview.invalid.toLocaleString()} rows with errors were left out.`
+              : ''}
+            {step.result.duplicates || step.preview.duplicates
+              ? ` ${Math.max(step.result.duplicates, step.preview.duplicates).toLocaleString()} were already on the tank.`
+              : ''}
           </Notice>
           <div className="flex flex-wrap gap-2">
             <ButtonLink to={`/tanks/${tankId}`}>See them on the charts</ButtonLink>
-            <Button variant="secondary" onClick={restart}>Import another file</Button>
+            <Button variant="secondary" onClick={restart}>
+              Import another file
+            </Button>
           </div>
         </div>
       );

@@ -1,4 +1,9 @@
-import type { CsvImportInput, DateFormat, ImportTarget, ImportUnits } from '@shared/schemas/csv-import.schema';
+import type {
+  CsvImportInput,
+  DateFormat,
+  ImportTarget,
+  ImportUnits,
+} from '@shared/schemas/csv-import.schema';
 import type { CSV_DELIMITERS } from '@shared/schemas/csv-import.schema';
 
 export type Delimiter = (typeof CSV_DELIMITERS)[number];

@@ -15,7 +15,10 @@ export function ProgressBar({ label, fraction }: { label: string; fraction: numb
         aria-valuenow={pct ?? undefined}
         className="mt-1 h-3 overflow-hidden rounded-full bg-tint-strong"
       >
-        <div className={`h-full rounded-full bg-accent transition-[width] duration-300 ${pct === null ? 'w-1/3 animate-pulse' : ''}`} style={pct === null ? undefined : { width: `${pct}%` }} />
+        <div
+          className={`h-full rounded-full bg-accent transition-[width] duration-300 ${pct === null ? 'w-1/3 animate-pulse' : ''}`}
+          style={pct === null ? undefined : { width: `${pct}%` }}
+        />
       </div>
     </div>
   );

@@ -11,7 +11,12 @@ export interface CsvGlance {
 
 /** The header and first rows, parsed in the browser the way the server reads the file. */
 export function glanceAt(text: string, delimiter?: string): CsvGlance {
-  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), { delimiter: delimiter ?? '', delimitersToGuess: [...CSV_DELIMITERS], preview: 6, skipEmptyLines: 'greedy' });
+  const parsed = Papa.parse<string[]>(text.replace(/^\uFEFF/, ''), {
+    delimiter: delimiter ?? '',
+    delimitersToGuess: [...CSV_DELIMITERS],
+    preview: 6,
+    skipEmptyLines: 'greedy',
+  });
   const [header = [], ...rows] = parsed.data;
   return { header: header.map((h) => h.trim()), rows, delimiter: parsed.meta.delimiter || ',' };
 }

@@ -19,12 +19,25 @@ type Bench = Record<(typeof BENCH)[number]['key'], string>;
 
 function toInput(values: Bench): CreateWaterTestInput {
   const entries: Record<string, { value: number; unit: string }> = {};
-  for (const b of BENCH) if (values[b.key].trim() !== '') entries[b.key] = { value: Number(values[b.key]), unit: b.unit };
-  return { takenAt: new Date().toISOString(), entries: entries as CreateWaterTestInput['entries'], note: 'Tested at the club’s water-testing clinic.' };
+  for (const b of BENCH)
+    if (values[b.key].trim() !== '') entries[b.key] = { value: Number(values[b.key]), unit: b.unit };
+  return {
+    takenAt: new Date().toISOString(),
+    entries: entries as CreateWaterTestInput['entries'],
+    note: 'Tested at the club’s water-testing clinic.',
+  };
 }
 
 /** The clinic mentor's quick form for one sample; it is saved as a water test on the member's tank. */
-export function ClinicResultForm({ clubId, meetupId, row }: { clubId: string; meetupId: string; row: AttendanceRowView }) {
+export function ClinicResultForm({
+  clubId,
+  meetupId,
+  row,
+}: {
+  clubId: string;
+  meetupId: string;
+  row: AttendanceRowView;
+}) {
   const record = useRecordClinicResult(clubId, meetupId);
   const [open, setOpen] = useState(false);
   const [values, setValues] = useState<Bench>({ ammonia: '', nitrite: '', nitrate: '', pH: '' });
@@ -36,26 +49,47 @@ export function ClinicResultForm({ clubId, meetupId, row }: { clubId: string; me
       </Button>
     );
   }
-  const issue = (key: string) => (record.error instanceof ApiError ? record.error.issues.find((i) => i.path.startsWith(`entries.${key}`))?.message : undefined);
+  const issue = (key: string) =>
+    record.error instanceof ApiError
+      ? record.error.issues.find((i) => i.path.startsWith(`entries.${key}`))?.message
+      : undefined;
   return (
     <form
       aria-label={`Results for ${row.displayName}`}
       className="my-2 w-full space-y-3 rounded-xl bg-tint p-3"
       onSubmit={(e) => {
         e.preventDefault();
-        record.mutate({ userId: row.userId, tankId: row.tank!.id, input: toInput(values) }, { onSuccess: () => setOpen(false) });
+        record.mutate(
+          { userId: row.userId, tankId: row.tank!.id, input: toInput(values) },
+          { onSuccess: () => setOpen(false) },
+        );
       }}
     >
       <p className="text-sm font-bold text-ink-soft">Water from {row.tank.name}: fill in what you tested.</p>
       <div className="grid grid-cols-2 gap-3">
         {BENCH.map((b) => (
-          <TextField key={b.key} label={b.label} type="number" inputMode="decimal" step="any" value={values[b.key]} error={issue(b.key)} onChange={(e) => setValues((v) => ({ ...v, [b.key]: e.target.value }))} />
+          <TextField
+            key={b.key}
+            label={b.label}
+            type="number"
+            inputMode="decimal"
+            step="any"
+            value={values[b.key]}
+            error={issue(b.key)}
+            onChange={(e) => setValues((v) => ({ ...v, [b.key]: e.target.value }))}
+          />
         ))}
       </div>
-      {record.isError && !BENCH.some((b) => issue(b.key)) ? <Notice tone="error">{record.error.message}</Notice> : null}
+      {record.isError && !BENCH.some((b) => issue(b.key)) ? (
+        <Notice tone="error">{record.error.message}</Notice>
+      ) : null}
       <div className="flex gap-2">
-        <Button type="submit" busy={record.isPending}>Save on their tank</Button>
-        <Button variant="ghost" onClick={() => setOpen(false)}>Close</Button>
+        <Button type="submit" busy={record.isPending}>
+          Save on their tank
+        </Button>
+        <Button variant="ghost" onClick={() => setOpen(false)}>
+          Close
+        </Button>
       </div>
     </form>
   );

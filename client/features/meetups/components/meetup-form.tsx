@@ -1,7 +1,11 @@
 import { useMemo, useState } from 'react';
 import { useForm, useWatch } from 'react-hook-form';
 import { CLINIC_SLOT_MINUTES, MEETUP_KIND_LABELS, MEETUP_KINDS } from '@shared/constants/meetups';
-import { createMeetupSchema, type CreateMeetupInput, type UpdateMeetupInput } from '@shared/schemas/meetup.schema';
+import {
+  createMeetupSchema,
+  type CreateMeetupInput,
+  type UpdateMeetupInput,
+} from '@shared/schemas/meetup.schema';
 import { Button } from '@client/components/ui/button';
 import { Notice } from '@client/components/ui/card';
 import { ConfirmDialog } from '@client/components/ui/confirm-dialog';
@@ -40,7 +44,10 @@ export function MeetupForm({
   onCreate?: (input: CreateMeetupInput) => Promise<unknown>;
   onUpdate?: (patch: UpdateMeetupInput) => Promise<unknown>;
 }) {
-  const resolver = useMemo(() => schemaResolver<MeetupFormValues, typeof createMeetupSchema>(createMeetupSchema, toInput, fieldOf), []);
+  const resolver = useMemo(
+    () => schemaResolver<MeetupFormValues, typeof createMeetupSchema>(createMeetupSchema, toInput, fieldOf),
+    [],
+  );
   const form = useForm<MeetupFormValues, unknown, unknown>({ defaultValues: initial, resolver });
   const kind = useWatch({ control: form.control, name: 'kind' });
   const [notice, setNotice] = useState<string>();
@@ -68,27 +75,79 @@ export function MeetupForm({
 
   return (
     <form onSubmit={submit} noValidate aria-label={submitLabel} className="space-y-4">
-      {formError ?? notice ? <Notice tone="error">{formError ?? notice}</Notice> : null}
-      <SelectField label="Kind of meetup" options={MEETUP_KINDS.map((k) => ({ value: k, label: MEETUP_KIND_LABELS[k] }))} error={errors.kind?.message} {...form.register('kind')} />
+      {(formError ?? notice) ? <Notice tone="error">{formError ?? notice}</Notice> : null}
+      <SelectField
+        label="Kind of meetup"
+        options={MEETUP_KINDS.map((k) => ({ value: k, label: MEETUP_KIND_LABELS[k] }))}
+        error={errors.kind?.message}
+        {...form.register('kind')}
+      />
       <TextField label="Title" error={errors.title?.message} {...form.register('title')} />
-      <TextAreaField label="What it is about" rows={4} error={errors.description?.message} {...form.register('description')} />
+      <TextAreaField
+        label="What it is about"
+        rows={4}
+        error={errors.description?.message}
+        {...form.register('description')}
+      />
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Starts" type="datetime-local" hint={`Club time (${timeZone})`} error={errors.startsAt?.message} {...form.register('startsAt')} />
-        <TextField label="Ends" type="datetime-local" hint={`Club time (${timeZone})`} error={errors.endsAt?.message} {...form.register('endsAt')} />
+        <TextField
+          label="Starts"
+          type="datetime-local"
+          hint={`Club time (${timeZone})`}
+          error={errors.startsAt?.message}
+          {...form.register('startsAt')}
+        />
+        <TextField
+          label="Ends"
+          type="datetime-local"
+          hint={`Club time (${timeZone})`}
+          error={errors.endsAt?.message}
+          {...form.register('endsAt')}
+        />
       </div>
       {kind === 'online' ? (
-        <TextField label="Link to join" type="url" inputMode="url" placeholder="https://" error={errors.onlineUrl?.message} {...form.register('onlineUrl')} />
+        <TextField
+          label="Link to join"
+          type="url"
+          inputMode="url"
+          placeholder="https://"
+          error={errors.onlineUrl?.message}
+          {...form.register('onlineUrl')}
+        />
       ) : (
         <>
-          <TextField label="Where" hint="The address or room, as members should read it." error={errors.placeText?.message} {...form.register('placeText')} />
-          <TextField label="Map link (optional)" type="url" inputMode="url" placeholder="https://" error={errors.mapUrl?.message} {...form.register('mapUrl')} />
+          <TextField
+            label="Where"
+            hint="The address or room, as members should read it."
+            error={errors.placeText?.message}
+            {...form.register('placeText')}
+          />
+          <TextField
+            label="Map link (optional)"
+            type="url"
+            inputMode="url"
+            placeholder="https://"
+            error={errors.mapUrl?.message}
+            {...form.register('mapUrl')}
+          />
         </>
       )}
       <div className="grid gap-4 sm:grid-cols-2">
-        <TextField label="Places" type="number" inputMode="numeric" min={1} hint="When they are taken, people join a waitlist." error={errors.capacity?.message} {...form.register('capacity')} />
+        <TextField
+          label="Places"
+          type="number"
+          inputMode="numeric"
+          min={1}
+          hint="When they are taken, people join a waitlist."
+          error={errors.capacity?.message}
+          {...form.register('capacity')}
+        />
         <SelectField
           label={kind === 'clinic' ? 'Mentor running the clinic' : 'Run by (optional)'}
-          options={[{ value: '', label: kind === 'clinic' ? 'Choose a mentor' : 'Nobody in particular' }, ...hosts.map((h) => ({ value: h.userId, label: h.displayName }))]}
+          options={[
+            { value: '', label: kind === 'clinic' ? 'Choose a mentor' : 'Nobody in particular' },
+            ...hosts.map((h) => ({ value: h.userId, label: h.displayName })),
+          ]}
           error={errors.hostId?.message}
           {...form.register('hostId')}
         />
@@ -105,7 +164,9 @@ export function MeetupForm({
           {...form.register('slotMinutes')}
         />
       ) : null}
-      <Button type="submit" busy={busy && !confirming}>{submitLabel}</Button>
+      <Button type="submit" busy={busy && !confirming}>
+        {submitLabel}
+      </Button>
       <ConfirmDialog
         open={confirming !== null}
         title="Tell everyone about the change?"
@@ -114,7 +175,12 @@ export function MeetupForm({
         onConfirm={() => confirming && void send(() => onUpdate!(confirming))}
         onCancel={() => setConfirming(null)}
       >
-        <p>{expected === 1 ? 'One person is going or on the waitlist. They get' : `${expected} people are going or on the waitlist. Each of them gets`} an e-mail saying what changed, with the updated calendar entry.</p>
+        <p>
+          {expected === 1
+            ? 'One person is going or on the waitlist. They get'
+            : `${expected} people are going or on the waitlist. Each of them gets`}{' '}
+          an e-mail saying what changed, with the updated calendar entry.
+        </p>
       </ConfirmDialog>
     </form>
   );

@@ -15,23 +15,51 @@ export function RsvpPanel({ clubId, meetup }: { clubId: string; meetup: MeetupDe
   return (
     <Card>
       <h2 className="text-lg font-extrabold text-ink">Are you coming?</h2>
-      <div className="mt-1 flex flex-wrap items-center gap-2"><Places meetup={meetup} /><MyAnswer mine={meetup.mine} /></div>
+      <div className="mt-1 flex flex-wrap items-center gap-2">
+        <Places meetup={meetup} />
+        <MyAnswer mine={meetup.mine} />
+      </div>
       {status === 'waitlisted' ? (
-        <p className="mt-2 text-sm text-ink-soft">All places are taken. You are number {meetup.mine?.waitlistPosition} in line: when someone drops out, the place goes to the next person and we e-mail them.</p>
+        <p className="mt-2 text-sm text-ink-soft">
+          All places are taken. You are number {meetup.mine?.waitlistPosition} in line: when someone drops
+          out, the place goes to the next person and we e-mail them.
+        </p>
       ) : null}
       {open ? (
         <div className="mt-4 flex flex-wrap gap-2">
-          <Button variant={status === 'going' || status === 'waitlisted' ? 'secondary' : 'primary'} aria-pressed={status === 'going' || status === 'waitlisted'} busy={rsvp.isPending && rsvp.variables?.response === 'going'} onClick={() => rsvp.mutate({ response: 'going' })}>
+          <Button
+            variant={status === 'going' || status === 'waitlisted' ? 'secondary' : 'primary'}
+            aria-pressed={status === 'going' || status === 'waitlisted'}
+            busy={rsvp.isPending && rsvp.variables?.response === 'going'}
+            onClick={() => rsvp.mutate({ response: 'going' })}
+          >
             {full && status !== 'going' ? 'Join the waitlist' : 'I’m going'}
           </Button>
-          <Button variant="secondary" aria-pressed={status === 'not-going'} busy={rsvp.isPending && rsvp.variables?.response === 'not-going'} onClick={() => rsvp.mutate({ response: 'not-going' })}>
-            {status === 'going' ? 'I can’t come after all' : status === 'waitlisted' ? 'Leave the waitlist' : 'Not going'}
+          <Button
+            variant="secondary"
+            aria-pressed={status === 'not-going'}
+            busy={rsvp.isPending && rsvp.variables?.response === 'not-going'}
+            onClick={() => rsvp.mutate({ response: 'not-going' })}
+          >
+            {status === 'going'
+              ? 'I can’t come after all'
+              : status === 'waitlisted'
+                ? 'Leave the waitlist'
+                : 'Not going'}
           </Button>
         </div>
       ) : (
-        <p className="mt-3 text-sm text-ink-muted">{meetup.status === 'cancelled' ? 'This meetup was cancelled.' : 'Answers are closed: it has started.'}</p>
+        <p className="mt-3 text-sm text-ink-muted">
+          {meetup.status === 'cancelled'
+            ? 'This meetup was cancelled.'
+            : 'Answers are closed: it has started.'}
+        </p>
       )}
-      {rsvp.isError ? <div className="mt-3"><Notice tone="error">{rsvp.error.message}</Notice></div> : null}
+      {rsvp.isError ? (
+        <div className="mt-3">
+          <Notice tone="error">{rsvp.error.message}</Notice>
+        </div>
+      ) : null}
     </Card>
   );
 }

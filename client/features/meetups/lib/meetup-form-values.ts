@@ -17,20 +17,49 @@ export interface MeetupFormValues {
   slotMinutes: string;
 }
 
-export const FORM_FIELDS = ['kind', 'title', 'description', 'startsAt', 'endsAt', 'placeText', 'mapUrl', 'onlineUrl', 'capacity', 'hostId', 'slotMinutes'] as const;
+export const FORM_FIELDS = [
+  'kind',
+  'title',
+  'description',
+  'startsAt',
+  'endsAt',
+  'placeText',
+  'mapUrl',
+  'onlineUrl',
+  'capacity',
+  'hostId',
+  'slotMinutes',
+] as const;
 
 export function blankMeetup(localNow: string): MeetupFormValues {
   const day = localNow.slice(0, 10);
   return {
-    kind: 'talk', title: '', description: '', startsAt: `${day}T19:00`, endsAt: `${day}T21:00`, placeText: '', mapUrl: '', onlineUrl: '',
-    capacity: '30', hostId: '', slotMinutes: String(CLINIC_SLOT_MINUTES.default),
+    kind: 'talk',
+    title: '',
+    description: '',
+    startsAt: `${day}T19:00`,
+    endsAt: `${day}T21:00`,
+    placeText: '',
+    mapUrl: '',
+    onlineUrl: '',
+    capacity: '30',
+    hostId: '',
+    slotMinutes: String(CLINIC_SLOT_MINUTES.default),
   };
 }
 
 export function valuesOf(m: MeetupDetailView): MeetupFormValues {
   return {
-    kind: m.kind, title: m.title, description: m.description, startsAt: m.local.startsAt, endsAt: m.local.endsAt, placeText: m.placeText,
-    mapUrl: m.mapUrl ?? '', onlineUrl: m.onlineUrl ?? '', capacity: String(m.capacity), hostId: m.host?.userId ?? '',
+    kind: m.kind,
+    title: m.title,
+    description: m.description,
+    startsAt: m.local.startsAt,
+    endsAt: m.local.endsAt,
+    placeText: m.placeText,
+    mapUrl: m.mapUrl ?? '',
+    onlineUrl: m.onlineUrl ?? '',
+    capacity: String(m.capacity),
+    hostId: m.host?.userId ?? '',
     slotMinutes: String(m.slotMinutes ?? CLINIC_SLOT_MINUTES.default),
   };
 }
@@ -65,7 +94,9 @@ export function patchOf(values: MeetupFormValues, initial: MeetupFormValues): Up
 }
 
 /** Who may run a meetup: the club's active mentors and admins. */
-export function hostsAmong(members: readonly { userId: string; displayName: string; role: string; status: string }[]): { userId: string; displayName: string }[] {
+export function hostsAmong(
+  members: readonly { userId: string; displayName: string; role: string; status: string }[],
+): { userId: string; displayName: string }[] {
   return members
     .filter((m) => m.status === 'active' && (m.role === 'mentor' || m.role === 'admin'))
     .map((m) => ({ userId: m.userId, displayName: m.displayName }))

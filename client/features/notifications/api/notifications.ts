@@ -1,6 +1,10 @@
 import { queryOptions, useMutation, useQuery, useQueryClient } from '@tanstack/react-query';
 import type { UpdateNotificationPreferencesInput } from '@shared/schemas/notification.schema';
-import type { NotificationPage, NotificationPreferencesView, NotificationView } from '@shared/schemas/notification-views';
+import type {
+  NotificationPage,
+  NotificationPreferencesView,
+  NotificationView,
+} from '@shared/schemas/notification-views';
 import { api } from '@client/lib/api-client';
 
 export const notificationKeys = {
@@ -27,10 +31,17 @@ export const usePreferences = () => useQuery(preferencesQuery());
 export function useMarkRead() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (id: string) => api.post<{ notification: NotificationView; unreadCount: number }>(`/me/notifications/${id}/read`),
+    mutationFn: (id: string) =>
+      api.post<{ notification: NotificationView; unreadCount: number }>(`/me/notifications/${id}/read`),
     onSuccess: ({ notification, unreadCount }) => {
-      qc.setQueryData(notificationKeys.list(), (page: NotificationPage | undefined) =>
-        page && { ...page, unreadCount, notifications: page.notifications.map((n) => (n.id === notification.id ? notification : n)) },
+      qc.setQueryData(
+        notificationKeys.list(),
+        (page: NotificationPage | undefined) =>
+          page && {
+            ...page,
+            unreadCount,
+            notifications: page.notifications.map((n) => (n.id === notification.id ? notification : n)),
+          },
       );
     },
   });
@@ -47,7 +58,8 @@ export function useMarkAllRead() {
 export function useUpdatePreferences() {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: UpdateNotificationPreferencesInput) => api.patch<NotificationPreferencesView>('/me/notification-preferences', input),
+    mutationFn: (input: UpdateNotificationPreferencesInput) =>
+      api.patch<NotificationPreferencesView>('/me/notification-preferences', input),
     onSuccess: (view) => qc.setQueryData(notificationKeys.preferences(), view),
   });
 }

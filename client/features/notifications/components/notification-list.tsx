@@ -19,10 +19,23 @@ export function NotificationList(p: {
         const unread = n.readAt === null;
         return (
           <li key={n.id} className={`flex items-start gap-2 px-2 py-2 ${unread ? 'bg-tint/60' : ''}`}>
-            <span aria-hidden className={`mt-3 size-2.5 shrink-0 rounded-full ${unread ? (ACCENT[n.kind] ?? 'bg-accent') : 'bg-transparent'}`} />
-            <button type="button" onClick={() => p.onOpen(n)} className="min-h-touch flex-1 rounded-lg px-1 py-1 text-left hover:bg-tint">
-              <span className={`block text-sm ${unread ? 'font-extrabold text-ink' : 'font-semibold text-ink-soft'}`}>{n.title}</span>
-              {n.body ? <span className="mt-0.5 line-clamp-2 block text-sm text-ink-muted">{n.body}</span> : null}
+            <span
+              aria-hidden
+              className={`mt-3 size-2.5 shrink-0 rounded-full ${unread ? (ACCENT[n.kind] ?? 'bg-accent') : 'bg-transparent'}`}
+            />
+            <button
+              type="button"
+              onClick={() => p.onOpen(n)}
+              className="min-h-touch flex-1 rounded-lg px-1 py-1 text-left hover:bg-tint"
+            >
+              <span
+                className={`block text-sm ${unread ? 'font-extrabold text-ink' : 'font-semibold text-ink-soft'}`}
+              >
+                {n.title}
+              </span>
+              {n.body ? (
+                <span className="mt-0.5 line-clamp-2 block text-sm text-ink-muted">{n.body}</span>
+              ) : null}
               <span className="mt-0.5 block text-xs text-ink-muted">
                 {n.clubName} · <RelativeTime at={n.createdAt} />
                 {unread ? <span className="sr-only"> · unread</span> : null}

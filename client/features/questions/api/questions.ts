@@ -9,7 +9,8 @@ export type ListStatus = 'open' | 'all';
 export const questionKeys = {
   all: (clubId: string) => ['questions', clubId] as const,
   lists: (clubId: string) => [...questionKeys.all(clubId), 'list'] as const,
-  list: (clubId: string, filter: { status: ListStatus; tankId?: string }) => [...questionKeys.lists(clubId), filter] as const,
+  list: (clubId: string, filter: { status: ListStatus; tankId?: string }) =>
+    [...questionKeys.lists(clubId), filter] as const,
   detail: (clubId: string, questionId: string) => [...questionKeys.all(clubId), 'one', questionId] as const,
 };
 
@@ -21,7 +22,9 @@ export const questionListQuery = (clubId: string, filter: { status: ListStatus; 
     queryFn: ({ signal }) => {
       const qs = new URLSearchParams({ status: filter.status });
       if (filter.tankId) qs.set('tankId', filter.tankId);
-      return api.get<{ questions: QuestionSummaryView[] }>(`${base(clubId)}?${qs}`, signal).then((r) => r.questions);
+      return api
+        .get<{ questions: QuestionSummaryView[] }>(`${base(clubId)}?${qs}`, signal)
+        .then((r) => r.questions);
     },
     enabled: Boolean(clubId),
   });
@@ -33,14 +36,19 @@ export const questionQuery = (clubId: string, questionId: string) =>
     enabled: Boolean(clubId && questionId),
   });
 
-export const useQuestions = (clubId: string, filter: { status: ListStatus; tankId?: string }) => useQuery(questionListQuery(clubId, filter));
-export const useQuestion = (clubId: string, questionId: string) => useQuery(questionQuery(clubId, questionId));
+export const useQuestions = (clubId: string, filter: { status: ListStatus; tankId?: string }) =>
+  useQuery(questionListQuery(clubId, filter));
+export const useQuestion = (clubId: string, questionId: string) =>
+  useQuery(questionQuery(clubId, questionId));
 
 export function useAskQuestion(clubId: string, tankId: string) {
   const qc = useQueryClient();
   return useMutation({
     mutationFn: (input: AskQuestionInput) =>
-      api.post<{ question: QuestionSummaryView & { body: string }; mentioned: PersonRef[] }>(`/clubs/${clubId}/tanks/${tankId}/questions`, input),
+      api.post<{ question: QuestionSummaryView & { body: string }; mentioned: PersonRef[] }>(
+        `/clubs/${clubId}/tanks/${tankId}/questions`,
+        input,
+      ),
     onSuccess: () => qc.invalidateQueries({ queryKey: questionKeys.lists(clubId) }),
   });
 }
@@ -48,10 +56,20 @@ export function useAskQuestion(clubId: string, tankId: string) {
 export function useReply(clubId: string, questionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (input: ReplyInput) => api.post<{ reply: ReplyView; question: QuestionSummaryView; mentioned: PersonRef[] }>(`${base(clubId)}/${questionId}/replies`, input),
+    mutationFn: (input: ReplyInput) =>
+      api.post<{ reply: ReplyView; question: QuestionSummaryView; mentioned: PersonRef[] }>(
+        `${base(clubId)}/${questionId}/replies`,
+        input,
+      ),
     onSuccess: ({ reply, question }) => {
-      qc.setQueryData(questionKeys.detail(clubId, questionId), (d: QuestionDetailView | undefined) =>
-        d && { ...d, question: { ...d.question, ...question }, replies: d.replies.some((r) => r.id === reply.id) ? d.replies : [...d.replies, reply] },
+      qc.setQueryData(
+        questionKeys.detail(clubId, questionId),
+        (d: QuestionDetailView | undefined) =>
+          d && {
+            ...d,
+            question: { ...d.question, ...question },
+            replies: d.replies.some((r) => r.id === reply.id) ? d.replies : [...d.replies, reply],
+          },
       );
       void qc.invalidateQueries({ queryKey: questionKeys.lists(clubId) });
     },
@@ -61,9 +79,13 @@ export function useReply(clubId: string, questionId: string) {
 export function useMarkAnswered(clubId: string, questionId: string) {
   const qc = useQueryClient();
   return useMutation({
-    mutationFn: (answered: boolean) => api.post<{ question: QuestionSummaryView }>(`${base(clubId)}/${questionId}/answered`, { answered }),
+    mutationFn: (answered: boolean) =>
+      api.post<{ question: QuestionSummaryView }>(`${base(clubId)}/${questionId}/answered`, { answered }),
     onSuccess: ({ question }) => {
-      qc.setQueryData(questionKeys.detail(clubId, questionId), (d: QuestionDetailView | undefined) => d && { ...d, question: { ...d.question, ...question } });
+      qc.setQueryData(
+        questionKeys.detail(clubId, questionId),
+        (d: QuestionDetailView | undefined) => d && { ...d, question: { ...d.question, ...question } },
+      );
       void qc.invalidateQueries({ queryKey: questionKeys.lists(clubId) });
     },
   });

@@ -13,10 +13,14 @@ export const recentReadingsQuery = (clubId: string, tankId: string) =>
       const base = `/clubs/${clubId}/tanks/${tankId}`;
       const [tests, observations] = await Promise.all([
         api.get<Page<WaterTestView>>(`${base}/water-tests?limit=${RECENT}`, signal),
-        api.get<Page<TankEventView<'observation'>>>(`${base}/events?kind=observation&limit=${RECENT}`, signal),
+        api.get<Page<TankEventView<'observation'>>>(
+          `${base}/events?kind=observation&limit=${RECENT}`,
+          signal,
+        ),
       ]);
       return { tests: tests.items, observations: observations.items };
     },
   });
 
-export const useRecentReadings = (clubId: string, tankId: string) => useQuery(recentReadingsQuery(clubId, tankId));
+export const useRecentReadings = (clubId: string, tankId: string) =>
+  useQuery(recentReadingsQuery(clubId, tankId));

@@ -10,7 +10,6 @@ import { ApiError } from '@client/lib/api-client';
 import { useAskQuestion } from '../api/questions';
 import { useDraft } from '../lib/use-draft';
 
-
 interface Props {
   clubId: string;
   tankId: string;
@@ -22,7 +21,14 @@ interface Props {
 }
 
 /** "Ask about this" beside a water test or an observation: a short form that opens the question's thread once sent. */
-export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId, label = 'Ask about this' }: Props) {
+export function AskAboutReading({
+  clubId,
+  tankId,
+  waterTestId,
+  eventId,
+  ownerId,
+  label = 'Ask about this',
+}: Props) {
   const ability = useAbility<AppAbility>();
   const about = waterTestId ?? eventId ?? '';
   const [open, setOpen] = useState(false);
@@ -36,7 +42,12 @@ export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId,
   const error = ask.error instanceof ApiError ? ask.error : undefined;
   const send = async () => {
     try {
-      const res = await ask.mutateAsync({ title, body, mentionIds: [], ...(waterTestId ? { waterTestId } : { eventId }) });
+      const res = await ask.mutateAsync({
+        title,
+        body,
+        mentionIds: [],
+        ...(waterTestId ? { waterTestId } : { eventId }),
+      });
       clearTitle();
       clearBody();
       void navigate(`/questions/${res.question.id}`);
@@ -47,7 +58,13 @@ export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId,
 
   if (!open) {
     return (
-      <Button type="button" variant="secondary" onClick={() => setOpen(true)} aria-expanded={false} aria-controls={id}>
+      <Button
+        type="button"
+        variant="secondary"
+        onClick={() => setOpen(true)}
+        aria-expanded={false}
+        aria-controls={id}
+      >
         <span aria-hidden>?</span> {label}
       </Button>
     );
@@ -62,7 +79,16 @@ export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId,
         void send();
       }}
     >
-      <TextField id={`${id}-title`} label="Your question" value={title} maxLength={QUESTION_TITLE_MAX} required onChange={(e) => setTitle(e.target.value)} placeholder="Is this nitrate OK for my seahorses?" error={error?.fieldMessage('title')} />
+      <TextField
+        id={`${id}-title`}
+        label="Your question"
+        value={title}
+        maxLength={QUESTION_TITLE_MAX}
+        required
+        onChange={(e) => setTitle(e.target.value)}
+        placeholder="Is this nitrate OK for my seahorses?"
+        error={error?.fieldMessage('title')}
+      />
       <TextAreaField
         id={`${id}-body`}
         label="Details"
@@ -76,11 +102,17 @@ export function AskAboutReading({ clubId, tankId, waterTestId, eventId, ownerId,
         error={error?.fieldMessage('body')}
       />
       {ask.isError && !error?.fieldMessage('title') && !error?.fieldMessage('body') ? (
-        <Notice tone="error">{error ? error.message : 'Could not send: check your connection.'} Your text is kept: try again.</Notice>
+        <Notice tone="error">
+          {error ? error.message : 'Could not send: check your connection.'} Your text is kept: try again.
+        </Notice>
       ) : null}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={ask.isPending}>Send question</Button>
-        <Button type="button" variant="ghost" onClick={() => setOpen(false)}>Not now</Button>
+        <Button type="submit" busy={ask.isPending}>
+          Send question
+        </Button>
+        <Button type="button" variant="ghost" onClick={() => setOpen(false)}>
+          Not now
+        </Button>
       </div>
     </form>
   );

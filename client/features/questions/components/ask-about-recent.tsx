@@ -27,7 +27,19 @@ function Row({ when, summary, children }: { when: string; summary: string; child
  * On the tank page: the latest tests and observations, each with "Ask about this", and the questions already asked
  * about the tank.
  */
-export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clubId: string; tankId: string; ownerId: string; prefs: ReadingPrefs; canAsk: boolean }) {
+export function AskAboutRecent({
+  clubId,
+  tankId,
+  ownerId,
+  prefs,
+  canAsk,
+}: {
+  clubId: string;
+  tankId: string;
+  ownerId: string;
+  prefs: ReadingPrefs;
+  canAsk: boolean;
+}) {
   const recent = useRecentReadings(clubId, tankId);
   const qc = useQueryClient();
   // A new test, a reply or a changed status on this tank: the lists here follow without a reload.
@@ -44,16 +56,28 @@ export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clu
         ) : recent.isError ? (
           <Notice tone="error">Could not load recent readings: {recent.error.message}</Notice>
         ) : recent.data.tests.length + recent.data.observations.length === 0 ? (
-          <p className="text-ink-muted">Log a water test or an observation first, then ask your mentor about it here.</p>
+          <p className="text-ink-muted">
+            Log a water test or an observation first, then ask your mentor about it here.
+          </p>
         ) : (
           <ul className="divide-y divide-line" aria-label="Recent readings to ask about">
             {recent.data.tests.map((t) => (
-              <Row key={t.id} when={t.takenAt} summary={PARAMETER_KEYS.filter((k) => t.values[k] !== undefined).map((k) => formatLabelled(k, t.values[k]!, prefs)).join(' · ')}>
+              <Row
+                key={t.id}
+                when={t.takenAt}
+                summary={PARAMETER_KEYS.filter((k) => t.values[k] !== undefined)
+                  .map((k) => formatLabelled(k, t.values[k]!, prefs))
+                  .join(' · ')}
+              >
                 <AskAboutReading clubId={clubId} tankId={tankId} waterTestId={t.id} ownerId={ownerId} />
               </Row>
             ))}
             {recent.data.observations.map((e) => (
-              <Row key={e.id} when={e.occurredAt} summary={`Observation: ${describeObservation(e.details).join(' · ')}`}>
+              <Row
+                key={e.id}
+                when={e.occurredAt}
+                summary={`Observation: ${describeObservation(e.details).join(' · ')}`}
+              >
                 <AskAboutReading clubId={clubId} tankId={tankId} eventId={e.id} ownerId={ownerId} />
               </Row>
             ))}
@@ -61,8 +85,16 @@ export function AskAboutRecent({ clubId, tankId, ownerId, prefs, canAsk }: { clu
         )
       ) : null}
       <div>
-        <h3 className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">Questions about this tank</h3>
-        <QuestionList clubId={clubId} status="all" tankId={tankId} showAsker={!canAsk} empty="No questions about this tank yet." />
+        <h3 className="mb-2 text-sm font-extrabold uppercase tracking-wide text-ink-muted">
+          Questions about this tank
+        </h3>
+        <QuestionList
+          clubId={clubId}
+          status="all"
+          tankId={tankId}
+          showAsker={!canAsk}
+          empty="No questions about this tank yet."
+        />
       </div>
     </div>
   );

@@ -13,18 +13,38 @@ const WINDOW_DAYS = 14;
 
 /** The parameter to open on: the one the worst concern was about, else the first one the test measured. */
 function firstParameter(snapshot: QuestionSnapshot, available: ParameterKey[]): ParameterKey | undefined {
-  const worst = [...snapshot.concerns].sort((a, b) => severityRank(b.severity) - severityRank(a.severity)).map((c) => (c.parameter === 'freeAmmonia' ? 'ammonia' : c.parameter));
+  const worst = [...snapshot.concerns]
+    .sort((a, b) => severityRank(b.severity) - severityRank(a.severity))
+    .map((c) => (c.parameter === 'freeAmmonia' ? 'ammonia' : c.parameter));
   const measured = snapshot.subject.kind === 'water-test' ? Object.keys(snapshot.subject.values) : [];
-  return [...worst, ...measured].find((k): k is ParameterKey => available.includes(k as ParameterKey)) ?? available[0];
+  return (
+    [...worst, ...measured].find((k): k is ParameterKey => available.includes(k as ParameterKey)) ??
+    available[0]
+  );
 }
 
 /** The tank's readings two weeks either side of the question's date, one parameter at a time, the date marked. */
-export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartReading[]; snapshot: QuestionSnapshot; prefs: UnitPrefs }) {
+export function ReadingsChart({
+  readings,
+  snapshot,
+  prefs,
+}: {
+  readings: ChartReading[];
+  snapshot: QuestionSnapshot;
+  prefs: UnitPrefs;
+}) {
   const available = PARAMETER_KEYS.filter((k) => readings.some((r) => r.values[k] !== undefined));
   const [chosen, setChosen] = useState<ParameterKey | undefined>(() => firstParameter(snapshot, available));
-  const at = Date.parse(snapshot.subject.kind === 'water-test' ? snapshot.subject.takenAt : snapshot.subject.occurredAt);
+  const at = Date.parse(
+    snapshot.subject.kind === 'water-test' ? snapshot.subject.takenAt : snapshot.subject.occurredAt,
+  );
   const key = chosen && available.includes(chosen) ? chosen : available[0];
-  if (!key) return <Card><p className="text-ink-muted">No water tests in the two weeks either side of this date.</p></Card>;
+  if (!key)
+    return (
+      <Card>
+        <p className="text-ink-muted">No water tests in the two weeks either side of this date.</p>
+      </Card>
+    );
 
   const span = [at - WINDOW_DAYS * DAY_MS, at + WINDOW_DAYS * DAY_MS] as const;
   const points = seriesOf(readings, key, prefs);
@@ -38,7 +58,13 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
         <h2 className="text-lg font-extrabold text-ink">Readings around that date</h2>
         <div role="group" aria-label="Parameter shown" className="flex flex-wrap gap-1">
           {available.map((k) => (
-            <button key={k} type="button" aria-pressed={k === key} onClick={() => setChosen(k)} className={`min-h-touch rounded-full px-3 text-sm font-bold ${k === key ? 'bg-accent text-on-accent' : 'bg-tint text-link hover:bg-tint-strong'}`}>
+            <button
+              key={k}
+              type="button"
+              aria-pressed={k === key}
+              onClick={() => setChosen(k)}
+              className={`min-h-touch rounded-full px-3 text-sm font-bold ${k === key ? 'bg-accent text-on-accent' : 'bg-tint text-link hover:bg-tint-strong'}`}
+            >
               {parameterInfo(k).label}
             </button>
           ))}
@@ -57,7 +83,11 @@ export function ReadingsChart({ readings, snapshot, prefs }: { readings: ChartRe
         />
       </div>
       <p className="mt-2 text-sm text-ink-muted">
-        Dashed line: the reading asked about.{range ? ` Green ${range.ideal[0] === range.ideal[1] ? 'line' : 'band'}: the profile’s ideal range when asked.` : ''} The line shows the tank’s tests as they are today.
+        Dashed line: the reading asked about.
+        {range
+          ? ` Green ${range.ideal[0] === range.ideal[1] ? 'line' : 'band'}: the profile’s ideal range when asked.`
+          : ''}{' '}
+        The line shows the tank’s tests as they are today.
       </p>
     </Card>
   );

@@ -11,14 +11,24 @@ import { insertMention, mentionAtCaret } from '../lib/mention-query';
 import { useDraft } from '../lib/use-draft';
 
 /** Reply with "@" to name a mentor or admin: a list of who may read the question opens as you type. */
-export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; questionId: string; mentionable: PersonRef[] }) {
+export function ReplyBox({
+  clubId,
+  questionId,
+  mentionable,
+}: {
+  clubId: string;
+  questionId: string;
+  mentionable: PersonRef[];
+}) {
   const [text, setText, clear] = useDraft(`reply.${questionId}`);
   const [at, setAt] = useState<{ start: number; query: string } | null>(null);
   const [sent, setSent] = useState<PersonRef[] | null>(null);
   const area = useRef<HTMLTextAreaElement>(null);
   const reply = useReply(clubId, questionId);
   const id = useId();
-  const matches = at ? mentionable.filter((p) => p.displayName.toLowerCase().includes(at.query.toLowerCase())).slice(0, 6) : [];
+  const matches = at
+    ? mentionable.filter((p) => p.displayName.toLowerCase().includes(at.query.toLowerCase())).slice(0, 6)
+    : [];
 
   const track = (value: string, caret: number) => {
     setText(value);
@@ -64,7 +74,9 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
         void send();
       }}
     >
-      <label htmlFor={`${id}-text`} className="block text-sm font-bold text-ink-soft">Your reply</label>
+      <label htmlFor={`${id}-text`} className="block text-sm font-bold text-ink-soft">
+        Your reply
+      </label>
       <div className="relative">
         <Textarea
           ref={area}
@@ -83,12 +95,27 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
           className="w-full"
         />
         {at ? (
-          <div role="listbox" aria-label="Mention someone" className="absolute inset-x-0 top-full z-10 mt-1 overflow-hidden rounded-xl bg-surface shadow-card ring-1 ring-line">
+          <div
+            role="listbox"
+            aria-label="Mention someone"
+            className="absolute inset-x-0 top-full z-10 mt-1 overflow-hidden rounded-xl bg-surface shadow-card ring-1 ring-line"
+          >
             {matches.length === 0 ? (
-              <p className="px-4 py-3 text-sm text-ink-muted">{mentionable.length ? 'Nobody by that name can see this question.' : 'No mentor or admin to mention here.'}</p>
+              <p className="px-4 py-3 text-sm text-ink-muted">
+                {mentionable.length
+                  ? 'Nobody by that name can see this question.'
+                  : 'No mentor or admin to mention here.'}
+              </p>
             ) : (
               matches.map((p) => (
-                <button key={p.userId} type="button" role="option" aria-selected={false} onClick={() => pick(p)} className="block min-h-touch w-full px-4 text-left font-bold text-ink-soft hover:bg-tint">
+                <button
+                  key={p.userId}
+                  type="button"
+                  role="option"
+                  aria-selected={false}
+                  onClick={() => pick(p)}
+                  className="block min-h-touch w-full px-4 text-left font-bold text-ink-soft hover:bg-tint"
+                >
                   @{p.displayName}
                 </button>
               ))
@@ -96,13 +123,34 @@ export function ReplyBox({ clubId, questionId, mentionable }: { clubId: string; 
           </div>
         ) : null}
       </div>
-      <p className="text-sm text-ink-muted">**bold**, lists with “- ” or “1. ”, and links work. Only the people listed when you type @ can be mentioned.</p>
-      {error?.fieldMessage('body') ? <p role="alert" className="text-sm font-semibold text-danger">{error.fieldMessage('body')}</p> : null}
-      {reply.isError && !error?.fieldMessage('body') ? <Notice tone="error">{error ? error.message : 'Could not send: check your connection.'} Your reply is kept: try again.</Notice> : null}
-      {sent ? <Notice tone="success">Sent.{sent.length ? ` ${sent.map((p) => p.displayName).join(', ')} will be told.` : ''}</Notice> : null}
+      <p className="text-sm text-ink-muted">
+        **bold**, lists with “- ” or “1. ”, and links work. Only the people listed when you type @ can be
+        mentioned.
+      </p>
+      {error?.fieldMessage('body') ? (
+        <p role="alert" className="text-sm font-semibold text-danger">
+          {error.fieldMessage('body')}
+        </p>
+      ) : null}
+      {reply.isError && !error?.fieldMessage('body') ? (
+        <Notice tone="error">
+          {error ? error.message : 'Could not send: check your connection.'} Your reply is kept: try again.
+        </Notice>
+      ) : null}
+      {sent ? (
+        <Notice tone="success">
+          Sent.{sent.length ? ` ${sent.map((p) => p.displayName).join(', ')} will be told.` : ''}
+        </Notice>
+      ) : null}
       <div className="flex flex-wrap gap-2">
-        <Button type="submit" busy={reply.isPending}>Send reply</Button>
-        {mentionable.length ? <Button type="button" variant="secondary" onClick={startMention}>@ Mention</Button> : null}
+        <Button type="submit" busy={reply.isPending}>
+          Send reply
+        </Button>
+        {mentionable.length ? (
+          <Button type="button" variant="secondary" onClick={startMention}>
+            @ Mention
+          </Button>
+        ) : null}
       </div>
     </form>
   );

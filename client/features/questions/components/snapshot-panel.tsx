@@ -13,7 +13,9 @@ function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: Readi
   if (s.kind === 'observation') {
     return (
       <ul className="space-y-1 text-ink">
-        {describeObservation(s.details).map((line) => <li key={line}>{line}</li>)}
+        {describeObservation(s.details).map((line) => (
+          <li key={line}>{line}</li>
+        ))}
         {s.note ? <li className="text-ink-muted">Note: {s.note}</li> : null}
       </ul>
     );
@@ -24,14 +26,20 @@ function Figures({ snapshot, prefs }: { snapshot: QuestionSnapshot; prefs: Readi
       <dl className="grid grid-cols-2 gap-2">
         {keys.map((k) => (
           <div key={k} className="rounded-xl bg-tint px-3 py-2" data-figure={k}>
-            <dt className="text-xs font-bold uppercase tracking-wide text-ink-muted">{parameterInfo(k).label}</dt>
+            <dt className="text-xs font-bold uppercase tracking-wide text-ink-muted">
+              {parameterInfo(k).label}
+            </dt>
             <dd className="text-lg font-extrabold text-ink">{formatDisplay(k, s.values[k]!, prefs)}</dd>
           </div>
         ))}
         {s.freeAmmonia !== null ? (
           <div className="rounded-xl bg-tint px-3 py-2" data-figure="freeAmmonia">
-            <dt className="text-xs font-bold uppercase tracking-wide text-ink-muted">{parameterInfo('freeAmmonia').label}</dt>
-            <dd className="text-lg font-extrabold text-ink">{formatDisplay('freeAmmonia', s.freeAmmonia, prefs)}</dd>
+            <dt className="text-xs font-bold uppercase tracking-wide text-ink-muted">
+              {parameterInfo('freeAmmonia').label}
+            </dt>
+            <dd className="text-lg font-extrabold text-ink">
+              {formatDisplay('freeAmmonia', s.freeAmmonia, prefs)}
+            </dd>
           </div>
         ) : null}
       </dl>
@@ -54,16 +62,26 @@ export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot;
   return (
     <Card className="space-y-4">
       <header>
-        <h2 className="text-lg font-extrabold text-ink">{s.kind === 'water-test' ? 'The water test' : 'The observation'} · {formatDayTime(at)}</h2>
+        <h2 className="text-lg font-extrabold text-ink">
+          {s.kind === 'water-test' ? 'The water test' : 'The observation'} · {formatDayTime(at)}
+        </h2>
         <p className="text-sm text-ink-muted">
           {snapshot.tank.name}
-          {snapshot.profile ? <> · judged by the <strong>{snapshot.profile.name}</strong> profile (version {snapshot.profile.version})</> : null}
-          {' '}· as it stood when asked, {formatDayTime(snapshot.takenAt)}
+          {snapshot.profile ? (
+            <>
+              {' '}
+              · judged by the <strong>{snapshot.profile.name}</strong> profile (version{' '}
+              {snapshot.profile.version})
+            </>
+          ) : null}{' '}
+          · as it stood when asked, {formatDayTime(snapshot.takenAt)}
         </p>
       </header>
       <Figures snapshot={snapshot} prefs={prefs} />
       <section aria-labelledby="snapshot-concerns">
-        <h3 id="snapshot-concerns" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Concerns open then</h3>
+        <h3 id="snapshot-concerns" className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">
+          Concerns open then
+        </h3>
         {snapshot.concerns.length === 0 ? (
           <p className="mt-1 text-ink-soft">None were open on the tank.</p>
         ) : (
@@ -73,14 +91,21 @@ export function SnapshotPanel({ snapshot, prefs }: { snapshot: QuestionSnapshot;
                 <li key={c.id} className="py-2">
                   <div className="flex flex-wrap items-center gap-2">
                     <SeverityBadge severity={c.severity} />
-                    {c.status === 'acknowledged' ? <span className="text-xs font-bold text-ink-muted">seen by a mentor</span> : null}
+                    {c.status === 'acknowledged' ? (
+                      <span className="text-xs font-bold text-ink-muted">seen by a mentor</span>
+                    ) : null}
                   </div>
                   <p className="mt-1 font-bold text-ink">{c.reason}</p>
                 </li>
               ))}
             </ul>
             {concerns.length > FIRST_CONCERNS ? (
-              <button type="button" className="min-h-touch text-sm font-bold text-link underline" aria-expanded={all} onClick={() => setAll((v) => !v)}>
+              <button
+                type="button"
+                className="min-h-touch text-sm font-bold text-link underline"
+                aria-expanded={all}
+                onClick={() => setAll((v) => !v)}
+              >
                 {all ? 'Show fewer' : `Show all ${concerns.length} concerns`}
               </button>
             ) : null}

@@ -12,7 +12,8 @@ export type Inline =
   | { type: 'mention'; text: string }
   | { type: 'break' };
 
-export type Block = { type: 'paragraph'; children: Inline[] } | { type: 'list'; ordered: boolean; items: Inline[][] };
+export type Block =
+  { type: 'paragraph'; children: Inline[] } | { type: 'list'; ordered: boolean; items: Inline[][] };
 
 const BULLET = /^\s*[-*]\s+(.*)$/;
 const NUMBERED = /^\s*\d{1,3}[.)]\s+(.*)$/;
@@ -22,12 +23,15 @@ const BARE_URL_TRAILING = /[.,;:!?'’"”]+$/;
 export function safeHref(raw: string): { href: string; external: boolean } | null {
   const url = raw.trim();
   // Control characters and spaces can smuggle a scheme past a naive check.
-  if (!url || /\s/.test(url) || [...url].some((c) => c.charCodeAt(0) < 0x20 || c.charCodeAt(0) === 0x7f)) return null;
+  if (!url || /\s/.test(url) || [...url].some((c) => c.charCodeAt(0) < 0x20 || c.charCodeAt(0) === 0x7f))
+    return null;
   if (/^\/(?![/\\])/.test(url)) return { href: url, external: false };
   if (!/^https?:\/\//i.test(url)) return null;
   try {
     const parsed = new URL(url);
-    return parsed.protocol === 'http:' || parsed.protocol === 'https:' ? { href: parsed.href, external: true } : null;
+    return parsed.protocol === 'http:' || parsed.protocol === 'https:'
+      ? { href: parsed.href, external: true }
+      : null;
   } catch {
     return null;
   }
@@ -63,7 +67,12 @@ function linksIn(text: string, names: readonly string[]): Inline[] {
     const safe = safeHref(target!);
     if (!safe) continue; // left as the text the person typed
     if (m.index > at) out.push(...withMentions(text.slice(at, m.index), names));
-    out.push({ type: 'link', href: safe.href, external: safe.external, children: [{ type: 'text', text: label }] });
+    out.push({
+      type: 'link',
+      href: safe.href,
+      external: safe.external,
+      children: [{ type: 'text', text: label }],
+    });
     at = m.index + source.length;
   }
   if (at < text.length) out.push(...withMentions(text.slice(at), names));

@@ -7,7 +7,11 @@ export function mentionAtCaret(text: string, caret: number): { start: number; qu
 }
 
 /** The text with the "@partial" at `start` replaced by "@Display Name ", and where the caret goes after it. */
-export function insertMention(text: string, at: { start: number; query: string }, displayName: string): { text: string; caret: number } {
+export function insertMention(
+  text: string,
+  at: { start: number; query: string },
+  displayName: string,
+): { text: string; caret: number } {
   const insert = `@${displayName} `;
   const next = text.slice(0, at.start) + insert + text.slice(at.start + 1 + at.query.length);
   return { text: next, caret: at.start + insert.length };

@@ -15,9 +15,15 @@ export const waterChangesQuery = (clubId: string, tankId: string) =>
   queryOptions({
     queryKey: tankKeys.waterChanges(clubId, tankId),
     queryFn: ({ signal }) =>
-      api.get<Page<TankEventView<'water-change'>>>(`${tankPath(clubId, tankId)}/events?kind=water-change&limit=500`, signal).then((p) => p.items),
+      api
+        .get<Page<TankEventView<'water-change'>>>(
+          `${tankPath(clubId, tankId)}/events?kind=water-change&limit=500`,
+          signal,
+        )
+        .then((p) => p.items),
   });
-export const useWaterChanges = (clubId: string, tankId: string) => useQuery(waterChangesQuery(clubId, tankId));
+export const useWaterChanges = (clubId: string, tankId: string) =>
+  useQuery(waterChangesQuery(clubId, tankId));
 
 const TIMELINE_PAGE = 20;
 
@@ -38,7 +44,8 @@ export function useTimeline(clubId: string, tankId: string) {
 export function useCreateTankEvent(clubId: string, tankId: string) {
   const changed = useTankRecordsChanged(clubId);
   return useMutation({
-    mutationFn: (input: CreateTankEventInput) => api.post<{ event: TankEventView }>(`${tankPath(clubId, tankId)}/events`, input).then((r) => r.event),
+    mutationFn: (input: CreateTankEventInput) =>
+      api.post<{ event: TankEventView }>(`${tankPath(clubId, tankId)}/events`, input).then((r) => r.event),
     onSuccess: () => changed(tankId),
   });
 }
@@ -47,6 +54,9 @@ export function useCreateTankEvent(clubId: string, tankId: string) {
 export function useSaveTankEvent(clubId: string, tankId: string) {
   const create = useCreateTankEvent(clubId, tankId);
   const upload = useUploadPhotos(clubId);
-  const save = useSaveWithPhotos(create.mutateAsync, (event: TankEventView, files) => upload.mutateAsync({ tankId, files, eventId: event.id }));
-  return async (input: CreateTankEventInput, photos: File[]): Promise<SavedNotice> => eventNotice(await save(input, photos));
+  const save = useSaveWithPhotos(create.mutateAsync, (event: TankEventView, files) =>
+    upload.mutateAsync({ tankId, files, eventId: event.id }),
+  );
+  return async (input: CreateTankEventInput, photos: File[]): Promise<SavedNotice> =>
+    eventNotice(await save(input, photos));
 }

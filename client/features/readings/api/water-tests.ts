@@ -25,7 +25,10 @@ export const testsSinceQuery = (clubId: string, tankId: string, from: string | n
         const qs = new URLSearchParams({ limit: String(PAGE) });
         if (from) qs.set('from', from);
         if (before) qs.set('before', before);
-        const page: Page<WaterTestView> = await api.get<Page<WaterTestView>>(`${base(clubId, tankId)}?${qs}`, signal);
+        const page: Page<WaterTestView> = await api.get<Page<WaterTestView>>(
+          `${base(clubId, tankId)}?${qs}`,
+          signal,
+        );
         items.push(...page.items);
         before = page.nextCursor;
       } while (before);
@@ -39,14 +42,18 @@ export const waterTestQuery = (clubId: string, tankId: string, testId: string) =
     queryFn: ({ signal }) => api.get<WaterTestDetailView>(`${base(clubId, tankId)}/${testId}`, signal),
   });
 
-export const useTestsSince = (clubId: string, tankId: string, from: string | null) => useQuery(testsSinceQuery(clubId, tankId, from));
-export const useWaterTest = (clubId: string, tankId: string, testId: string) => useQuery(waterTestQuery(clubId, tankId, testId));
+export const useTestsSince = (clubId: string, tankId: string, from: string | null) =>
+  useQuery(testsSinceQuery(clubId, tankId, from));
+export const useWaterTest = (clubId: string, tankId: string, testId: string) =>
+  useQuery(waterTestQuery(clubId, tankId, testId));
 
 /** The fetchers: what goes over the wire for a test. */
-export const postWaterTest = (clubId: string, tankId: string, input: CreateWaterTestInput) => api.post<WaterTestSaved>(base(clubId, tankId), input);
+export const postWaterTest = (clubId: string, tankId: string, input: CreateWaterTestInput) =>
+  api.post<WaterTestSaved>(base(clubId, tankId), input);
 export const patchWaterTest = (clubId: string, tankId: string, testId: string, input: UpdateWaterTestInput) =>
   api.patch<WaterTestSaved>(`${base(clubId, tankId)}/${testId}`, input);
-export const deleteWaterTest = (clubId: string, tankId: string, testId: string) => api.delete(`${base(clubId, tankId)}/${testId}`);
+export const deleteWaterTest = (clubId: string, tankId: string, testId: string) =>
+  api.delete(`${base(clubId, tankId)}/${testId}`);
 
 /*
  * A saved or deleted test changes the charts, the table, the timeline, the tank's last known values, the list
@@ -55,12 +62,18 @@ export const deleteWaterTest = (clubId: string, tankId: string, testId: string) 
 
 export function useCreateWaterTest(clubId: string, tankId: string) {
   const changed = useTankRecordsChanged(clubId);
-  return useMutation({ mutationFn: (input: CreateWaterTestInput) => postWaterTest(clubId, tankId, input), onSuccess: () => changed(tankId) });
+  return useMutation({
+    mutationFn: (input: CreateWaterTestInput) => postWaterTest(clubId, tankId, input),
+    onSuccess: () => changed(tankId),
+  });
 }
 
 export function useUpdateWaterTest(clubId: string, tankId: string, testId: string) {
   const changed = useTankRecordsChanged(clubId);
-  return useMutation({ mutationFn: (input: UpdateWaterTestInput) => patchWaterTest(clubId, tankId, testId, input), onSuccess: () => changed(tankId) });
+  return useMutation({
+    mutationFn: (input: UpdateWaterTestInput) => patchWaterTest(clubId, tankId, testId, input),
+    onSuccess: () => changed(tankId),
+  });
 }
 
 export function useDeleteWaterTest(clubId: string, tankId: string) {
@@ -77,7 +90,15 @@ export function useDeleteWaterTest(clubId: string, tankId: string) {
  * sent (a double tap, or a retry after a failed upload, which sends only the photos again); a new test's units and
  * methods are remembered on the device for next time. Resolves to the notice the tank page shows.
  */
-export function useSaveWaterTest({ clubId, tankId, editing }: { clubId: string; tankId: string; editing?: WaterTestView }) {
+export function useSaveWaterTest({
+  clubId,
+  tankId,
+  editing,
+}: {
+  clubId: string;
+  tankId: string;
+  editing?: WaterTestView;
+}) {
   const create = useCreateWaterTest(clubId, tankId);
   const update = useUpdateWaterTest(clubId, tankId, editing?.id ?? '');
   const upload = useUploadPhotos(clubId);
@@ -88,7 +109,8 @@ export function useSaveWaterTest({ clubId, tankId, editing }: { clubId: string; 
       saveEntryMemory(tankId, draft);
       return saved;
     },
-    (saved, files) => upload.mutateAsync({ tankId, files, waterTestId: saved.waterTest.id, caption: 'Test colours' }),
+    (saved, files) =>
+      upload.mutateAsync({ tankId, files, waterTestId: saved.waterTest.id, caption: 'Test colours' }),
   );
   return async (input: CreateWaterTestInput, photos: File[], draft: WaterTestDraft): Promise<SavedNotice> =>
     waterTestNotice(await save({ input, draft }, photos), Boolean(editing));

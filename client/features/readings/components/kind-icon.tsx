@@ -1,6 +1,14 @@
 import type { JSX } from 'react';
 import type { TankEventKind } from '@shared/schemas/tank-event.schema';
-import { BottleIcon, DropIcon, EyeIcon, FishIcon, FoodIcon, TestTubeIcon, WrenchIcon } from '@client/components/ui/icons';
+import {
+  BottleIcon,
+  DropIcon,
+  EyeIcon,
+  FishIcon,
+  FoodIcon,
+  TestTubeIcon,
+  WrenchIcon,
+} from '@client/components/ui/icons';
 
 const ICONS: Record<TankEventKind | 'water-test', () => JSX.Element> = {
   'water-test': TestTubeIcon,

@@ -14,7 +14,9 @@ const keyFor = (tankId: string) => `shoalwise.water-test.${tankId}`;
 export function loadEntryMemory(tankId: string): EntryMemory {
   try {
     const raw = JSON.parse(localStorage.getItem(keyFor(tankId)) ?? 'null') as Partial<EntryMemory> | null;
-    const parameters = (raw?.parameters ?? []).filter((p): p is ParameterKey => typeof p === 'string' && isParameterKey(p));
+    const parameters = (raw?.parameters ?? []).filter(
+      (p): p is ParameterKey => typeof p === 'string' && isParameterKey(p),
+    );
     return { parameters, entries: raw?.entries && typeof raw.entries === 'object' ? raw.entries : {} };
   } catch {
     return { parameters: [], entries: {} };
@@ -29,7 +31,11 @@ export function saveEntryMemory(tankId: string, draft: WaterTestDraft): void {
   const entries = { ...before.entries };
   for (const k of parameters) {
     const e = draft.entries[k];
-    entries[k] = { unit: e.unit, method: e.method, ...(k === 'salinity' ? { referenceTempC: e.referenceTempC } : {}) };
+    entries[k] = {
+      unit: e.unit,
+      method: e.method,
+      ...(k === 'salinity' ? { referenceTempC: e.referenceTempC } : {}),
+    };
   }
   try {
     localStorage.setItem(keyFor(tankId), JSON.stringify({ parameters, entries } satisfies EntryMemory));

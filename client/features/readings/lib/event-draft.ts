@@ -11,7 +11,13 @@ import {
 import { volumeUnitOf, type UnitPrefs } from '@client/lib/display-units';
 import { localInputToIso, parseDecimal, toLocalInput, trimmedOrUndefined } from '@client/lib/form-values';
 
-export const POSTED_KINDS = ['water-change', 'supplement-dose', 'feeding-note', 'equipment-change', 'observation'] as const;
+export const POSTED_KINDS = [
+  'water-change',
+  'supplement-dose',
+  'feeding-note',
+  'equipment-change',
+  'observation',
+] as const;
 export type PostedKind = (typeof POSTED_KINDS)[number];
 type Scale = keyof typeof OBSERVATION_SCALES;
 export const SCALES = Object.keys(OBSERVATION_SCALES) as Scale[];
@@ -20,11 +26,25 @@ export interface EventDraft {
   kind: PostedKind;
   occurredAt: string;
   note: string;
-  waterChange: { by: 'volume' | 'percent'; amount: string; sourceWater: (typeof SOURCE_WATER_TYPES)[number]; nitrate: string; nitrateUnit: string; salinity: string; salinityUnit: string; salinityRef: string };
+  waterChange: {
+    by: 'volume' | 'percent';
+    amount: string;
+    sourceWater: (typeof SOURCE_WATER_TYPES)[number];
+    nitrate: string;
+    nitrateUnit: string;
+    salinity: string;
+    salinityUnit: string;
+    salinityRef: string;
+  };
   dose: { product: string; amount: string; unit: (typeof DOSE_UNITS)[number] };
   feeding: { food: string; amount: string };
   equipment: { equipment: string; change: (typeof EQUIPMENT_CHANGES)[number] };
-  observation: Record<Scale, string> & { animal: string; breathsPerMinute: string; checks: Record<(typeof OBSERVATION_CHECKS)[number], boolean>; text: string };
+  observation: Record<Scale, string> & {
+    animal: string;
+    breathsPerMinute: string;
+    checks: Record<(typeof OBSERVATION_CHECKS)[number], boolean>;
+    text: string;
+  };
 }
 
 export function newEventDraft(kind: PostedKind, prefs: UnitPrefs, now = new Date()): EventDraft {
@@ -32,7 +52,16 @@ export function newEventDraft(kind: PostedKind, prefs: UnitPrefs, now = new Date
     kind,
     occurredAt: toLocalInput(now),
     note: '',
-    waterChange: { by: 'percent', amount: '', sourceWater: SOURCE_WATER_TYPES[1], nitrate: '', nitrateUnit: 'mg/L NO3', salinity: '', salinityUnit: prefs.salinityDisplay === 'sg' ? 'SG' : 'ppt', salinityRef: String(DEFAULT_SG_REFERENCE_TEMP_C) },
+    waterChange: {
+      by: 'percent',
+      amount: '',
+      sourceWater: SOURCE_WATER_TYPES[1],
+      nitrate: '',
+      nitrateUnit: 'mg/L NO3',
+      salinity: '',
+      salinityUnit: prefs.salinityDisplay === 'sg' ? 'SG' : 'ppt',
+      salinityRef: String(DEFAULT_SG_REFERENCE_TEMP_C),
+    },
     dose: { product: '', amount: '', unit: DOSE_UNITS[0] },
     feeding: { food: '', amount: '' },
     equipment: { equipment: '', change: EQUIPMENT_CHANGES[0] },
@@ -40,25 +69,38 @@ export function newEventDraft(kind: PostedKind, prefs: UnitPrefs, now = new Date
       ...(Object.fromEntries(SCALES.map((s) => [s, ''])) as Record<Scale, string>),
       animal: '',
       breathsPerMinute: '',
-      checks: Object.fromEntries(OBSERVATION_CHECKS.map((c) => [c, false])) as EventDraft['observation']['checks'],
+      checks: Object.fromEntries(
+        OBSERVATION_CHECKS.map((c) => [c, false]),
+      ) as EventDraft['observation']['checks'],
       text: '',
     },
   };
 }
 
-const defined = (o: Record<string, unknown>) => Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== ''));
+const defined = (o: Record<string, unknown>) =>
+  Object.fromEntries(Object.entries(o).filter(([, v]) => v !== undefined && v !== ''));
 
 function waterChangeDetails(w: EventDraft['waterChange'], prefs: UnitPrefs) {
   const amount = parseDecimal(w.amount);
   const gal = volumeUnitOf(prefs) === 'US gal';
-  const volumeL = w.by === 'volume' && amount !== undefined && !Number.isNaN(amount) && gal ? convert(amount, 'US gal', 'L') : amount;
+  const volumeL =
+    w.by === 'volume' && amount !== undefined && !Number.isNaN(amount) && gal
+      ? convert(amount, 'US gal', 'L')
+      : amount;
   const nitrate = parseDecimal(w.nitrate);
   const salinity = parseDecimal(w.salinity);
   return defined({
     [w.by === 'volume' ? 'volumeL' : 'percent']: w.by === 'volume' ? volumeL : amount,
     sourceWater: w.sourceWater,
     sourceNitrate: nitrate === undefined ? undefined : { value: nitrate, unit: w.nitrateUnit },
-    sourceSalinity: salinity === undefined ? undefined : { value: salinity, unit: w.salinityUnit, ...(w.salinityUnit === 'SG' ? { referenceTempC: parseDecimal(w.salinityRef) } : {}) },
+    sourceSalinity:
+      salinity === undefined
+        ? undefined
+        : {
+            value: salinity,
+            unit: w.salinityUnit,
+            ...(w.salinityUnit === 'SG' ? { referenceTempC: parseDecimal(w.salinityRef) } : {}),
+          },
   });
 }
 
@@ -67,7 +109,11 @@ export function eventDraftToInput(d: EventDraft, prefs: UnitPrefs): CreateTankEv
   const o = d.observation;
   const details = {
     'water-change': () => waterChangeDetails(d.waterChange, prefs),
-    'supplement-dose': () => ({ product: d.dose.product, amount: parseDecimal(d.dose.amount), unit: d.dose.unit }),
+    'supplement-dose': () => ({
+      product: d.dose.product,
+      amount: parseDecimal(d.dose.amount),
+      unit: d.dose.unit,
+    }),
     'feeding-note': () => defined({ food: d.feeding.food, amount: trimmedOrUndefined(d.feeding.amount) }),
     'equipment-change': () => ({ equipment: d.equipment.equipment, change: d.equipment.change }),
     observation: () => {
@@ -81,20 +127,38 @@ export function eventDraftToInput(d: EventDraft, prefs: UnitPrefs): CreateTankEv
       });
     },
   }[d.kind]();
-  return { kind: d.kind, occurredAt: localInputToIso(d.occurredAt), note: d.note, details } as CreateTankEventInput;
+  return {
+    kind: d.kind,
+    occurredAt: localInputToIso(d.occurredAt),
+    note: d.note,
+    details,
+  } as CreateTankEventInput;
 }
 
 const DETAIL_FIELDS: Record<PostedKind, Record<string, string>> = {
-  'water-change': { volumeL: 'waterChange.amount', percent: 'waterChange.amount', sourceWater: 'waterChange.sourceWater', 'sourceNitrate.value': 'waterChange.nitrate', 'sourceSalinity.value': 'waterChange.salinity' },
+  'water-change': {
+    volumeL: 'waterChange.amount',
+    percent: 'waterChange.amount',
+    sourceWater: 'waterChange.sourceWater',
+    'sourceNitrate.value': 'waterChange.nitrate',
+    'sourceSalinity.value': 'waterChange.salinity',
+  },
   'supplement-dose': { product: 'dose.product', amount: 'dose.amount', unit: 'dose.unit' },
   'feeding-note': { food: 'feeding.food', amount: 'feeding.amount' },
   'equipment-change': { equipment: 'equipment.equipment', change: 'equipment.change' },
-  observation: { animal: 'observation.animal', breathsPerMinute: 'observation.breathsPerMinute', text: 'observation.text', ...Object.fromEntries(SCALES.map((s) => [s, `observation.${s}`])) },
+  observation: {
+    animal: 'observation.animal',
+    breathsPerMinute: 'observation.breathsPerMinute',
+    text: 'observation.text',
+    ...Object.fromEntries(SCALES.map((s) => [s, `observation.${s}`])),
+  },
 };
 
 /** API paths → form fields, for the kind on screen. */
-export const eventFieldOf = (kind: PostedKind) => (path: string): string | null => {
-  if (path === 'occurredAt' || path === 'note') return path;
-  const m = /^details\.(.+)$/.exec(path);
-  return m ? (DETAIL_FIELDS[kind][m[1]!] ?? null) : null;
-};
+export const eventFieldOf =
+  (kind: PostedKind) =>
+  (path: string): string | null => {
+    if (path === 'occurredAt' || path === 'note') return path;
+    const m = /^details\.(.+)$/.exec(path);
+    return m ? (DETAIL_FIELDS[kind][m[1]!] ?? null) : null;
+  };

@@ -2,7 +2,11 @@ import { PARAMETER_KEYS, type ParameterKey } from '@shared/care/parameters';
 import { convert } from '@shared/chemistry/units';
 import { ENTRY_UNITS, TEST_METHODS, type TestMethod } from '@shared/readings/entry-units';
 import { DEFAULT_SG_REFERENCE_TEMP_C } from '@shared/readings/salinity';
-import type { CreateWaterTestInput, UpdateWaterTestInput, WaterTestEntriesInput } from '@shared/schemas/water-test.schema';
+import type {
+  CreateWaterTestInput,
+  UpdateWaterTestInput,
+  WaterTestEntriesInput,
+} from '@shared/schemas/water-test.schema';
 import type { WaterTestView } from '@shared/schemas/tank-views';
 import type { UnitPrefs } from '@client/lib/display-units';
 import { localInputToIso, parseDecimal, toLocalInput, trimmedOrUndefined } from '@client/lib/form-values';
@@ -57,34 +61,45 @@ export function emptyEntry(key: ParameterKey, prefs: UnitPrefs, remembered?: Rem
   };
 }
 
-export function newDraft(prefs: UnitPrefs, remembered: Partial<Record<ParameterKey, RememberedEntry>>, now = new Date()): WaterTestDraft {
-  const entries = Object.fromEntries(PARAMETER_KEYS.map((k) => [k, emptyEntry(k, prefs, remembered[k])])) as EntryDrafts;
+export function newDraft(
+  prefs: UnitPrefs,
+  remembered: Partial<Record<ParameterKey, RememberedEntry>>,
+  now = new Date(),
+): WaterTestDraft {
+  const entries = Object.fromEntries(
+    PARAMETER_KEYS.map((k) => [k, emptyEntry(k, prefs, remembered[k])]),
+  ) as EntryDrafts;
   return { takenAt: toLocalInput(now), note: '', entries };
 }
 
 const sampleTempFromC = (c: number | undefined, prefs: UnitPrefs) =>
-  c === undefined ? '' : String(Number((prefs.temperatureUnit === 'F' ? convert(c, '°C', '°F') : c).toFixed(1)));
+  c === undefined
+    ? ''
+    : String(Number((prefs.temperatureUnit === 'F' ? convert(c, '°C', '°F') : c).toFixed(1)));
 
 /** An existing test as the form shows it: the values as they were entered, not the converted ones. */
 export function draftFromTest(test: WaterTestView, prefs: UnitPrefs): WaterTestDraft {
   const draft = newDraft(prefs, {}, new Date(test.takenAt));
   draft.note = test.note;
   for (const key of PARAMETER_KEYS) {
-    const e = test.entries[key] as (WaterTestEntriesInput[ParameterKey] & { referenceTempC?: number; sampleTempC?: number }) | undefined;
+    const e = test.entries[key] as
+      (WaterTestEntriesInput[ParameterKey] & { referenceTempC?: number; sampleTempC?: number }) | undefined;
     if (!e) continue;
     draft.entries[key] = {
       value: String(e.value),
       unit: e.unit ?? draft.entries[key].unit,
       method: e.method ?? '',
       note: e.note ?? '',
-      referenceTempC: e.referenceTempC === undefined ? draft.entries[key].referenceTempC : String(e.referenceTempC),
+      referenceTempC:
+        e.referenceTempC === undefined ? draft.entries[key].referenceTempC : String(e.referenceTempC),
       sampleTemp: sampleTempFromC(e.sampleTempC, prefs),
     };
   }
   return draft;
 }
 
-export const isFilled = (e: EntryDraft | undefined): e is EntryDraft => e !== undefined && e.value.trim() !== '';
+export const isFilled = (e: EntryDraft | undefined): e is EntryDraft =>
+  e !== undefined && e.value.trim() !== '';
 
 /** One draft entry as the API takes it (numbers may be NaN: the schema names those "Enter a number."). */
 export function entryInput(key: ParameterKey, d: EntryDraft, prefs: UnitPrefs): Record<string, unknown> {
@@ -93,13 +108,19 @@ export function entryInput(key: ParameterKey, d: EntryDraft, prefs: UnitPrefs): 
   const note = trimmedOrUndefined(d.note);
   if (note) input.note = note;
   if (key === 'salinity' && d.unit === 'SG') input.referenceTempC = parseDecimal(d.referenceTempC);
-  const hasSampleTemp = key === 'salinity' && ((d.unit === 'SG' && d.method === 'hydrometer') || d.unit === 'mS/cm');
+  const hasSampleTemp =
+    key === 'salinity' && ((d.unit === 'SG' && d.method === 'hydrometer') || d.unit === 'mS/cm');
   const sample = hasSampleTemp ? parseDecimal(d.sampleTemp) : undefined;
-  if (sample !== undefined) input.sampleTempC = prefs.temperatureUnit === 'F' && !Number.isNaN(sample) ? convert(sample, '°F', '°C') : sample;
+  if (sample !== undefined)
+    input.sampleTempC =
+      prefs.temperatureUnit === 'F' && !Number.isNaN(sample) ? convert(sample, '°F', '°C') : sample;
   return input;
 }
 
-export function draftEntries(draft: WaterTestDraft, prefs: UnitPrefs): Partial<Record<ParameterKey, Record<string, unknown>>> {
+export function draftEntries(
+  draft: WaterTestDraft,
+  prefs: UnitPrefs,
+): Partial<Record<ParameterKey, Record<string, unknown>>> {
   const out: Partial<Record<ParameterKey, Record<string, unknown>>> = {};
   for (const key of PARAMETER_KEYS) {
     const d = draft.entries[key];
@@ -110,14 +131,21 @@ export function draftEntries(draft: WaterTestDraft, prefs: UnitPrefs): Partial<R
 
 /** The whole draft as the API's create input (not yet checked). */
 export function draftToInput(draft: WaterTestDraft, prefs: UnitPrefs): CreateWaterTestInput {
-  return { takenAt: localInputToIso(draft.takenAt), note: draft.note, entries: draftEntries(draft, prefs) as CreateWaterTestInput['entries'] };
+  return {
+    takenAt: localInputToIso(draft.takenAt),
+    note: draft.note,
+    entries: draftEntries(draft, prefs) as CreateWaterTestInput['entries'],
+  };
 }
 
 /**
  * A checked draft as the PATCH body for the test it edits: every entry on the form is sent, and an entry the test
  * had but the form no longer has is sent as null, which removes it.
  */
-export function draftToPatch(checked: CreateWaterTestInput, original: Pick<WaterTestView, 'entries'>): UpdateWaterTestInput {
+export function draftToPatch(
+  checked: CreateWaterTestInput,
+  original: Pick<WaterTestView, 'entries'>,
+): UpdateWaterTestInput {
   const entries: NonNullable<UpdateWaterTestInput['entries']> = {};
   for (const k of PARAMETER_KEYS) {
     const next = checked.entries[k];

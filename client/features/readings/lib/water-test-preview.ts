@@ -1,6 +1,10 @@
 import { evaluateReading, type CareProfile, type Concern, type LastKnown } from '@shared/care';
 import { PARAMETER_KEYS, type ParameterKey } from '@shared/care/parameters';
-import { normalizeWaterTest, type NormalizeContext, type NormalizedWaterTest } from '@shared/readings/normalize-water-test';
+import {
+  normalizeWaterTest,
+  type NormalizeContext,
+  type NormalizedWaterTest,
+} from '@shared/readings/normalize-water-test';
 import type { TankDetailView } from '@shared/schemas/tank-views';
 import { ENTRY_SCHEMAS, type WaterTestEntries } from '@shared/schemas/water-test.schema';
 import type { UnitPrefs } from '@client/lib/display-units';
@@ -36,11 +40,15 @@ export function previewDraft(draft: WaterTestDraft, prefs: UnitPrefs, ctx: Norma
       continue;
     }
     for (const issue of parsed.error.issues) {
-      const field = waterTestFieldOf(['entries', key, ...issue.path.map(String)].join('.')) ?? `entries.${key}.value`;
+      const field =
+        waterTestFieldOf(['entries', key, ...issue.path.map(String)].join('.')) ?? `entries.${key}.value`;
       fieldErrors[field] ??= issue.message;
     }
   }
-  const normalized = normalizeWaterTest({ takenAt: takenAtOf(draft, ctx.now), entries: accepted as WaterTestEntries }, ctx);
+  const normalized = normalizeWaterTest(
+    { takenAt: takenAtOf(draft, ctx.now), entries: accepted as WaterTestEntries },
+    ctx,
+  );
   for (const e of normalized.errors) {
     const field = waterTestFieldOf(e.path);
     if (field) fieldErrors[field] ??= e.message;
@@ -58,12 +66,24 @@ export type PreviewTank = Pick<TankDetailView, 'systemType' | 'phase' | 'volumeL
  * What saving a previewed test will flag, by the evaluation the server runs on it, with the same last known
  * temperature, pH and salinity. Trend and schedule rules need the stored history, so only the server adds those.
  */
-export function previewConcerns(normalized: NormalizedWaterTest, p: { tank: PreviewTank; profile: CareProfile; lastKnown: LastKnown; now: string }): Concern[] {
+export function previewConcerns(
+  normalized: NormalizedWaterTest,
+  p: { tank: PreviewTank; profile: CareProfile; lastKnown: LastKnown; now: string },
+): Concern[] {
   const { tank } = p;
-  return evaluateReading({ id: 'preview', takenAt: normalized.takenAt || p.now, values: normalized.values }, p.profile, {
-    tank: { volumeL: tank.volumeL, phase: tank.phase, systemType: tank.systemType, hasLivestock: tank.hasLivestock },
-    history: [],
-    lastKnown: p.lastKnown,
-    now: p.now,
-  });
+  return evaluateReading(
+    { id: 'preview', takenAt: normalized.takenAt || p.now, values: normalized.values },
+    p.profile,
+    {
+      tank: {
+        volumeL: tank.volumeL,
+        phase: tank.phase,
+        systemType: tank.systemType,
+        hasLivestock: tank.hasLivestock,
+      },
+      history: [],
+      lastKnown: p.lastKnown,
+      now: p.now,
+    },
+  );
 }

@@ -10,7 +10,8 @@ const base = (clubId: string, tankId: string) => `/clubs/${clubId}/tanks/${tankI
 export function useAddLivestock(clubId: string, tankId: string) {
   const changed = useTankRecordsChanged(clubId);
   return useMutation({
-    mutationFn: (input: CreateLivestockInput) => api.post<{ livestock: LivestockView }>(base(clubId, tankId), input).then((r) => r.livestock),
+    mutationFn: (input: CreateLivestockInput) =>
+      api.post<{ livestock: LivestockView }>(base(clubId, tankId), input).then((r) => r.livestock),
     onSuccess: () => changed(tankId),
   });
 }
@@ -19,7 +20,9 @@ export function useUpdateLivestock(clubId: string, tankId: string) {
   const changed = useTankRecordsChanged(clubId);
   return useMutation({
     mutationFn: ({ id, ...input }: UpdateLivestockInput & { id: string }) =>
-      api.patch<{ livestock: LivestockView }>(`${base(clubId, tankId)}/${id}`, input).then((r) => r.livestock),
+      api
+        .patch<{ livestock: LivestockView }>(`${base(clubId, tankId)}/${id}`, input)
+        .then((r) => r.livestock),
     onSuccess: () => changed(tankId),
   });
 }

@@ -7,7 +7,10 @@ import { tankKeys } from '@client/lib/tank-keys';
 export const recentTestsQuery = (clubId: string, tankId: string) =>
   queryOptions({
     queryKey: tankKeys.recentTests(clubId, tankId),
-    queryFn: ({ signal }) => api.get<Page<WaterTestView>>(`/clubs/${clubId}/tanks/${tankId}/water-tests?limit=20`, signal).then((p) => p.items),
+    queryFn: ({ signal }) =>
+      api
+        .get<Page<WaterTestView>>(`/clubs/${clubId}/tanks/${tankId}/water-tests?limit=20`, signal)
+        .then((p) => p.items),
   });
 
 export const useRecentTests = (clubId: string, tankId: string) => useQuery(recentTestsQuery(clubId, tankId));

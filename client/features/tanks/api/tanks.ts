@@ -22,10 +22,12 @@ export const tankListQuery = (clubId: string, filters: { mine: boolean; includeA
 export const tankQuery = (clubId: string, tankId: string) =>
   queryOptions({
     queryKey: tankKeys.detail(clubId, tankId),
-    queryFn: ({ signal }) => api.get<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}`, signal).then((r) => r.tank),
+    queryFn: ({ signal }) =>
+      api.get<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}`, signal).then((r) => r.tank),
   });
 
-export const useTankList = (clubId: string, filters: { mine: boolean; includeArchived: boolean }) => useQuery(tankListQuery(clubId, filters));
+export const useTankList = (clubId: string, filters: { mine: boolean; includeArchived: boolean }) =>
+  useQuery(tankListQuery(clubId, filters));
 export const useTank = (clubId: string, tankId: string) => useQuery(tankQuery(clubId, tankId));
 
 /** After a tank changes: the answer is its new detail; its records, the lists and its care (a new phase is judged anew) refetch. */
@@ -41,7 +43,8 @@ function useTankChanged(clubId: string) {
 export function useCreateTank(clubId: string) {
   const changed = useTankChanged(clubId);
   return useMutation({
-    mutationFn: (input: CreateTankInput) => api.post<{ tank: TankDetailView }>(base(clubId), input).then((r) => r.tank),
+    mutationFn: (input: CreateTankInput) =>
+      api.post<{ tank: TankDetailView }>(base(clubId), input).then((r) => r.tank),
     onSuccess: changed,
   });
 }
@@ -49,7 +52,8 @@ export function useCreateTank(clubId: string) {
 export function useUpdateTank(clubId: string, tankId: string) {
   const changed = useTankChanged(clubId);
   return useMutation({
-    mutationFn: (input: UpdateTankInput) => api.patch<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}`, input).then((r) => r.tank),
+    mutationFn: (input: UpdateTankInput) =>
+      api.patch<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}`, input).then((r) => r.tank),
     onSuccess: changed,
   });
 }
@@ -57,7 +61,10 @@ export function useUpdateTank(clubId: string, tankId: string) {
 export function useSetArchived(clubId: string, tankId: string) {
   const changed = useTankChanged(clubId);
   return useMutation({
-    mutationFn: (archived: boolean) => api.post<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}/${archived ? 'archive' : 'restore'}`).then((r) => r.tank),
+    mutationFn: (archived: boolean) =>
+      api
+        .post<{ tank: TankDetailView }>(`${base(clubId)}/${tankId}/${archived ? 'archive' : 'restore'}`)
+        .then((r) => r.tank),
     onSuccess: changed,
   });
 }

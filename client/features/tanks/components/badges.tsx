@@ -4,7 +4,11 @@ import { Badge } from '@client/components/ui/badge';
 
 export function PhaseBadge({ phase }: { phase: TankPhase }) {
   return (
-    <Badge tone={phase === 'cycling' ? 'watch' : 'ok'} mark={phase === 'cycling' ? '↻' : '✓'} title={TANK_PHASE_LABELS[phase].hint}>
+    <Badge
+      tone={phase === 'cycling' ? 'watch' : 'ok'}
+      mark={phase === 'cycling' ? '↻' : '✓'}
+      title={TANK_PHASE_LABELS[phase].hint}
+    >
       {TANK_PHASE_LABELS[phase].label}
     </Badge>
   );

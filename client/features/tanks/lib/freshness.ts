@@ -15,7 +15,11 @@ export function shortestCadenceDays(profile: CareProfile, phase: TankPhase): num
  * How recent the last test is against the profile's rhythm: due after one cadence (plus the usual day's grace),
  * stale after LONG_OVERDUE_CADENCES of them — the same thresholds the care panel's due list uses.
  */
-export function freshness(lastTestedAt: string | null, cadenceDays: number | undefined, now = Date.now()): Freshness {
+export function freshness(
+  lastTestedAt: string | null,
+  cadenceDays: number | undefined,
+  now = Date.now(),
+): Freshness {
   if (!lastTestedAt) return 'never';
   if (cadenceDays === undefined) return 'fresh';
   const ageDays = (now - Date.parse(lastTestedAt)) / DAY_MS;

@@ -9,7 +9,23 @@ import { NitrogenChart } from './nitrogen-chart';
 import { ParameterChart, type ChartFrame } from './parameter-chart';
 
 /** A chart per parameter with readings in the period; the combined nitrogen chart first while the tank cycles. */
-export function ChartsSection({ tests, waterChanges, profile, prefs, from, now, cycling }: { tests: readonly WaterTestView[]; waterChanges: readonly TankEventView[]; profile: CareProfile | undefined; prefs: UnitPrefs; from: number | null; now: number; cycling: boolean }) {
+export function ChartsSection({
+  tests,
+  waterChanges,
+  profile,
+  prefs,
+  from,
+  now,
+  cycling,
+}: {
+  tests: readonly WaterTestView[];
+  waterChanges: readonly TankEventView[];
+  profile: CareProfile | undefined;
+  prefs: UnitPrefs;
+  from: number | null;
+  now: number;
+  cycling: boolean;
+}) {
   const times = tests.map((t) => Date.parse(t.takenAt));
   const first = times.length ? Math.min(...times) : now;
   // No empty months on the left when the records begin inside the period.
@@ -27,7 +43,15 @@ export function ChartsSection({ tests, waterChanges, profile, prefs, from, now, 
       {cycling ? <NitrogenChart tests={tests} frame={frame} /> : null}
       <div className="grid gap-4 lg:grid-cols-2">
         {charted.map((k) => (
-          <ParameterChart key={k} parameter={k} points={seriesOf(tests, k, prefs)} canonicalLatest={latest[k]!.value} profile={profile} prefs={prefs} frame={frame} />
+          <ParameterChart
+            key={k}
+            parameter={k}
+            points={seriesOf(tests, k, prefs)}
+            canonicalLatest={latest[k]!.value}
+            profile={profile}
+            prefs={prefs}
+            frame={frame}
+          />
         ))}
       </div>
     </div>

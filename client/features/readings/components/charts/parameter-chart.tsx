@@ -16,10 +16,25 @@ export interface ChartFrame {
   waterChanges: number[];
 }
 
-export const waterChangeMarkers = (frame: ChartFrame): ChartMarker[] => frame.waterChanges.map((at) => ({ at, label: 'WC', colour: CHART_COLOURS.waterChange }));
+export const waterChangeMarkers = (frame: ChartFrame): ChartMarker[] =>
+  frame.waterChanges.map((at) => ({ at, label: 'WC', colour: CHART_COLOURS.waterChange }));
 
 /** One parameter over time, the profile's ideal band shaded and its caution band faint, water changes marked. */
-export function ParameterChart({ parameter, points, canonicalLatest, profile, prefs, frame }: { parameter: ParameterKey; points: Point[]; canonicalLatest: number; profile: CareProfile | undefined; prefs: ReadingPrefs; frame: ChartFrame }) {
+export function ParameterChart({
+  parameter,
+  points,
+  canonicalLatest,
+  profile,
+  prefs,
+  frame,
+}: {
+  parameter: ParameterKey;
+  points: Point[];
+  canonicalLatest: number;
+  profile: CareProfile | undefined;
+  prefs: ReadingPrefs;
+  frame: ChartFrame;
+}) {
   const info = parameterInfo(parameter);
   const unit = displayUnit(parameter, prefs);
   const range = profile?.ranges[parameter];
@@ -36,11 +51,25 @@ export function ParameterChart({ parameter, points, canonicalLatest, profile, pr
         </h3>
         <p className="text-lg font-extrabold text-ink">{formatDisplay(parameter, canonicalLatest, prefs)}</p>
       </figcaption>
-      <ParameterLineChart parameter={parameter} points={points} prefs={prefs} range={range} span={[frame.from, frame.to]} markers={waterChangeMarkers(frame)} summary={summary} className="mt-2 h-44" />
+      <ParameterLineChart
+        parameter={parameter}
+        points={points}
+        prefs={prefs}
+        range={range}
+        span={[frame.from, frame.to]}
+        markers={waterChangeMarkers(frame)}
+        summary={summary}
+        className="mt-2 h-44"
+      />
       <div className="mt-2 space-y-1 text-sm text-ink-muted">
         {verdict ? <VerdictLine verdict={verdict} /> : null}
         <p>
-          {range ? <>{range.ideal[0] === range.ideal[1] ? 'Green line' : 'Green band'}: ideal {bandText(parameter, range.ideal, prefs)}. </> : null}
+          {range ? (
+            <>
+              {range.ideal[0] === range.ideal[1] ? 'Green line' : 'Green band'}: ideal{' '}
+              {bandText(parameter, range.ideal, prefs)}.{' '}
+            </>
+          ) : null}
           {frame.waterChanges.length ? 'Dashed lines (WC): water changes.' : null}
         </p>
       </div>

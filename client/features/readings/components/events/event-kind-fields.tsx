@@ -1,6 +1,10 @@
 import { useFormContext, useWatch } from 'react-hook-form';
 import { ENTRY_UNIT_LABELS } from '@shared/constants/reading-labels';
-import { DOSE_UNIT_LABELS, EQUIPMENT_CHANGE_LABELS, SOURCE_WATER_LABELS } from '@shared/constants/tank-labels';
+import {
+  DOSE_UNIT_LABELS,
+  EQUIPMENT_CHANGE_LABELS,
+  SOURCE_WATER_LABELS,
+} from '@shared/constants/tank-labels';
 import { convert } from '@shared/chemistry/units';
 import { NITRATE_ENTRY_UNITS, SALINITY_ENTRY_UNITS } from '@shared/readings/entry-units';
 import { SG_REFERENCE_TEMPS_C } from '@shared/readings/salinity';
@@ -13,7 +17,8 @@ import { parseDecimal } from '@client/lib/form-values';
 import { CautionFor } from '@client/components/ui/cautions';
 import { Choice } from '@client/components/ui/choice';
 
-const opts = <T extends string>(values: readonly T[], labels: Record<T, string>) => values.map((v) => ({ value: v, label: labels[v] }));
+const opts = <T extends string>(values: readonly T[], labels: Record<T, string>) =>
+  values.map((v) => ({ value: v, label: labels[v] }));
 
 export function WaterChangeFields({ prefs, tankLitres }: { prefs: UnitPrefs; tankLitres: number }) {
   const { register, formState } = useFormContext<EventDraft>();
@@ -23,8 +28,16 @@ export function WaterChangeFields({ prefs, tankLitres }: { prefs: UnitPrefs; tan
   const unit = volumeUnitOf(prefs);
   let preview: string | undefined;
   if (amount !== undefined && !Number.isNaN(amount) && amount > 0) {
-    const litres = w.by === 'volume' ? (unit === 'US gal' ? convert(amount, 'US gal', 'L') : amount) : (tankLitres * amount) / 100;
-    preview = w.by === 'volume' ? `About ${Math.round((litres / tankLitres) * 100)} % of the tank's ${formatVolume(tankLitres, prefs)}.` : `About ${formatVolume(litres, prefs)} of the tank's ${formatVolume(tankLitres, prefs)}.`;
+    const litres =
+      w.by === 'volume'
+        ? unit === 'US gal'
+          ? convert(amount, 'US gal', 'L')
+          : amount
+        : (tankLitres * amount) / 100;
+    preview =
+      w.by === 'volume'
+        ? `About ${Math.round((litres / tankLitres) * 100)} % of the tank's ${formatVolume(tankLitres, prefs)}.`
+        : `About ${formatVolume(litres, prefs)} of the tank's ${formatVolume(tankLitres, prefs)}.`;
   }
   return (
     <div className="space-y-4">
@@ -36,21 +49,62 @@ export function WaterChangeFields({ prefs, tankLitres }: { prefs: UnitPrefs; tan
           </Choice>
         ))}
       </div>
-      <TextField label={w.by === 'percent' ? 'How much was changed, %' : `How much was changed, ${unit}`} inputMode="decimal" autoComplete="off" hint={preview} error={e?.amount?.message} {...register('waterChange.amount')} />
-      <SelectField label="New water" options={opts(SOURCE_WATER_TYPES, SOURCE_WATER_LABELS)} error={e?.sourceWater?.message} {...register('waterChange.sourceWater')} />
+      <TextField
+        label={w.by === 'percent' ? 'How much was changed, %' : `How much was changed, ${unit}`}
+        inputMode="decimal"
+        autoComplete="off"
+        hint={preview}
+        error={e?.amount?.message}
+        {...register('waterChange.amount')}
+      />
+      <SelectField
+        label="New water"
+        options={opts(SOURCE_WATER_TYPES, SOURCE_WATER_LABELS)}
+        error={e?.sourceWater?.message}
+        {...register('waterChange.sourceWater')}
+      />
       <details>
-        <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">Did you test the new water? (optional)</summary>
+        <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">
+          Did you test the new water? (optional)
+        </summary>
         <div className="grid gap-3 sm:grid-cols-2">
           <div className="grid grid-cols-[1fr_auto] gap-2">
-            <TextField label="Its nitrate" inputMode="decimal" autoComplete="off" error={e?.nitrate?.message} {...register('waterChange.nitrate')} />
-            <SelectField label="Unit" options={NITRATE_ENTRY_UNITS.map((u) => ({ value: u, label: ENTRY_UNIT_LABELS[u] }))} {...register('waterChange.nitrateUnit')} />
+            <TextField
+              label="Its nitrate"
+              inputMode="decimal"
+              autoComplete="off"
+              error={e?.nitrate?.message}
+              {...register('waterChange.nitrate')}
+            />
+            <SelectField
+              label="Unit"
+              options={NITRATE_ENTRY_UNITS.map((u) => ({ value: u, label: ENTRY_UNIT_LABELS[u] }))}
+              {...register('waterChange.nitrateUnit')}
+            />
           </div>
           <div className="grid grid-cols-[1fr_auto] gap-2">
-            <TextField label="Its salinity" inputMode="decimal" autoComplete="off" error={e?.salinity?.message} {...register('waterChange.salinity')} />
-            <SelectField label="Unit" options={SALINITY_ENTRY_UNITS.map((u) => ({ value: u, label: ENTRY_UNIT_LABELS[u] }))} {...register('waterChange.salinityUnit')} />
+            <TextField
+              label="Its salinity"
+              inputMode="decimal"
+              autoComplete="off"
+              error={e?.salinity?.message}
+              {...register('waterChange.salinity')}
+            />
+            <SelectField
+              label="Unit"
+              options={SALINITY_ENTRY_UNITS.map((u) => ({ value: u, label: ENTRY_UNIT_LABELS[u] }))}
+              {...register('waterChange.salinityUnit')}
+            />
           </div>
           {w.salinityUnit === 'SG' ? (
-            <SelectField label="Refractometer's reference temperature" options={SG_REFERENCE_TEMPS_C.map((c) => ({ value: String(c), label: `${Number(c.toFixed(1))} °C` }))} {...register('waterChange.salinityRef')} />
+            <SelectField
+              label="Refractometer's reference temperature"
+              options={SG_REFERENCE_TEMPS_C.map((c) => ({
+                value: String(c),
+                label: `${Number(c.toFixed(1))} °C`,
+              }))}
+              {...register('waterChange.salinityRef')}
+            />
           ) : null}
         </div>
       </details>
@@ -64,10 +118,26 @@ export function DoseFields() {
   return (
     <div className="space-y-4">
       <CautionFor kind="dosing" title="Safety" />
-      <TextField label="Product" autoComplete="off" error={e?.product?.message} {...register('dose.product')} />
+      <TextField
+        label="Product"
+        autoComplete="off"
+        error={e?.product?.message}
+        {...register('dose.product')}
+      />
       <div className="grid grid-cols-[1fr_10rem] gap-3">
-        <TextField label="Amount" inputMode="decimal" autoComplete="off" error={e?.amount?.message} {...register('dose.amount')} />
-        <SelectField label="Unit" options={opts(DOSE_UNITS, DOSE_UNIT_LABELS)} error={e?.unit?.message} {...register('dose.unit')} />
+        <TextField
+          label="Amount"
+          inputMode="decimal"
+          autoComplete="off"
+          error={e?.amount?.message}
+          {...register('dose.amount')}
+        />
+        <SelectField
+          label="Unit"
+          options={opts(DOSE_UNITS, DOSE_UNIT_LABELS)}
+          error={e?.unit?.message}
+          {...register('dose.unit')}
+        />
       </div>
     </div>
   );
@@ -78,8 +148,19 @@ export function FeedingFields() {
   const e = formState.errors.feeding;
   return (
     <div className="grid gap-3 sm:grid-cols-2">
-      <TextField label="Food" autoComplete="off" hint="e.g. frozen mysis, new pellet brand" error={e?.food?.message} {...register('feeding.food')} />
-      <TextField label="How much (optional)" autoComplete="off" error={e?.amount?.message} {...register('feeding.amount')} />
+      <TextField
+        label="Food"
+        autoComplete="off"
+        hint="e.g. frozen mysis, new pellet brand"
+        error={e?.food?.message}
+        {...register('feeding.food')}
+      />
+      <TextField
+        label="How much (optional)"
+        autoComplete="off"
+        error={e?.amount?.message}
+        {...register('feeding.amount')}
+      />
     </div>
   );
 }
@@ -90,8 +171,19 @@ export function EquipmentFields() {
   return (
     <div className="space-y-4">
       <div className="grid gap-3 sm:grid-cols-2">
-        <TextField label="Which equipment" autoComplete="off" hint="e.g. heater, return pump, skimmer" error={e?.equipment?.message} {...register('equipment.equipment')} />
-        <SelectField label="What happened" options={opts(EQUIPMENT_CHANGES, EQUIPMENT_CHANGE_LABELS)} error={e?.change?.message} {...register('equipment.change')} />
+        <TextField
+          label="Which equipment"
+          autoComplete="off"
+          hint="e.g. heater, return pump, skimmer"
+          error={e?.equipment?.message}
+          {...register('equipment.equipment')}
+        />
+        <SelectField
+          label="What happened"
+          options={opts(EQUIPMENT_CHANGES, EQUIPMENT_CHANGE_LABELS)}
+          error={e?.change?.message}
+          {...register('equipment.change')}
+        />
       </div>
       <CautionFor kind="electricity" title="Safety" />
     </div>

@@ -1,5 +1,9 @@
 import { useFormContext } from 'react-hook-form';
-import { OBSERVATION_CHECK_LABELS, OBSERVATION_SCALE_LABELS, OBSERVATION_VALUE_LABELS } from '@shared/constants/tank-labels';
+import {
+  OBSERVATION_CHECK_LABELS,
+  OBSERVATION_SCALE_LABELS,
+  OBSERVATION_VALUE_LABELS,
+} from '@shared/constants/tank-labels';
 import { OBSERVATION_CHECKS, OBSERVATION_SCALES } from '@shared/schemas/tank-event.schema';
 import type { LivestockView } from '@shared/schemas/tank-views';
 import { TextField } from '@client/components/ui/field';
@@ -15,8 +19,19 @@ export function ObservationFields({ livestock }: { livestock: LivestockView[] })
   const names = livestock.filter((l) => !l.removedOn).map((l) => l.speciesCommonName);
   return (
     <div className="space-y-4">
-      <TextField label="Which animals (optional)" autoComplete="off" list="observation-animals" hint={names.length ? 'Pick from your tank or type.' : undefined} error={e?.animal?.message} {...register('observation.animal')} />
-      <datalist id="observation-animals">{names.map((n) => <option key={n} value={n} />)}</datalist>
+      <TextField
+        label="Which animals (optional)"
+        autoComplete="off"
+        list="observation-animals"
+        hint={names.length ? 'Pick from your tank or type.' : undefined}
+        error={e?.animal?.message}
+        {...register('observation.animal')}
+      />
+      <datalist id="observation-animals">
+        {names.map((n) => (
+          <option key={n} value={n} />
+        ))}
+      </datalist>
       {SCALES.map((s) => (
         <fieldset key={s}>
           <legend className="text-sm font-bold text-ink-soft">{OBSERVATION_SCALE_LABELS[s]}</legend>
@@ -29,13 +44,27 @@ export function ObservationFields({ livestock }: { livestock: LivestockView[] })
           </div>
         </fieldset>
       ))}
-      <TextField label="Breaths (gill beats) a minute (optional)" inputMode="numeric" autoComplete="off" hint="Count for 15 seconds and multiply by 4." error={e?.breathsPerMinute?.message} {...register('observation.breathsPerMinute')} />
+      <TextField
+        label="Breaths (gill beats) a minute (optional)"
+        inputMode="numeric"
+        autoComplete="off"
+        hint="Count for 15 seconds and multiply by 4."
+        error={e?.breathsPerMinute?.message}
+        {...register('observation.breathsPerMinute')}
+      />
       <fieldset>
         <legend className="text-sm font-bold text-ink-soft">Also seen</legend>
         <div className="mt-1 grid gap-1 sm:grid-cols-2">
           {OBSERVATION_CHECKS.map((c) => (
-            <label key={c} className="flex min-h-touch cursor-pointer items-center gap-3 rounded-xl px-2 hover:bg-tint">
-              <input type="checkbox" className="size-5 accent-accent" {...register(`observation.checks.${c}`)} />
+            <label
+              key={c}
+              className="flex min-h-touch cursor-pointer items-center gap-3 rounded-xl px-2 hover:bg-tint"
+            >
+              <input
+                type="checkbox"
+                className="size-5 accent-accent"
+                {...register(`observation.checks.${c}`)}
+              />
               <span className="text-ink">{OBSERVATION_CHECK_LABELS[c]}</span>
             </label>
           ))}

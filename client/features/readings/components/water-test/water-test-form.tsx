@@ -53,16 +53,37 @@ export interface WaterTestFormProps {
  * store, and saving through `useSaveWaterTest` (the server's field errors land on the fields; a failed photo can be
  * sent again on its own).
  */
-export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial, memory, editing, submitLabel = 'Save test', firstReadings = NONE, onSaved }: WaterTestFormProps) {
+export function WaterTestForm({
+  clubId,
+  tank,
+  lastKnown,
+  profile,
+  prefs,
+  initial,
+  memory,
+  editing,
+  submitLabel = 'Save test',
+  firstReadings = NONE,
+  onSaved,
+}: WaterTestFormProps) {
   const testId = editing?.id;
   const ctx = useMemo<Omit<NormalizeContext, 'now'>>(
-    () => ({ systemType: tank.systemType, careProfileKey: tank.careProfileKey, profile, lastKnown, ...(testId ? { testId } : {}) }),
+    () => ({
+      systemType: tank.systemType,
+      careProfileKey: tank.careProfileKey,
+      profile,
+      lastKnown,
+      ...(testId ? { testId } : {}),
+    }),
     [tank.systemType, tank.careProfileKey, lastKnown, profile, testId],
   );
   const resolver = useMemo(
     () =>
-      schemaResolver<WaterTestDraft, typeof createWaterTestSchema>(createWaterTestSchema, (v) => draftToInput(v, prefs), waterTestFieldOf, (parsed) =>
-        normalizeWaterTest(parsed, { ...ctx, now: new Date().toISOString() }).errors,
+      schemaResolver<WaterTestDraft, typeof createWaterTestSchema>(
+        createWaterTestSchema,
+        (v) => draftToInput(v, prefs),
+        waterTestFieldOf,
+        (parsed) => normalizeWaterTest(parsed, { ...ctx, now: new Date().toISOString() }).errors,
       ),
     [ctx, prefs],
   );
@@ -77,7 +98,9 @@ export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial
     return [...firstReadings, ...usual.filter((k) => !firstReadings.includes(k))];
   }, [initial, memory, profile, tank.phase, firstReadings]);
   const [showAll, setShowAll] = useState(false);
-  const shown: ParameterKey[] = showAll ? [...first, ...PARAMETER_KEYS.filter((k) => !first.includes(k))] : first;
+  const shown: ParameterKey[] = showAll
+    ? [...first, ...PARAMETER_KEYS.filter((k) => !first.includes(k))]
+    : first;
   const hidden = PARAMETER_KEYS.length - first.length;
 
   const [photos, setPhotos] = useState<File[]>([]);
@@ -88,37 +111,85 @@ export function WaterTestForm({ clubId, tank, lastKnown, profile, prefs, initial
 
   // Without photos once the readings are stored and their photo failed: "carry on without it".
   const submit = (withPhotos: boolean) =>
-    form.handleSubmit((values) => attempt(async () => onSaved(await save(values, withPhotos ? photos : [], form.getValues()))));
+    form.handleSubmit((values) =>
+      attempt(async () => onSaved(await save(values, withPhotos ? photos : [], form.getValues()))),
+    );
 
   return (
     <FormProvider {...form}>
       <form noValidate onSubmit={submit(true)} className="space-y-4">
         {formError ? <Notice tone="error">{formError}</Notice> : null}
-        {form.formState.errors.root?.message ? <Notice tone="error">{form.formState.errors.root.message}</Notice> : null}
+        {form.formState.errors.root?.message ? (
+          <Notice tone="error">{form.formState.errors.root.message}</Notice>
+        ) : null}
         <fieldset disabled={photoError !== undefined} className="space-y-4">
           <div className="grid gap-3 sm:grid-cols-2">
-            <TextField label="When you tested" type="datetime-local" error={form.formState.errors.takenAt?.message ?? preview.fieldErrors.takenAt} {...form.register('takenAt')} />
+            <TextField
+              label="When you tested"
+              type="datetime-local"
+              error={form.formState.errors.takenAt?.message ?? preview.fieldErrors.takenAt}
+              {...form.register('takenAt')}
+            />
           </div>
           {shown.map((k) => (
-            <ParameterField key={k} parameter={k} prefs={prefs} profile={profile} normalized={preview.normalized} liveErrors={preview.fieldErrors} />
+            <ParameterField
+              key={k}
+              parameter={k}
+              prefs={prefs}
+              profile={profile}
+              normalized={preview.normalized}
+              liveErrors={preview.fieldErrors}
+            />
           ))}
           {hidden > 0 ? (
-            <Button type="button" variant="secondary" className="w-full" aria-expanded={showAll} onClick={() => setShowAll((s) => !s)}>
+            <Button
+              type="button"
+              variant="secondary"
+              className="w-full"
+              aria-expanded={showAll}
+              onClick={() => setShowAll((s) => !s)}
+            >
               {showAll ? 'Show only my usual readings' : `More readings (${hidden})`}
             </Button>
           ) : null}
-          <ConcernPreview tank={tank} profile={profile} normalized={preview.normalized} lastKnown={lastKnown} />
-          <TextAreaField label="Anything else about this test? (optional)" rows={2} error={form.formState.errors.note?.message} {...form.register('note')} />
+          <ConcernPreview
+            tank={tank}
+            profile={profile}
+            normalized={preview.normalized}
+            lastKnown={lastKnown}
+          />
+          <TextAreaField
+            label="Anything else about this test? (optional)"
+            rows={2}
+            error={form.formState.errors.note?.message}
+            {...form.register('note')}
+          />
         </fieldset>
-        <PhotoPicker label="Photo (optional)" hint="For example the colour card next to the test tube, in daylight." files={photos} onChange={setPhotos} />
+        <PhotoPicker
+          label="Photo (optional)"
+          hint="For example the colour card next to the test tube, in daylight."
+          files={photos}
+          onChange={setPhotos}
+        />
         {photoError !== undefined ? (
-          <PhotoRetry saved="Your readings are saved." error={photoError} busy={form.formState.isSubmitting} onSkip={submit(false)} />
+          <PhotoRetry
+            saved="Your readings are saved."
+            error={photoError}
+            busy={form.formState.isSubmitting}
+            onSkip={submit(false)}
+          />
         ) : (
           <div className="sticky bottom-16 z-10 -mx-4 border-t border-line bg-surface/95 px-4 py-3 backdrop-blur sm:bottom-0 sm:mx-0 sm:rounded-card sm:border-0 sm:shadow-card">
             <p className="mb-2 text-sm text-ink-muted" aria-live="polite">
-              {liveProblems ? `Fix ${liveProblems === 1 ? 'the reading' : `${liveProblems} readings`} marked in red first.` : filledCount ? `${filledCount} ${filledCount === 1 ? 'reading' : 'readings'} ready to save.` : 'Enter at least one reading.'}
+              {liveProblems
+                ? `Fix ${liveProblems === 1 ? 'the reading' : `${liveProblems} readings`} marked in red first.`
+                : filledCount
+                  ? `${filledCount} ${filledCount === 1 ? 'reading' : 'readings'} ready to save.`
+                  : 'Enter at least one reading.'}
             </p>
-            <Button type="submit" className="min-h-14 w-full text-lg" busy={form.formState.isSubmitting}>{submitLabel}</Button>
+            <Button type="submit" className="min-h-14 w-full text-lg" busy={form.formState.isSubmitting}>
+              {submitLabel}
+            </Button>
           </div>
         )}
       </form>

@@ -24,7 +24,8 @@ const FRESHNESS_TONE: Record<Freshness, string> = {
 };
 
 function LastTested({ at, level }: { at: string | null; level: Freshness }) {
-  if (!at) return <p className={`text-sm font-bold ${FRESHNESS_TONE.never}`}>No tests yet: log the first one.</p>;
+  if (!at)
+    return <p className={`text-sm font-bold ${FRESHNESS_TONE.never}`}>No tests yet: log the first one.</p>;
   const word = level === 'stale' ? ' · overdue for a test' : level === 'due' ? ' · a test is due' : '';
   return (
     <p className={`flex items-center gap-1.5 text-sm font-bold ${FRESHNESS_TONE[level]}`}>
@@ -38,18 +39,31 @@ function LastTested({ at, level }: { at: string | null; level: Freshness }) {
 }
 
 /** One tank in the list: its latest figures in the member's units and how long since the last test. */
-export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: UnitPrefs; showOwner: boolean }) {
+export function TankCard({
+  tank,
+  prefs,
+  showOwner,
+}: {
+  tank: TankView;
+  prefs: UnitPrefs;
+  showOwner: boolean;
+}) {
   const recent = useRecentTests(tank.clubId, tank.id);
   const profile = useTankProfile(tank.clubId, tank);
   const latest = latestValues(recent.data ?? []);
   const lastAt = recent.data?.[0]?.takenAt ?? null;
   // While cycling, the nitrogen figures are the story; afterwards the parameters in their usual order.
-  const order: readonly ParameterKey[] = tank.phase === 'cycling' ? [...CYCLE_FIRST, ...PARAMETER_KEYS.filter((k) => !CYCLE_FIRST.includes(k))] : PARAMETER_KEYS;
+  const order: readonly ParameterKey[] =
+    tank.phase === 'cycling'
+      ? [...CYCLE_FIRST, ...PARAMETER_KEYS.filter((k) => !CYCLE_FIRST.includes(k))]
+      : PARAMETER_KEYS;
   const figures = order.filter((k) => latest[k]).slice(0, FIGURES);
   const level = freshness(lastAt, shortestCadenceDays(profile, tank.phase));
 
   return (
-    <li className={`rounded-card shadow-card ring-focus focus-within:ring-2 ${tank.archivedAt ? 'bg-tint' : 'bg-surface'}`}>
+    <li
+      className={`rounded-card shadow-card ring-focus focus-within:ring-2 ${tank.archivedAt ? 'bg-tint' : 'bg-surface'}`}
+    >
       <Link to={`/tanks/${tank.id}`} className="block p-4 sm:p-5">
         <div className="flex flex-wrap items-start justify-between gap-2">
           <div>
@@ -57,7 +71,9 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
             <p className="text-sm text-ink-muted">
               {SYSTEM_TYPE_LABELS[tank.systemType]} · {formatVolume(tank.volumeL, prefs)}
             </p>
-            {showOwner ? <p className="text-sm font-semibold text-ink-muted">Kept by {tank.owner.displayName}</p> : null}
+            {showOwner ? (
+              <p className="text-sm font-semibold text-ink-muted">Kept by {tank.owner.displayName}</p>
+            ) : null}
           </div>
           <div className="flex gap-1">
             {tank.archivedAt ? <ArchivedBadge /> : null}
@@ -66,7 +82,9 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
         </div>
         {recent.isPending ? (
           <div className="mt-3 grid grid-cols-2 gap-2">
-            {[0, 1, 2, 3].map((i) => <Skeleton key={i} className="h-11" />)}
+            {[0, 1, 2, 3].map((i) => (
+              <Skeleton key={i} className="h-11" />
+            ))}
           </div>
         ) : figures.length ? (
           <dl className="mt-3 grid grid-cols-2 gap-2">
@@ -76,7 +94,9 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
               return (
                 <div key={k} className="rounded-lg bg-tint px-3 py-1.5">
                   <dt className="truncate text-xs font-bold text-ink-muted">{parameterInfo(k).label}</dt>
-                  <dd className={`flex items-center gap-1 font-extrabold ${verdict ? verdictTone(verdict.level) : 'text-ink'}`}>
+                  <dd
+                    className={`flex items-center gap-1 font-extrabold ${verdict ? verdictTone(verdict.level) : 'text-ink'}`}
+                  >
                     {verdict ? <VerdictIcon level={verdict.level} direction={verdict.direction} /> : null}
                     <span className="text-ink">{formatDisplay(k, v, prefs)}</span>
                     {verdict ? <span className="sr-only">{verdict.text}</span> : null}
@@ -86,7 +106,13 @@ export function TankCard({ tank, prefs, showOwner }: { tank: TankView; prefs: Un
             })}
           </dl>
         ) : null}
-        <div className="mt-3">{recent.isError ? <p className="text-sm text-danger">Could not load the latest tests.</p> : recent.isPending ? null : <LastTested at={lastAt} level={level} />}</div>
+        <div className="mt-3">
+          {recent.isError ? (
+            <p className="text-sm text-danger">Could not load the latest tests.</p>
+          ) : recent.isPending ? null : (
+            <LastTested at={lastAt} level={level} />
+          )}
+        </div>
       </Link>
     </li>
   );
@@ -101,7 +127,9 @@ export function TankListSkeleton() {
             <Skeleton className="h-5 w-2/3" />
             <Skeleton className="mt-2 h-4 w-1/2" />
             <div className="mt-4 grid grid-cols-2 gap-2">
-              {[0, 1, 2, 3].map((j) => <Skeleton key={j} className="h-11" />)}
+              {[0, 1, 2, 3].map((j) => (
+                <Skeleton key={j} className="h-11" />
+              ))}
             </div>
           </div>
         ))}

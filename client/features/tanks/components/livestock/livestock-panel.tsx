@@ -22,13 +22,27 @@ function Animal({ a, editable, onLeave }: { a: LivestockView; editable: boolean;
         </p>
         {a.quarantineNotes ? <p className="text-sm text-ink-muted">Quarantine: {a.quarantineNotes}</p> : null}
       </div>
-      {editable && onLeave ? <Button variant="ghost" onClick={onLeave}>They left…</Button> : null}
+      {editable && onLeave ? (
+        <Button variant="ghost" onClick={onLeave}>
+          They left…
+        </Button>
+      ) : null}
     </div>
   );
 }
 
 /** The animals in the tank now (and those that left), with adding and recording departures for the owner. */
-export function LivestockPanel({ clubId, tankId, livestock, editable }: { clubId: string; tankId: string; livestock: LivestockView[]; editable: boolean }) {
+export function LivestockPanel({
+  clubId,
+  tankId,
+  livestock,
+  editable,
+}: {
+  clubId: string;
+  tankId: string;
+  livestock: LivestockView[];
+  editable: boolean;
+}) {
   const add = useAddLivestock(clubId, tankId);
   const update = useUpdateLivestock(clubId, tankId);
   const [adding, setAdding] = useState(false);
@@ -37,7 +51,11 @@ export function LivestockPanel({ clubId, tankId, livestock, editable }: { clubId
   const past = livestock.filter((l) => l.removedOn);
   return (
     <div className="space-y-3">
-      {current.length === 0 ? <p className="text-ink-muted">No animals recorded. Cycle the tank fully before the first ones go in.</p> : null}
+      {current.length === 0 ? (
+        <p className="text-ink-muted">
+          No animals recorded. Cycle the tank fully before the first ones go in.
+        </p>
+      ) : null}
       <ul className="divide-y divide-line">
         {current.map((a) => (
           <li key={a.id} className="py-3">
@@ -65,14 +83,22 @@ export function LivestockPanel({ clubId, tankId, livestock, editable }: { clubId
             }}
           />
         ) : (
-          <Button variant="secondary" onClick={() => setAdding(true)}>Add animals</Button>
+          <Button variant="secondary" onClick={() => setAdding(true)}>
+            Add animals
+          </Button>
         )
       ) : null}
       {past.length ? (
         <details>
-          <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">Animals that have left ({past.length})</summary>
+          <summary className="flex min-h-touch cursor-pointer items-center text-sm font-bold text-ink-muted">
+            Animals that have left ({past.length})
+          </summary>
           <ul className="divide-y divide-line">
-            {past.map((a) => <li key={a.id} className="py-2"><Animal a={a} editable={false} /></li>)}
+            {past.map((a) => (
+              <li key={a.id} className="py-2">
+                <Animal a={a} editable={false} />
+              </li>
+            ))}
           </ul>
         </details>
       ) : null}

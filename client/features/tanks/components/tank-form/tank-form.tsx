@@ -28,8 +28,25 @@ export type TankOutput = z.output<typeof createTankSchema>;
  * New or edited tank (`tankId` given), checked with the shared tank schema before anything is sent, then saved with
  * its photo; `onSaved` gets the stored tank.
  */
-export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved }: { clubId: string; tankId?: string; prefs: UnitPrefs; initial: TankDraft; submitLabel: string; onSaved: (tank: TankDetailView) => void }) {
-  const resolver = useMemo(() => schemaResolver<TankDraft, typeof createTankSchema>(createTankSchema, tankDraftToInput, tankFieldOf), []);
+export function TankForm({
+  clubId,
+  tankId,
+  prefs,
+  initial,
+  submitLabel,
+  onSaved,
+}: {
+  clubId: string;
+  tankId?: string;
+  prefs: UnitPrefs;
+  initial: TankDraft;
+  submitLabel: string;
+  onSaved: (tank: TankDetailView) => void;
+}) {
+  const resolver = useMemo(
+    () => schemaResolver<TankDraft, typeof createTankSchema>(createTankSchema, tankDraftToInput, tankFieldOf),
+    [],
+  );
   const form = useForm<TankDraft, unknown, TankOutput>({ defaultValues: initial, resolver });
   const { register, formState, setValue } = form;
   const systemType = useWatch({ control: form.control, name: 'systemType' });
@@ -43,12 +60,14 @@ export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved 
   const systemField = register('systemType', {
     onChange: (ev: { target: { value: SystemType } }) => {
       const chosen = profiles.data?.profiles.find((p) => p.key === form.getValues('careProfileKey'));
-      if (!chosen?.systemTypes.includes(ev.target.value)) setValue('careProfileKey', defaultProfileFor(ev.target.value).key);
+      if (!chosen?.systemTypes.includes(ev.target.value))
+        setValue('careProfileKey', defaultProfileFor(ev.target.value).key);
     },
   });
 
   // Without photos once the tank is stored and its photo failed: "carry on without it".
-  const submit = (withPhotos: boolean) => form.handleSubmit((values) => attempt(async () => onSaved(await save(values, withPhotos ? photos : []))));
+  const submit = (withPhotos: boolean) =>
+    form.handleSubmit((values) => attempt(async () => onSaved(await save(values, withPhotos ? photos : []))));
 
   return (
     <FormProvider {...form}>
@@ -57,12 +76,31 @@ export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved 
         {e.root?.message ? <Notice tone="error">{e.root.message}</Notice> : null}
         <fieldset disabled={photoError !== undefined} className="space-y-6">
           <div className="grid gap-4 sm:grid-cols-2">
-            <TextField label="Name" autoComplete="off" hint="Whatever you call it, e.g. Living-room reef." error={e.name?.message} {...register('name')} />
-            <SelectField label="Kind of tank" options={SYSTEM_TYPES.map((t) => ({ value: t, label: SYSTEM_TYPE_LABELS[t] }))} error={e.systemType?.message} {...systemField} />
+            <TextField
+              label="Name"
+              autoComplete="off"
+              hint="Whatever you call it, e.g. Living-room reef."
+              error={e.name?.message}
+              {...register('name')}
+            />
+            <SelectField
+              label="Kind of tank"
+              options={SYSTEM_TYPES.map((t) => ({ value: t, label: SYSTEM_TYPE_LABELS[t] }))}
+              error={e.systemType?.message}
+              {...systemField}
+            />
             <SelectField
               label="Care profile"
               hint="The ideal ranges your readings are checked against. Your club may have its own."
-              options={(suitable.length ? suitable : [{ key: form.getValues('careProfileKey'), name: profiles.isPending ? 'Loading…' : form.getValues('careProfileKey') }]).map((p) => ({
+              options={(suitable.length
+                ? suitable
+                : [
+                    {
+                      key: form.getValues('careProfileKey'),
+                      name: profiles.isPending ? 'Loading…' : form.getValues('careProfileKey'),
+                    },
+                  ]
+              ).map((p) => ({
                 value: p.key,
                 label: p.key === defaultProfileFor(systemType).key ? `${p.name} (usual)` : p.name,
               }))}
@@ -72,14 +110,30 @@ export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved 
           </div>
           <VolumeFields prefs={prefs} />
           <fieldset className="space-y-3">
-            <legend className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">Where it is at</legend>
+            <legend className="text-sm font-extrabold uppercase tracking-wide text-ink-muted">
+              Where it is at
+            </legend>
             <div className="grid gap-4 sm:grid-cols-2">
-              <TextField label="Set up on (optional)" type="date" max={todayIsoDate()} error={e.setUpOn?.message} {...register('setUpOn')} />
+              <TextField
+                label="Set up on (optional)"
+                type="date"
+                max={todayIsoDate()}
+                error={e.setUpOn?.message}
+                {...register('setUpOn')}
+              />
             </div>
             <div role="radiogroup" aria-label="Cycling or established" className="grid gap-2 sm:grid-cols-2">
               {TANK_PHASES.map((p) => (
-                <label key={p} className="flex min-h-touch cursor-pointer gap-3 rounded-xl p-3 ring-1 ring-line-strong has-[:checked]:bg-tint has-[:checked]:ring-2 has-[:checked]:ring-focus">
-                  <input type="radio" value={p} className="mt-1 size-5 accent-accent" {...register('phase')} />
+                <label
+                  key={p}
+                  className="flex min-h-touch cursor-pointer gap-3 rounded-xl p-3 ring-1 ring-line-strong has-[:checked]:bg-tint has-[:checked]:ring-2 has-[:checked]:ring-focus"
+                >
+                  <input
+                    type="radio"
+                    value={p}
+                    className="mt-1 size-5 accent-accent"
+                    {...register('phase')}
+                  />
                   <span>
                     <span className="block font-bold text-ink">{TANK_PHASE_LABELS[p].label}</span>
                     <span className="block text-sm text-ink-muted">{TANK_PHASE_LABELS[p].hint}</span>
@@ -89,15 +143,27 @@ export function TankForm({ clubId, tankId, prefs, initial, submitLabel, onSaved 
             </div>
           </fieldset>
           <div className="space-y-2">
-            <TextAreaField label="Equipment notes (optional)" hint="Heater, filter, lights, pumps, skimmer: what runs and when it was last serviced." error={e.equipmentNotes?.message} {...register('equipmentNotes')} />
+            <TextAreaField
+              label="Equipment notes (optional)"
+              hint="Heater, filter, lights, pumps, skimmer: what runs and when it was last serviced."
+              error={e.equipmentNotes?.message}
+              {...register('equipmentNotes')}
+            />
             <CautionFor kind="electricity" title="Safety" />
           </div>
         </fieldset>
         <PhotoPicker label="Photo of the tank (optional)" files={photos} onChange={setPhotos} />
         {photoError !== undefined ? (
-          <PhotoRetry saved="The tank is saved." error={photoError} busy={formState.isSubmitting} onSkip={submit(false)} />
+          <PhotoRetry
+            saved="The tank is saved."
+            error={photoError}
+            busy={formState.isSubmitting}
+            onSkip={submit(false)}
+          />
         ) : (
-          <Button type="submit" className="w-full sm:w-auto" busy={formState.isSubmitting}>{submitLabel}</Button>
+          <Button type="submit" className="w-full sm:w-auto" busy={formState.isSubmitting}>
+            {submitLabel}
+          </Button>
         )}
       </form>
     </FormProvider>
