@@ -47,14 +47,12 @@ export async function assignMentor(
   mentee: User,
   endedAt: Date | null = null,
 ) {
-  return ds
-    .getRepository(MentorAssignment)
-    .save({
-      clubId: club.id,
-      mentorId: mentor.id,
-      menteeId: mentee.id,
-      startedAt: new Date(Date.now() - 90 * DAY_MS),
-      endedAt,
-      createdById: null,
-    });
+  return ds.getRepository(MentorAssignment).save({
+    clubId: club.id,
+    mentorId: mentor.id,
+    menteeId: mentee.id,
+    startedAt: new Date(Date.now() - 90 * DAY_MS),
+    endedAt,
+    createdById: null,
+  });
 }

@@ -177,14 +177,12 @@ export function fuzzCaseArbitrary(valid: ValidRequest): fc.Arbitrary<FuzzCase> {
   }
   choices.push({
     weight: hasBody ? 2 : 6,
-    arbitrary: fc
-      .array(queryPair, { minLength: 1, maxLength: 4 })
-      .map((pairs) =>
-        build({
-          mutation: `query ${pairs.map(([k]) => k).join(',')}`,
-          extraQuery: pairs.map(([k, v]) => `${percentEncode(k)}=${v}`).join('&'),
-        }),
-      ),
+    arbitrary: fc.array(queryPair, { minLength: 1, maxLength: 4 }).map((pairs) =>
+      build({
+        mutation: `query ${pairs.map(([k]) => k).join(',')}`,
+        extraQuery: pairs.map(([k, v]) => `${percentEncode(k)}=${v}`).join('&'),
+      }),
+    ),
   });
   choices.push({
     weight: 1,
@@ -220,27 +218,23 @@ export function fuzzCaseArbitrary(valid: ValidRequest): fc.Arbitrary<FuzzCase> {
   if (fields.length) {
     choices.push({
       weight: 8,
-      arbitrary: fc
-        .tuple(fc.constantFrom(...fields), hostileValue)
-        .map(([field, value]) =>
-          build({
-            mutation: `field ${field} set`,
-            field,
-            body: { json: setAt(body, field, (parent, key) => (parent[key] = value)) },
-          }),
-        ),
+      arbitrary: fc.tuple(fc.constantFrom(...fields), hostileValue).map(([field, value]) =>
+        build({
+          mutation: `field ${field} set`,
+          field,
+          body: { json: setAt(body, field, (parent, key) => (parent[key] = value)) },
+        }),
+      ),
     });
     choices.push({
       weight: 2,
-      arbitrary: fc
-        .constantFrom(...fields)
-        .map((field) =>
-          build({
-            mutation: `field ${field} dropped`,
-            field,
-            body: { json: setAt(body, field, (parent, key) => delete parent[key]) },
-          }),
-        ),
+      arbitrary: fc.constantFrom(...fields).map((field) =>
+        build({
+          mutation: `field ${field} dropped`,
+          field,
+          body: { json: setAt(body, field, (parent, key) => delete parent[key]) },
+        }),
+      ),
     });
   }
   if (strings.length) {
